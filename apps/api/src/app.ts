@@ -1,0 +1,76 @@
+import { existsSync } from 'node:fs';
+import path from 'node:path';
+import express, { type Express } from 'express';
+import helmet from 'helmet';
+import type { Redis } from 'ioredis';
+import type { Knex } from 'knex';
+import type { Logger } from 'pino';
+import { pinoHttp } from 'pino-http';
+import { createLoginLimiter } from './auth/loginLimiter';
+import { createPassport } from './auth/passport';
+import type { Config } from './config';
+import { errorHandler, notFoundHandler } from './middleware/errorHandler';
+import { requireAuth as requireAuthWith } from './middleware/requireAuth';
+import { authRoutes } from './routes/authRoutes';
+import { healthRoutes } from './routes/healthRoutes';
+import { invitationRoutes } from './routes/invitationRoutes';
+import { meRoutes } from './routes/meRoutes';
+import { pressRoutes } from './routes/pressRoutes';
+import { userRoutes } from './routes/userRoutes';
+import type { EmailDispatcher } from './services/deps';
+import { createServices } from './services';
+
+export interface AppDeps {
+  config: Config;
+  knex: Knex;
+  redis: Redis;
+  logger: Logger;
+  emails: EmailDispatcher;
+}
+
+export function createApp(deps: AppDeps): Express {
+  const { config, knex, redis, logger } = deps;
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('trust proxy', process.env.TRUST_PROXY ?? 'loopback');
+  app.use(
+    helmet({
+      contentSecurityPolicy: { directives: { 'upgrade-insecure-requests': null } },
+      strictTransportSecurity: config.appUrl.startsWith('https:'),
+    }),
+  );
+  if (process.env.NODE_ENV !== 'test') app.use(
+      pinoHttp({
+        logger,
+        redact: ['req.headers.authorization', 'req.headers.cookie'],
+        autoLogging: { ignore: (req) => req.url === '/api/health' },
+      }),
+    );
+
+  const services = createServices(deps, createLoginLimiter(redis, config.login));
+  const requireAuth = requireAuthWith(createPassport(config.jwtSecret, knex));
+
+  const api = express.Router();
+  api.use(express.json({ limit: '100kb' }));
+  api.use('/health', healthRoutes(knex, redis));
+  api.use('/auth', authRoutes(services, requireAuth));
+  api.use('/me', meRoutes(services, requireAuth));
+  api.use('/users', userRoutes(services, requireAuth));
+  api.use('/invitations', invitationRoutes(services, requireAuth));
+  api.use('/presses', pressRoutes(services, requireAuth));
+  api.use(notFoundHandler);
+  app.use('/api', api);
+
+  // The built web app, with every other path answered by its index page (client-side routes).
+  if (config.webDist && existsSync(path.join(config.webDist, 'index.html'))) {
+    const dist = config.webDist;
+    app.use(express.static(dist, { index: false, maxAge: '1h' }));
+    app.use((req, res, next) => {
+      if (req.method !== 'GET' && req.method !== 'HEAD') return next();
+      res.set('Cache-Control', 'no-cache').sendFile(path.join(dist, 'index.html'));
+    });
+  }
+
+  app.use(errorHandler(logger));
+  return app;
+}

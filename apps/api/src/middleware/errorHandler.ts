@@ -1,0 +1,59 @@
+import type { ErrorRequestHandler, RequestHandler } from 'express';
+import type { Logger } from 'pino';
+import { HttpError } from '../lib/httpError';
+
+// Errors of a database or queue that is down or restarting, by node or PostgreSQL code.
+const UNAVAILABLE_CODES = new Set([
+  'ECONNREFUSED',
+  'ECONNRESET',
+  'ETIMEDOUT',
+  'EPIPE',
+  '57P01', // admin_shutdown
+  '57P02', // crash_shutdown
+  '57P03', // cannot_connect_now
+  '08000',
+  '08003',
+  '08006',
+]);
+
+function isUnavailable(error: unknown): boolean {
+  const e = error as { code?: string; message?: string; name?: string };
+  if (e.code && UNAVAILABLE_CODES.has(e.code)) return true;
+  if (e.name === 'KnexTimeoutError') return true;
+  return /Connection terminated|connection is closed|Timeout acquiring a connection/i.test(e.message ?? '');
+}
+
+export function errorHandler(logger: Logger): ErrorRequestHandler {
+  return (error, _req, res, _next) => {
+    if (res.headersSent) return;
+    if (error instanceof HttpError) {
+      if (error.headers) res.set(error.headers);
+      res.status(error.status).json({ error: { code: error.code, message: error.message, fields: error.fields } });
+      return;
+    }
+    // body-parser's own errors carry a status and a type.
+    const type = (error as { type?: string }).type;
+    if (type === 'entity.too.large') {
+      res.status(413).json({ error: { code: 'payload_too_large', message: 'The request body is too large.' } });
+      return;
+    }
+    if (type === 'entity.parse.failed') {
+      res.status(400).json({ error: { code: 'malformed_json', message: 'The request body is not valid JSON.' } });
+      return;
+    }
+    if (isUnavailable(error)) {
+      logger.warn({ err: error }, 'a backing service is unavailable');
+      res
+        .status(503)
+        .set('Retry-After', '5')
+        .json({ error: { code: 'service_unavailable', message: 'Kerfmark is briefly unavailable. Try again in a few seconds.' } });
+      return;
+    }
+    logger.error({ err: error }, 'unhandled error');
+    res.status(500).json({ error: { code: 'internal', message: 'Something went wrong on our side. It has been logged.' } });
+  };
+}
+
+export const notFoundHandler: RequestHandler = (_req, res) => {
+  res.status(404).json({ error: { code: 'not_found', message: 'No such API route.' } });
+};

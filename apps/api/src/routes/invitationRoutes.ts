@@ -1,0 +1,38 @@
+import { Router, type RequestHandler } from 'express';
+import { z } from 'zod';
+import { InvitationAccept } from '@kerfmark/contracts';
+import { parse, parseId } from '../lib/parse';
+import { allow } from '../middleware/allow';
+import type { Services } from '../services';
+
+const PreviewQuery = z.object({ token: z.string({ error: 'The invitation link is incomplete' }).min(20).max(200) });
+
+export function invitationRoutes(services: Services, requireAuth: RequestHandler): Router {
+  const router = Router();
+  const adminOnly = [requireAuth, allow({ roles: ['admin'] })];
+
+  // Public: the invitee has no account yet; the token is the credential.
+  router.get('/preview', async (req, res) => {
+    const { token } = parse(PreviewQuery, req.query);
+    res.json(await services.invitations.preview(token));
+  });
+
+  router.post('/accept', async (req, res) => {
+    const input = parse(InvitationAccept, req.body);
+    res.status(201).json(await services.invitations.accept(input));
+  });
+
+  router.get('/', ...adminOnly, async (req, res) => {
+    res.json(await services.invitations.list(req.user!));
+  });
+
+  router.post('/:id/resend', ...adminOnly, async (req, res) => {
+    res.json(await services.invitations.resend(req.user!, parseId(req.params.id, 'That invitation')));
+  });
+
+  router.post('/:id/revoke', ...adminOnly, async (req, res) => {
+    res.json(await services.invitations.revoke(req.user!, parseId(req.params.id, 'That invitation')));
+  });
+
+  return router;
+}

@@ -1,0 +1,102 @@
+import { randomUUID } from 'node:crypto';
+import type { Express } from 'express';
+import { pino } from 'pino';
+import request from 'supertest';
+import { afterAll } from 'vitest';
+import type { OrgKind, Role } from '@kerfmark/contracts';
+import { createApp } from '../app';
+import { hashPassword } from '../auth/passwords';
+import { loadConfig, type Config } from '../config';
+import { bindModels, createKnex } from '../db/knex';
+import { createEmailDispatcher } from '../lib/emailDispatcher';
+import { createRedis } from '../lib/redis';
+import { Organisation, Press, User } from '../models';
+
+// Integration tests run against the real PostgreSQL, Redis and mail catcher that `npm test` starts.
+if (!process.env.DATABASE_URL) {
+  throw new Error('DATABASE_URL is not set: run the API tests through `npm test`, which starts the services.');
+}
+const config: Config = { ...loadConfig(), bcryptRounds: 4 };
+export const knex = createKnex(config.databaseUrl);
+bindModels(knex);
+const logger = pino({ level: 'silent' });
+const redis = createRedis(config.redisUrl);
+redis.on('error', () => undefined);
+const emails = createEmailDispatcher(config.redisUrl, logger);
+
+export const app: Express = createApp({ config, knex, redis, logger, emails });
+export const testConfig = config;
+export const PASSWORD = 'correct horse battery';
+
+afterAll(async () => {
+  await Promise.allSettled([emails.close(), redis.quit()]);
+  await knex.destroy();
+});
+
+/** A unique suffix so that tests running side by side never share a record. */
+export const unique = () => randomUUID().slice(0, 8);
+
+export async function createOrg(kind: OrgKind, name = `${kind === 'printer' ? 'Printer' : 'Die shop'} ${unique()}`) {
+  return Organisation.query().insertAndFetch({ name, kind, timeZone: 'America/Chicago', postcode: '60614', country: 'US' });
+}
+
+export async function createUser(org: Organisation, role: Role, opts: { status?: 'active' | 'disabled' } = {}) {
+  const email = `${role}-${unique()}@test.example`;
+  const user = await User.query().insertAndFetch({
+    organisationId: org.id,
+    email,
+    name: `Test ${role} ${unique()}`,
+    role,
+    status: opts.status ?? 'active',
+    passwordHash: await hashPassword(PASSWORD, 4),
+  });
+  return user;
+}
+
+export async function createPress(org: Organisation, name = `Press ${unique()}`) {
+  return Press.query().insertAndFetch({
+    organisationId: org.id,
+    name,
+    kind: 'platen',
+    maxSheetWidthIn: 22,
+    maxSheetLengthIn: 30,
+    typicalSpeedSph: 4000,
+    maxSpeedSph: 5000,
+    active: true,
+  });
+}
+
+export async function signIn(user: User): Promise<string> {
+  const res = await request(app).post('/api/auth/login').send({ email: user.email, password: PASSWORD });
+  if (res.status !== 200) throw new Error(`sign-in failed: ${res.status} ${JSON.stringify(res.body)}`);
+  return res.body.token as string;
+}
+
+/** A printer and a die shop with one user of every role each, signed in. */
+export async function createWorld() {
+  const printer = await createOrg('printer');
+  const shop = await createOrg('die_shop');
+  const users = {
+    buyer: await createUser(printer, 'buyer'),
+    purchasing: await createUser(printer, 'purchasing'),
+    printerAdmin: await createUser(printer, 'admin'),
+    estimator: await createUser(shop, 'estimator'),
+    shopAdmin: await createUser(shop, 'admin'),
+  };
+  const tokens = Object.fromEntries(
+    await Promise.all(Object.entries(users).map(async ([key, user]) => [key, await signIn(user)])),
+  ) as Record<keyof typeof users, string>;
+  return { printer, shop, users, tokens };
+}
+
+/** Waits for an e-mail to arrive at the mail catcher and returns it. */
+export async function waitForEmail(to: string, timeoutMs = 15_000): Promise<{ subject: string; text: string; html: string | null }> {
+  const until = Date.now() + timeoutMs;
+  while (Date.now() < until) {
+    const res = await fetch(`${process.env.MAIL_CATCHER_URL}/api/messages?to=${encodeURIComponent(to)}`);
+    const messages = (await res.json()) as Array<{ subject: string; text: string; html: string | null }>;
+    if (messages.length) return messages[0]!;
+    await new Promise((r) => setTimeout(r, 200));
+  }
+  throw new Error(`no e-mail to ${to} within ${timeoutMs} ms`);
+}

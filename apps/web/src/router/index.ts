@@ -1,0 +1,55 @@
+import { createRouter, createWebHistory, type RouteRecordRaw } from 'vue-router';
+import { useAuthStore } from '../stores/auth';
+import { canAccess, type Access } from './access';
+
+declare module 'vue-router' {
+  interface RouteMeta {
+    public?: boolean;
+    access?: Access;
+    title?: string;
+  }
+}
+
+export const appRoutes: RouteRecordRaw[] = [
+  { path: '', name: 'home', component: () => import('../views/HomeView.vue'), meta: { title: 'Home' } },
+  { path: 'team', name: 'team', component: () => import('../views/TeamView.vue'), meta: { title: 'Team' } },
+  {
+    path: 'presses',
+    name: 'presses',
+    component: () => import('../views/PressesView.vue'),
+    meta: { title: 'Presses', access: { kinds: ['printer'] } },
+  },
+];
+
+const routes: RouteRecordRaw[] = [
+  { path: '/sign-in', name: 'sign-in', component: () => import('../views/SignInView.vue'), meta: { public: true, title: 'Sign in' } },
+  {
+    path: '/accept-invitation',
+    name: 'accept-invitation',
+    component: () => import('../views/AcceptInvitationView.vue'),
+    meta: { public: true, title: 'Accept invitation' },
+  },
+  { path: '/', component: () => import('../layouts/AppLayout.vue'), children: appRoutes },
+  { path: '/:rest(.*)*', name: 'not-found', component: () => import('../views/NotFoundView.vue'), meta: { public: true, title: 'Not found' } },
+];
+
+export const router = createRouter({ history: createWebHistory(), routes });
+
+router.beforeEach(async (to) => {
+  const auth = useAuthStore();
+  if (to.meta.public) return true;
+  if (!auth.signedIn) return { name: 'sign-in', query: to.fullPath !== '/' ? { next: to.fullPath } : {} };
+  try {
+    const me = await auth.loadMe();
+    if (!me) return { name: 'sign-in' };
+    if (!canAccess(me, to.meta.access)) return { name: 'home' };
+  } catch {
+    // The API answered 401 (the store has signed out) or is unreachable: sign in again.
+    if (!auth.signedIn) return { name: 'sign-in', query: { next: to.fullPath } };
+  }
+  return true;
+});
+
+router.afterEach((to) => {
+  document.title = to.meta.title ? `${to.meta.title} · Kerfmark` : 'Kerfmark';
+});

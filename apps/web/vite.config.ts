@@ -1,0 +1,20 @@
+import vue from '@vitejs/plugin-vue';
+import Components from 'unplugin-vue-components/vite';
+import { AntDesignVueResolver } from 'unplugin-vue-components/resolvers';
+import { defineConfig } from 'vite';
+
+// ant-design-vue components are imported on demand (the whole library would weigh ~460 KB gzip).
+export default defineConfig({
+  plugins: [
+    vue(),
+    Components({
+      resolvers: [AntDesignVueResolver({ importStyle: false, resolveIcons: true })],
+      dts: 'src/components.d.ts',
+    }),
+  ],
+  server: {
+    port: Number(process.env.VITE_PORT ?? 4173),
+    proxy: { '/api': process.env.APP_URL ?? 'http://127.0.0.1:4100' },
+  },
+  build: { chunkSizeWarningLimit: 900 },
+});

@@ -1,0 +1,16 @@
+function required(name: string): string {
+  const value = process.env[name];
+  if (!value) throw new Error(`${name} is not set`);
+  return value;
+}
+
+export function loadConfig() {
+  return {
+    databaseUrl: required('DATABASE_URL'),
+    redisUrl: required('REDIS_URL'),
+    smtpUrl: required('SMTP_URL'),
+    mailFrom: process.env.MAIL_FROM ?? 'Kerfmark <no-reply@kerfmark.test>',
+    outboxSweepMs: Number(process.env.OUTBOX_SWEEP_MS ?? 30_000),
+  };
+}
+export type WorkerConfig = ReturnType<typeof loadConfig>;

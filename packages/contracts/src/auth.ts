@@ -1,0 +1,44 @@
+import { z } from 'zod';
+import { OrgKind, Role } from './roles';
+
+export const Email = z
+  .string({ error: 'Enter an e-mail address' })
+  .trim()
+  .toLowerCase()
+  .max(254, 'An e-mail address has at most 254 characters')
+  .pipe(z.email({ error: 'Enter a valid e-mail address' }));
+
+/** Password rules for new passwords (sign-in accepts whatever was set). */
+export const NewPassword = z
+  .string({ error: 'Enter a password' })
+  .min(10, 'Use at least 10 characters')
+  .max(200, 'Use at most 200 characters');
+
+export const LoginInput = z.object({
+  email: Email,
+  password: z.string({ error: 'Enter your password' }).min(1, 'Enter your password').max(200),
+});
+export type LoginInput = z.infer<typeof LoginInput>;
+
+export const LoginResult = z.object({
+  token: z.string(),
+  expiresAt: z.string(),
+});
+export type LoginResult = z.infer<typeof LoginResult>;
+
+export const Organisation = z.object({
+  id: z.number().int(),
+  name: z.string(),
+  kind: OrgKind,
+  timeZone: z.string(),
+});
+export type Organisation = z.infer<typeof Organisation>;
+
+export const Me = z.object({
+  id: z.number().int(),
+  email: z.string(),
+  name: z.string(),
+  role: Role,
+  organisation: Organisation,
+});
+export type Me = z.infer<typeof Me>;

@@ -1,0 +1,55 @@
+import { z } from 'zod';
+
+export const pressKinds = ['platen', 'flatbed', 'rotary'] as const;
+export const PressKind = z.enum(pressKinds);
+export type PressKind = z.infer<typeof PressKind>;
+
+export const pressKindLabels: Record<PressKind, string> = {
+  platen: 'Platen',
+  flatbed: 'Flatbed',
+  rotary: 'Rotary',
+};
+
+const SheetSide = z
+  .number({ error: 'Enter a size in inches' })
+  .positive('A sheet side must be more than 0 in')
+  .max(120, 'A sheet side is at most 120 in');
+
+// Common practice: die-cutting presses run a few thousand sheets an hour, up to about 7,800 on a
+// fast one; the upper bound here is generous so that rotary lines fit too.
+const Speed = z
+  .number({ error: 'Enter a speed in sheets an hour' })
+  .int('Enter a whole number of sheets an hour')
+  .positive('A speed must be more than 0')
+  .max(50_000, 'A speed is at most 50,000 sheets an hour');
+
+const PressFields = z.object({
+  name: z.string({ error: 'Enter a name' }).trim().min(1, 'Enter a name').max(120, 'A name has at most 120 characters'),
+  kind: PressKind,
+  maxSheetWidthIn: SheetSide,
+  maxSheetLengthIn: SheetSide,
+  typicalSpeedSph: Speed,
+  maxSpeedSph: Speed,
+  active: z.boolean({ error: 'Choose whether the press is in use' }),
+});
+
+const speedOrder = (v: { typicalSpeedSph?: number; maxSpeedSph?: number }) =>
+  v.typicalSpeedSph === undefined || v.maxSpeedSph === undefined || v.typicalSpeedSph <= v.maxSpeedSph;
+const speedOrderIssue = { error: 'The typical speed cannot be above the maximum speed', path: ['typicalSpeedSph'] };
+
+export const PressCreate = PressFields.extend({ active: PressFields.shape.active.default(true) }).refine(
+  speedOrder,
+  speedOrderIssue,
+);
+export type PressCreate = z.infer<typeof PressCreate>;
+
+export const PressUpdate = PressFields.partial()
+  .refine((v) => Object.keys(v).length > 0, { error: 'Nothing to change' })
+  .refine(speedOrder, speedOrderIssue);
+export type PressUpdate = z.infer<typeof PressUpdate>;
+
+export const Press = PressFields.extend({
+  id: z.number().int(),
+  createdAt: z.string(),
+});
+export type Press = z.infer<typeof Press>;

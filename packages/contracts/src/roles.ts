@@ -1,0 +1,32 @@
+import { z } from 'zod';
+
+/** The two kinds of organisation on Kerfmark. */
+export const orgKinds = ['printer', 'die_shop'] as const;
+export const OrgKind = z.enum(orgKinds);
+export type OrgKind = z.infer<typeof OrgKind>;
+
+export const roles = ['buyer', 'purchasing', 'estimator', 'admin'] as const;
+export const Role = z.enum(roles);
+export type Role = z.infer<typeof Role>;
+
+/** Which roles an organisation of each kind may give its users. */
+export const rolesByOrgKind: Record<OrgKind, readonly Role[]> = {
+  printer: ['buyer', 'purchasing', 'admin'],
+  die_shop: ['estimator', 'admin'],
+};
+
+export const roleLabels: Record<Role, string> = {
+  buyer: 'Print buyer',
+  purchasing: 'Purchasing',
+  estimator: 'Estimator',
+  admin: 'Admin',
+};
+
+export const orgKindLabels: Record<OrgKind, string> = {
+  printer: 'Printer',
+  die_shop: 'Die shop',
+};
+
+export function roleFitsOrg(role: Role, kind: OrgKind): boolean {
+  return rolesByOrgKind[kind].includes(role);
+}

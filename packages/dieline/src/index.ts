@@ -1,0 +1,2 @@
+// Dieline parsing and geometry metrics: pure, no I/O.
+export * from './units';

@@ -1,0 +1,2 @@
+// Price history statistics, fair-price band and bid comparison: pure, no I/O.
+export * from './money';

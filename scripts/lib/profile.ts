@@ -1,0 +1,63 @@
+import { createHash } from 'node:crypto';
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
+
+export const repoRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..');
+
+/** One set of ports and one data folder: `npm start` and `npm test` each have their own. */
+export interface Profile {
+  name: 'dev' | 'test';
+  dataDir: string;
+  ports: { app: number; postgres: number; redis: number; s3: number; smtp: number; mailUi: number; vite: number };
+  database: string;
+  bucket: string;
+}
+
+function port(envName: string, fallback: number): number {
+  const value = process.env[envName];
+  return value ? Number(value) : fallback;
+}
+
+export function profile(name: 'dev' | 'test'): Profile {
+  const base = name === 'dev' ? 4100 : 4200;
+  const prefix = name === 'dev' ? 'KERFMARK_' : 'KERFMARK_TEST_';
+  return {
+    name,
+    dataDir: path.join(repoRoot, '.data', name),
+    ports: {
+      app: port(`${prefix}PORT`, base),
+      postgres: port(`${prefix}PG_PORT`, name === 'dev' ? 54329 : 54339),
+      redis: port(`${prefix}REDIS_PORT`, name === 'dev' ? 6390 : 6391),
+      s3: port(`${prefix}S3_PORT`, base + 10),
+      smtp: port(`${prefix}SMTP_PORT`, base + 25),
+      mailUi: port(`${prefix}MAIL_PORT`, base + 80),
+      vite: port(`${prefix}VITE_PORT`, base + 73),
+    },
+    database: name === 'dev' ? 'kerfmark' : 'kerfmark_test',
+    bucket: name === 'dev' ? 'kerfmark-files' : 'kerfmark-test-files',
+  };
+}
+
+/** The environment every app process of a profile gets: the same variables production sets. */
+export function serviceEnv(p: Profile): Record<string, string> {
+  const host = '127.0.0.1';
+  return {
+    NODE_ENV: p.name === 'test' ? 'test' : 'development',
+    PORT: String(p.ports.app),
+    APP_URL: `http://${host}:${p.ports.app}`,
+    DATABASE_URL: `postgres://kerfmark@${host}:${p.ports.postgres}/${p.database}`,
+    REDIS_URL: `redis://${host}:${p.ports.redis}`,
+    S3_ENDPOINT: `http://${host}:${p.ports.s3}`,
+    S3_BUCKET: p.bucket,
+    S3_REGION: 'us-east-1',
+    S3_ACCESS_KEY_ID: 'S3RVER',
+    S3_SECRET_ACCESS_KEY: 'S3RVER',
+    SMTP_URL: `smtp://${host}:${p.ports.smtp}`,
+    MAIL_CATCHER_URL: `http://${host}:${p.ports.mailUi}`,
+    MAIL_FROM: 'Kerfmark <no-reply@kerfmark.test>',
+    // A per-checkout secret for local use only; production sets its own JWT_SECRET.
+    JWT_SECRET: createHash('sha256').update(`kerfmark-local:${repoRoot}:${p.name}`).digest('hex'),
+    WEB_DIST: path.join(repoRoot, 'apps/web/dist'),
+    DATA_DIR: p.dataDir,
+  };
+}

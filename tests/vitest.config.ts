@@ -1,0 +1,13 @@
+import { defineProject } from 'vitest/config';
+
+// End-to-end tests drive Debian's Chromium against the app `npm test` started; one file at a time.
+export default defineProject({
+  test: {
+    name: 'e2e',
+    environment: 'node',
+    include: ['e2e/**/*.test.ts', 'integration/**/*.test.ts'],
+    testTimeout: 90_000,
+    hookTimeout: 60_000,
+    fileParallelism: false,
+  },
+});
