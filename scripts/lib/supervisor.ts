@@ -37,6 +37,7 @@ export class Supervisor {
 
   spawn(name: string, cmd: string, args: string[], env: Record<string, string>): ChildProcess {
     const child = spawn(cmd, args, { cwd: repoRoot, env: { ...process.env, ...env }, stdio: ['ignore', 'pipe', 'pipe'] });
+    mkdirSync(this.logDir, { recursive: true });
     const log = createWriteStream(path.join(this.logDir, `${name}.log`), { flags: 'a' });
     for (const stream of [child.stdout, child.stderr]) {
       readline.createInterface({ input: stream! }).on('line', (line) => {

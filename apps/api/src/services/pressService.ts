@@ -1,5 +1,6 @@
 import type { Press as PressDto, PressCreate, PressUpdate } from '@kerfmark/contracts';
 import { PressCreate as PressCreateSchema } from '@kerfmark/contracts';
+import { UniqueViolationError } from 'objection';
 import type { AuthUser } from '../auth/passport';
 import { parse } from '../lib/parse';
 import { HttpError, notFound } from '../lib/httpError';
@@ -24,9 +25,7 @@ function toDto(press: Press): PressDto {
 const duplicateName = () =>
   new HttpError(409, 'conflict', 'This organisation already has a press with that name.', { name: 'Choose another name' });
 
-function isUniqueViolation(error: unknown): boolean {
-  return (error as { code?: string }).code === '23505';
-}
+const isUniqueViolation = (error: unknown) => error instanceof UniqueViolationError;
 
 export function createPressService({ knex }: ServiceDeps) {
   return {

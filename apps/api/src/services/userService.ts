@@ -26,7 +26,12 @@ export function createUserService({ knex }: ServiceDeps) {
 
     async update(actor: AuthUser, id: number, patch: UserUpdate): Promise<UserDto> {
       return knex.transaction(async (trx) => {
-        // Lock the organisation's admins so that two admins demoting each other cannot leave none.
+        // Lock the organisation's active admins first, always in id order, so that two admins
+        // demoting each other at once wait for each other instead of leaving none (or deadlocking).
+        const admins = await User.query(trx)
+          .where({ organisationId: actor.organisationId, role: 'admin', status: 'active' })
+          .orderBy('id')
+          .forUpdate();
         const user = await User.query(trx).findOne({ id, organisationId: actor.organisationId }).forUpdate();
         if (!user) throw notFound('That user');
         if (patch.role && !roleFitsOrg(patch.role, actor.orgKind)) {
@@ -34,13 +39,10 @@ export function createUserService({ knex }: ServiceDeps) {
             role: 'Choose a role this organisation has',
           });
         }
-        const losesAdmin = user.role === 'admin' && ((patch.role && patch.role !== 'admin') || patch.status === 'disabled');
-        if (losesAdmin) {
-          const admins = await User.query(trx)
-            .where({ organisationId: actor.organisationId, role: 'admin', status: 'active' })
-            .forUpdate();
-          if (admins.length <= 1) throw conflict('An organisation needs at least one active admin.');
-        }
+        const losesAdmin =
+          user.role === 'admin' && user.status === 'active' && ((patch.role && patch.role !== 'admin') || patch.status === 'disabled');
+        if (losesAdmin && admins.length <= 1) throw conflict('An organisation needs at least one active admin.');
+        const before = { role: user.role, status: user.status };
         const changes = { ...(patch.role ? { role: patch.role } : {}), ...(patch.status ? { status: patch.status } : {}) };
         const updated = await user.$query(trx).patchAndFetch(changes);
         await recordAudit(trx, {
@@ -49,7 +51,7 @@ export function createUserService({ knex }: ServiceDeps) {
           entity: 'user',
           entityId: user.id,
           action: 'updated',
-          detail: { from: { role: user.role, status: user.status }, to: changes },
+          detail: { from: before, to: changes },
         });
         return toUserDto(updated);
       });

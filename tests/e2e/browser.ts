@@ -1,0 +1,53 @@
+import { mkdirSync } from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+import { chromium, type Browser, type Page } from 'playwright-core';
+
+export const baseUrl = process.env.APP_URL ?? 'http://127.0.0.1:4200';
+export const mailUrl = process.env.MAIL_CATCHER_URL ?? 'http://127.0.0.1:4280';
+const screenshotDir = process.env.SCREENSHOT_DIR ?? path.join(os.tmpdir(), 'kerfmark-screenshots');
+export const DEMO_PASSWORD = 'kerfmark-demo-2026';
+
+/**
+ * Debian's Chromium, headless, with the flags that keep it off the (closed) network; Playwright
+ * gives it a fresh, empty profile folder of its own.
+ */
+export async function launch(): Promise<Browser> {
+  return chromium.launch({
+    executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
+    headless: true,
+    args: [
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-quic',
+      '--no-first-run',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+    ],
+  });
+}
+
+export async function screenshot(page: Page, name: string): Promise<void> {
+  mkdirSync(screenshotDir, { recursive: true });
+  await page.screenshot({ path: path.join(screenshotDir, `${name}.png`), fullPage: true });
+}
+
+export async function signIn(page: Page, email: string, password = DEMO_PASSWORD): Promise<void> {
+  await page.goto(`${baseUrl}/sign-in`);
+  await page.locator('[data-test=email]').fill(email);
+  await page.locator('[data-test=password] input, input[data-test=password]').first().fill(password);
+  await page.locator('[data-test=sign-in]').click();
+}
+
+/** The newest e-mail to an address at the mail catcher. */
+export async function latestEmail(to: string, timeoutMs = 15_000): Promise<{ subject: string; text: string }> {
+  const until = Date.now() + timeoutMs;
+  while (Date.now() < until) {
+    const res = await fetch(`${mailUrl}/api/messages?to=${encodeURIComponent(to)}`);
+    const messages = (await res.json()) as Array<{ subject: string; text: string }>;
+    if (messages.length) return messages[0]!;
+    await new Promise((r) => setTimeout(r, 250));
+  }
+  throw new Error(`no e-mail to ${to}`);
+}
