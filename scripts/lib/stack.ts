@@ -44,6 +44,8 @@ export async function bringUp(p: Profile, supervisor: Supervisor, opts: { fresh:
   supervisor.start('s3', 'infra/s3/server.ts', env);
   supervisor.start('mail', 'infra/mail/server.ts', env);
 
+  await waitFor('the S3 fake', () => portAnswers(p.ports.s3));
+  Object.assign(process.env, env);
   step('migrations and demo data');
   const applied = await prepareDatabase(env.DATABASE_URL!, { seed: true });
   if (applied.length) console.log(`  applied ${applied.length} migration(s)`);
@@ -55,12 +57,12 @@ export async function bringUp(p: Profile, supervisor: Supervisor, opts: { fresh:
     env: { ...process.env, TURBO_TELEMETRY_DISABLED: '1', DO_NOT_TRACK: '1' },
   });
 
-  await waitFor('the S3 fake', () => portAnswers(p.ports.s3));
   await waitFor('the mail catcher', () => httpOk(`${env.MAIL_CATCHER_URL}/api/messages`));
 
   step('API and worker');
   supervisor.start('api', 'apps/api/src/server.ts', env);
-  supervisor.start('worker', 'apps/worker/src/index.ts', { ...env, OUTBOX_SWEEP_MS: p.name === 'test' ? '2000' : '30000' });
+  const sweepMs = p.name === 'test' ? '2000' : '30000';
+  supervisor.start('worker', 'apps/worker/src/index.ts', { ...env, OUTBOX_SWEEP_MS: sweepMs, ANALYSIS_SWEEP_MS: sweepMs });
   await waitFor('the API', () => httpOk(`${env.APP_URL}/api/health`), 60_000);
   return env;
 }

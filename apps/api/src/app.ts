@@ -3,29 +3,25 @@ import path from 'node:path';
 import express, { type Express } from 'express';
 import helmet from 'helmet';
 import type { Redis } from 'ioredis';
-import type { Knex } from 'knex';
-import type { Logger } from 'pino';
 import { pinoHttp } from 'pino-http';
 import { createLoginLimiter } from './auth/loginLimiter';
 import { createPassport } from './auth/passport';
-import type { Config } from './config';
 import { errorHandler, notFoundHandler } from './middleware/errorHandler';
 import { requireAuth as requireAuthWith } from './middleware/requireAuth';
 import { authRoutes } from './routes/authRoutes';
 import { healthRoutes } from './routes/healthRoutes';
 import { invitationRoutes } from './routes/invitationRoutes';
 import { meRoutes } from './routes/meRoutes';
+import { fileRoutes } from './routes/fileRoutes';
+import { marketplaceRoutes } from './routes/marketplaceRoutes';
 import { pressRoutes } from './routes/pressRoutes';
+import { requestRoutes } from './routes/requestRoutes';
 import { userRoutes } from './routes/userRoutes';
-import type { EmailDispatcher } from './services/deps';
+import type { ServiceDeps } from './services/deps';
 import { createServices } from './services';
 
-export interface AppDeps {
-  config: Config;
-  knex: Knex;
+export interface AppDeps extends ServiceDeps {
   redis: Redis;
-  logger: Logger;
-  emails: EmailDispatcher;
 }
 
 export function createApp(deps: AppDeps): Express {
@@ -58,6 +54,9 @@ export function createApp(deps: AppDeps): Express {
   api.use('/users', userRoutes(services, requireAuth));
   api.use('/invitations', invitationRoutes(services, requireAuth));
   api.use('/presses', pressRoutes(services, requireAuth));
+  api.use('/requests', requestRoutes(services, requireAuth, config.maxUploadBytes));
+  api.use('/files', fileRoutes(services, requireAuth));
+  api.use(marketplaceRoutes(services, requireAuth));
   api.use(notFoundHandler);
   app.use('/api', api);
 

@@ -15,6 +15,7 @@ export interface Config {
   bcryptRounds: number;
   webDist: string | undefined;
   invitationTtlHours: number;
+  maxUploadBytes: number;
   login: { maxAttempts: number; windowSeconds: number };
 }
 
@@ -29,6 +30,7 @@ export function loadConfig(): Config {
     bcryptRounds: Number(process.env.BCRYPT_ROUNDS ?? 11),
     webDist: process.env.WEB_DIST,
     invitationTtlHours: Number(process.env.INVITATION_TTL_HOURS ?? 72),
+    maxUploadBytes: Number(process.env.MAX_UPLOAD_BYTES ?? 25 * 1024 * 1024),
     login: {
       maxAttempts: Number(process.env.LOGIN_MAX_ATTEMPTS ?? 5),
       windowSeconds: Number(process.env.LOGIN_WINDOW_SECONDS ?? 15 * 60),

@@ -11,6 +11,7 @@ export function loadConfig() {
     smtpUrl: required('SMTP_URL'),
     mailFrom: process.env.MAIL_FROM ?? 'Kerfmark <no-reply@kerfmark.test>',
     outboxSweepMs: Number(process.env.OUTBOX_SWEEP_MS ?? 30_000),
+    analysisSweepMs: Number(process.env.ANALYSIS_SWEEP_MS ?? 30_000),
   };
 }
 export type WorkerConfig = ReturnType<typeof loadConfig>;

@@ -1,7 +1,9 @@
 import { Queue, Worker } from 'bullmq';
 import knexFactory from 'knex';
 import { pino } from 'pino';
-import { jobNames, queueNames, type DeliverEmailJob } from '@kerfmark/contracts';
+import { jobNames, queueNames, type AnalyseDielineJob, type DeliverEmailJob } from '@kerfmark/contracts';
+import { createStorage, storageConfigFromEnv } from '@kerfmark/storage';
+import { analyseDielineFile, waitingAnalyses } from './jobs/analyseDieline';
 import { loadConfig } from './config';
 import { deliverEmail } from './jobs/deliverEmail';
 import { sweepOutbox } from './jobs/sweepOutbox';
@@ -11,6 +13,7 @@ const logger = pino({ name: 'worker', level: process.env.LOG_LEVEL ?? 'info' });
 const config = loadConfig();
 const knex = knexFactory({ client: 'pg', connection: config.databaseUrl, pool: { min: 0, max: 4 } });
 const mailer = createMailer(config.smtpUrl);
+const storage = createStorage(storageConfigFromEnv());
 const redisUrl = new URL(config.redisUrl);
 // Workers wait out a Redis outage instead of failing commands (BullMQ requires this).
 const connection = { host: redisUrl.hostname, port: Number(redisUrl.port || 6379), maxRetriesPerRequest: null };
@@ -35,12 +38,37 @@ const emailWorker = new Worker<DeliverEmailJob>(
   },
   { connection, concurrency: 4 },
 );
-emailWorker.on('failed', (job, error) => logger.warn({ job: job?.id, err: error.message }, 'job failed'));
-emailWorker.on('error', (error) => logger.warn({ err: error.message }, 'worker error'));
-logger.info('worker running: e-mail delivery and outbox sweep');
+const dielineQueue = new Queue(queueNames.dieline, { connection });
+await dielineQueue.upsertJobScheduler('dieline-analysis-sweep', { every: config.analysisSweepMs }, { name: jobNames.sweepAnalyses });
+
+const dielineWorker = new Worker<AnalyseDielineJob>(
+  queueNames.dieline,
+  async (job) => {
+    if (job.name === jobNames.sweepAnalyses) {
+      // Only files left waiting well past a normal run: their job was lost with Redis.
+      const ids = await waitingAnalyses(knex, config.analysisSweepMs * 2);
+      for (const fileId of ids) logger.info({ fileId, result: await analyseDielineFile(knex, storage, fileId) }, 'analysis (sweep)');
+      return ids.length;
+    }
+    if (job.name === jobNames.analyseDieline) {
+      const result = await analyseDielineFile(knex, storage, job.data.fileId);
+      logger.info({ fileId: job.data.fileId, result }, 'dieline analysis');
+      return result;
+    }
+    throw new Error(`Unknown job ${job.name}`);
+  },
+  // Analysis is CPU work: one at a time per worker process; run more workers to scale out.
+  { connection, concurrency: 1 },
+);
+
+for (const worker of [emailWorker, dielineWorker]) {
+  worker.on('failed', (job, error) => logger.warn({ queue: worker.name, job: job?.id, err: error.message }, 'job failed'));
+  worker.on('error', (error) => logger.warn({ queue: worker.name, err: error.message }, 'worker error'));
+}
+logger.info('worker running: e-mail delivery, dieline analysis and their sweeps');
 
 async function shutdown() {
-  await Promise.allSettled([emailWorker.close(), emailQueue.close()]);
+  await Promise.allSettled([emailWorker.close(), dielineWorker.close(), emailQueue.close(), dielineQueue.close()]);
   await knex.destroy();
   mailer.close();
   process.exit(0);

@@ -5,3 +5,5 @@ export * from './presses';
 export * from './errors';
 export * from './queues';
 export * from './dates';
+export * from './requests';
+export * from './requestDtos';

@@ -1,2 +1,23 @@
 // Dieline parsing and geometry metrics: pure, no I/O.
 export * from './units';
+export { analyseDieline } from './analyse';
+export type { AnalyseOptions, DielineAnalysis, DielineMetrics } from './analyse';
+export { DielineError } from './errors';
+export type { DielineErrorCode } from './errors';
+export { COMPLEXITY_FEATURES_PER_INCH, COMPLEXITY_RULE } from './metrics/complexity';
+export type { Complexity } from './metrics/complexity';
+export { BEND_MIN_DEGREES } from './metrics/bends';
+export { PUNCH_MAX_IN } from './metrics/contours';
+export { DEFAULT_MARGIN_IN } from './metrics/board';
+export type { Press, Size } from './metrics/board';
+export type { LengthByType } from './metrics/lengths';
+export type { DielinePreview, PreviewPath } from './preview';
+export { RULE_TYPES, PRICED_RULE_TYPES, ruleTypeFromName } from './ruleType';
+export type { LayerMap, RuleType, PricedRuleType } from './ruleType';
+export type { DrawingUnits, LayerInfo } from './drawing';
+export { DEFAULT_LIMITS, JOIN_TOLERANCE_IN } from './limits';
+export type { Limits } from './limits';
+export { FORMATS, decodeInput, detectFormat } from './input';
+export type { DielineFormat } from './input';
+export { UNIT_NAMES } from './unitNames';
+export type { UnitName } from './unitNames';

@@ -1,2 +1,3 @@
 // Price history statistics, fair-price band and bid comparison: pure, no I/O.
 export * from './money';
+export * from './schedule';

@@ -4,3 +4,6 @@ export { Invitation } from './Invitation';
 export { Organisation } from './Organisation';
 export { Press } from './Press';
 export { User } from './User';
+export { DieRequest } from './DieRequest';
+export { DielineFile } from './DielineFile';
+export { RequestQuestion } from './RequestQuestion';

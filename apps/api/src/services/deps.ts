@@ -1,5 +1,6 @@
 import type { Knex } from 'knex';
 import type { Logger } from 'pino';
+import type { Storage } from '@kerfmark/storage';
 import type { Config } from '../config';
 
 /** Adds delivery jobs for outbox rows; a Redis that is down only delays them (the worker sweeps). */
@@ -7,9 +8,16 @@ export interface EmailDispatcher {
   deliver(outboxIds: number[]): void;
 }
 
+/** Adds an analysis run for an uploaded dieline; the worker's sweep covers a Redis that is down. */
+export interface AnalysisDispatcher {
+  analyse(fileId: number, run: number): void;
+}
+
 export interface ServiceDeps {
   config: Config;
   knex: Knex;
   logger: Logger;
   emails: EmailDispatcher;
+  analyses: AnalysisDispatcher;
+  storage: Storage;
 }

@@ -4,9 +4,14 @@ import type { ServiceDeps } from './deps';
 import { createInvitationService } from './invitationService';
 import { createPressService } from './pressService';
 import { createUserService } from './userService';
+import { createRequestService } from './requestService';
+import { createFileService } from './fileService';
 
 export function createServices(deps: ServiceDeps, limiter: LoginLimiter) {
+  const requests = createRequestService(deps);
   return {
+    requests,
+    files: createFileService(deps, requests),
     auth: createAuthService(deps, limiter),
     users: createUserService(deps),
     invitations: createInvitationService(deps),

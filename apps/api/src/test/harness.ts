@@ -8,7 +8,8 @@ import { createApp } from '../app';
 import { hashPassword } from '../auth/passwords';
 import { loadConfig, type Config } from '../config';
 import { bindModels, createKnex } from '../db/knex';
-import { createEmailDispatcher } from '../lib/emailDispatcher';
+import { createStorage, storageConfigFromEnv } from '@kerfmark/storage';
+import { createJobQueues } from '../lib/jobQueues';
 import { createRedis } from '../lib/redis';
 import { Organisation, Press, User } from '../models';
 
@@ -22,14 +23,15 @@ bindModels(knex);
 const logger = pino({ level: 'silent' });
 const redis = createRedis(config.redisUrl);
 redis.on('error', () => undefined);
-const emails = createEmailDispatcher(config.redisUrl, logger);
+const queues = createJobQueues(config.redisUrl, logger);
+export const storage = createStorage(storageConfigFromEnv());
 
-export const app: Express = createApp({ config, knex, redis, logger, emails });
+export const app: Express = createApp({ config, knex, redis, logger, emails: queues.emails, analyses: queues.analyses, storage });
 export const testConfig = config;
 export const PASSWORD = 'correct horse battery';
 
 afterAll(async () => {
-  await Promise.allSettled([emails.close(), redis.quit()]);
+  await Promise.allSettled([queues.close(), redis.quit()]);
   await knex.destroy();
 });
 

@@ -1,5 +1,12 @@
 import type {
+  DielineFileDto,
+  DieRequestCreate,
+  DieRequestDetail,
+  DieRequestSummary,
+  DieRequestUpdate,
   Invitation,
+  Page,
+  RequestQuestionDto,
   InvitationAccept,
   InvitationCreate,
   InvitationPreview,
@@ -12,6 +19,7 @@ import type {
   User,
   UserUpdate,
 } from '@kerfmark/contracts';
+import type { DielinePreview } from '@kerfmark/dieline';
 import { api } from './client';
 
 export const authApi = {
@@ -38,4 +46,31 @@ export const pressesApi = {
   list: () => api<Press[]>('/presses'),
   create: (input: PressCreate) => api<Press>('/presses', { method: 'POST', body: input }),
   update: (id: number, patch: PressUpdate) => api<Press>(`/presses/${id}`, { method: 'PATCH', body: patch }),
+};
+
+export const requestsApi = {
+  list: (query: Record<string, string | number | undefined>) => {
+    const params = new URLSearchParams();
+    for (const [key, value] of Object.entries(query)) if (value !== undefined && value !== '') params.set(key, String(value));
+    return api<Page<DieRequestSummary>>(`/requests?${params}`);
+  },
+  get: (id: number) => api<DieRequestDetail>(`/requests/${id}`),
+  create: (input: DieRequestCreate) => api<DieRequestDetail>('/requests', { method: 'POST', body: input }),
+  update: (id: number, patch: DieRequestUpdate) => api<DieRequestDetail>(`/requests/${id}`, { method: 'PATCH', body: patch }),
+  publish: (id: number) => api<DieRequestDetail>(`/requests/${id}/publish`, { method: 'POST' }),
+  cancel: (id: number, reason: string) => api<DieRequestDetail>(`/requests/${id}/cancel`, { method: 'POST', body: { reason } }),
+  ask: (id: number, question: string) => api<RequestQuestionDto>(`/requests/${id}/questions`, { method: 'POST', body: { question } }),
+  answer: (id: number, questionId: number, answer: string) =>
+    api<RequestQuestionDto>(`/requests/${id}/questions/${questionId}/answer`, { method: 'POST', body: { answer } }),
+  marketplace: () => api<DieRequestSummary[]>('/marketplace/requests'),
+  dieShops: () => api<Array<{ id: number; name: string; postcode: string | null }>>('/die-shops'),
+};
+
+export const filesApi = {
+  get: (id: number) => api<DielineFileDto>(`/files/${id}`),
+  preview: (id: number) => api<{ preview: DielinePreview | null }>(`/files/${id}/preview`),
+  download: (id: number) => api<{ url: string; expiresAt: string }>(`/files/${id}/download`),
+  makePrimary: (id: number) => api<DielineFileDto>(`/files/${id}/primary`, { method: 'POST' }),
+  remap: (id: number, layerMap: Record<string, string>) => api<DielineFileDto>(`/files/${id}/layers`, { method: 'PUT', body: { layerMap } }),
+  remove: (id: number) => api<void>(`/files/${id}`, { method: 'DELETE' }),
 };

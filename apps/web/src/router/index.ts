@@ -7,11 +7,43 @@ declare module 'vue-router' {
     public?: boolean;
     access?: Access;
     title?: string;
+    /** Not listed in the navigation (reached from another page). */
+    hidden?: boolean;
   }
 }
 
 export const appRoutes: RouteRecordRaw[] = [
   { path: '', name: 'home', component: () => import('../views/HomeView.vue'), meta: { title: 'Home' } },
+  {
+    path: 'requests',
+    name: 'requests',
+    component: () => import('../views/RequestsView.vue'),
+    meta: { title: 'Die requests', access: { kinds: ['printer'] } },
+  },
+  {
+    path: 'requests/new',
+    name: 'request-new',
+    component: () => import('../views/RequestFormView.vue'),
+    meta: { title: 'New die request', access: { kinds: ['printer'] }, hidden: true },
+  },
+  {
+    path: 'requests/:id(\\d+)/edit',
+    name: 'request-edit',
+    component: () => import('../views/RequestFormView.vue'),
+    meta: { title: 'Die request', access: { kinds: ['printer'] }, hidden: true },
+  },
+  {
+    path: 'requests/:id(\\d+)',
+    name: 'request',
+    component: () => import('../views/RequestDetailView.vue'),
+    meta: { title: 'Die request', hidden: true },
+  },
+  {
+    path: 'open-requests',
+    name: 'open-requests',
+    component: () => import('../views/MarketplaceView.vue'),
+    meta: { title: 'Open requests', access: { kinds: ['die_shop'] } },
+  },
   { path: 'team', name: 'team', component: () => import('../views/TeamView.vue'), meta: { title: 'Team' } },
   {
     path: 'presses',

@@ -1,0 +1,76 @@
+import { Model } from 'objection';
+import type { Grain, RequestStatus, RuleType, Visibility } from '@kerfmark/contracts';
+import { DielineFile } from './DielineFile';
+import { Organisation } from './Organisation';
+import { Press } from './Press';
+
+export class DieRequest extends Model {
+  static override tableName = 'die_requests';
+
+  id!: number;
+  organisationId!: number;
+  createdBy!: number | null;
+  title!: string;
+  jobReference!: string | null;
+  status!: RequestStatus;
+  quantity!: number;
+  ups!: number;
+  pieceWidthIn!: number | null;
+  pieceHeightIn!: number | null;
+  stockName!: string | null;
+  caliperIn!: number | null;
+  stockWeightGsm!: number | null;
+  grain!: Grain | null;
+  pressId!: number | null;
+  runSheets!: number | null;
+  plannedLeadDays!: number;
+  ruleTypes!: RuleType[];
+  counterWanted!: boolean;
+  ejectionRubberWanted!: boolean;
+  needByDate!: string | null;
+  bidDeadline!: Date | null;
+  deliveryAddress!: string | null;
+  deliveryPostcode!: string | null;
+  notes!: string | null;
+  visibility!: Visibility;
+  publishedAt!: Date | null;
+  createdAt!: Date;
+  updatedAt!: Date;
+  organisation?: Organisation;
+  press?: Press | null;
+  files?: DielineFile[];
+  invitedShops?: Organisation[];
+
+  static override get relationMappings() {
+    return {
+      organisation: {
+        relation: Model.BelongsToOneRelation,
+        modelClass: Organisation,
+        join: { from: 'die_requests.organisationId', to: 'organisations.id' },
+      },
+      press: {
+        relation: Model.BelongsToOneRelation,
+        modelClass: Press,
+        join: { from: 'die_requests.pressId', to: 'presses.id' },
+      },
+      files: {
+        relation: Model.HasManyRelation,
+        modelClass: DielineFile,
+        join: { from: 'die_requests.id', to: 'dieline_files.requestId' },
+      },
+      invitedShops: {
+        relation: Model.ManyToManyRelation,
+        modelClass: Organisation,
+        join: {
+          from: 'die_requests.id',
+          through: { from: 'request_invitations.requestId', to: 'request_invitations.shopId' },
+          to: 'organisations.id',
+        },
+      },
+    };
+  }
+
+  override $beforeUpdate(): void {
+    this.updatedAt = new Date();
+  }
+}

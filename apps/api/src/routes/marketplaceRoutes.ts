@@ -1,0 +1,19 @@
+import { Router, type RequestHandler } from 'express';
+import { allow } from '../middleware/allow';
+import { Organisation } from '../models';
+import type { Services } from '../services';
+
+/** The die shops' side: open requests to bid on; and the printers' list of shops to invite. */
+export function marketplaceRoutes(services: Services, requireAuth: RequestHandler): Router {
+  const router = Router();
+  router.get('/marketplace/requests', requireAuth, allow({ kind: 'die_shop' }), async (req, res) => {
+    res.json(await services.requests.marketplace(req.user!));
+  });
+
+  router.get('/die-shops', requireAuth, allow({ kind: 'printer' }), async (_req, res) => {
+    const shops = await Organisation.query().where({ kind: 'die_shop' }).select('id', 'name', 'postcode').orderBy('name');
+    res.json(shops.map((s) => ({ id: s.id, name: s.name, postcode: s.postcode })));
+  });
+
+  return router;
+}

@@ -1,0 +1,64 @@
+import type { DielineFileDto, DielineMetrics, DieRequestSummary, Press as PressDto } from '@kerfmark/contracts';
+import type { DielineFile, DieRequest, Press } from '../models';
+
+/** The file whose metrics stand for the request: the one marked primary, else the newest analysed. */
+export function primaryFile(files: DielineFile[] = []): DielineFile | undefined {
+  return (
+    files.find((f) => f.isPrimary && f.analysisStatus === 'done') ??
+    [...files].reverse().find((f) => f.analysisStatus === 'done') ??
+    files.at(-1)
+  );
+}
+
+export function toFileDto(file: DielineFile): DielineFileDto {
+  return {
+    id: file.id,
+    fileName: file.fileName,
+    format: file.format,
+    byteSize: file.byteSize,
+    sha256: file.sha256,
+    isPrimary: file.isPrimary,
+    uploadedAt: file.uploadedAt.toISOString(),
+    analysisStatus: file.analysisStatus,
+    analysisError: file.analysisError,
+    metrics: file.metrics as DielineMetrics | null,
+    layerMap: file.layerMap ?? {},
+  };
+}
+
+export function toPressDto(press: Press): PressDto {
+  return {
+    id: press.id,
+    name: press.name,
+    kind: press.kind,
+    maxSheetWidthIn: press.maxSheetWidthIn,
+    maxSheetLengthIn: press.maxSheetLengthIn,
+    typicalSpeedSph: press.typicalSpeedSph,
+    maxSpeedSph: press.maxSpeedSph,
+    active: press.active,
+    createdAt: press.createdAt.toISOString(),
+  };
+}
+
+export function toSummary(request: DieRequest): DieRequestSummary {
+  const file = primaryFile(request.files);
+  return {
+    id: request.id,
+    title: request.title,
+    jobReference: request.jobReference,
+    status: request.status,
+    organisationName: request.organisation?.name ?? '',
+    quantity: request.quantity,
+    ups: request.ups,
+    ruleTypes: request.ruleTypes,
+    needByDate: request.needByDate,
+    bidDeadline: request.bidDeadline?.toISOString() ?? null,
+    pressName: request.press?.name ?? null,
+    deliveryPostcode: request.deliveryPostcode,
+    visibility: request.visibility,
+    metrics: file?.analysisStatus === 'done' ? (file.metrics as DielineMetrics | null) : null,
+    analysisStatus: file?.analysisStatus ?? null,
+    createdAt: request.createdAt.toISOString(),
+    updatedAt: request.updatedAt.toISOString(),
+  };
+}

@@ -1,0 +1,18 @@
+import dayjs from 'dayjs';
+import { describe, expect, it } from 'vitest';
+import { emptyRequestForm, toRequestInput } from './useRequestDraft';
+
+describe('request form conversion', () => {
+  it('turns caliper points into inches (1 pt = 0.001 in, common practice) and blanks into nulls', () => {
+    const input = toRequestInput({ ...emptyRequestForm(), title: 'Tray', caliperPt: 18, jobReference: '  ', needByDate: dayjs('2026-12-18') });
+    expect(input.caliperIn).toBe(0.018);
+    expect(input.jobReference).toBeNull();
+    expect(input.needByDate).toBe('2026-12-18');
+  });
+
+  it('sends invited shops only when the request is for invited shops', () => {
+    const form = { ...emptyRequestForm(), title: 'Tray', invitedShopIds: [3, 4] };
+    expect(toRequestInput(form).invitedShopIds).toEqual([]);
+    expect(toRequestInput({ ...form, visibility: 'invited' }).invitedShopIds).toEqual([3, 4]);
+  });
+});

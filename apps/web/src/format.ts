@@ -1,0 +1,43 @@
+import { formatInZone, requestStatusLabels, type RequestStatus } from '@kerfmark/contracts';
+import { inchesToMm } from '@kerfmark/dieline';
+
+/** Small display helpers shared by the views. Lengths arrive in inches. */
+export const inches = (value: number | null | undefined, digits = 2) =>
+  value === null || value === undefined ? '—' : `${value.toLocaleString('en-US', { maximumFractionDigits: digits, minimumFractionDigits: digits })} in`;
+
+export const millimetres = (inchValue: number | null | undefined, digits = 0) =>
+  inchValue === null || inchValue === undefined
+    ? '—'
+    : `${inchesToMm(inchValue).toLocaleString('en-US', { maximumFractionDigits: digits, minimumFractionDigits: digits })} mm`;
+
+export const size = (w: number | null | undefined, h: number | null | undefined) =>
+  w && h ? `${inches(w).replace(' in', '')} × ${inches(h)}` : '—';
+
+/** A calendar date (YYYY-MM-DD) for people: "Fri, Dec 18, 2026". */
+export const calendarDate = (date: string | null | undefined) =>
+  date
+    ? new Intl.DateTimeFormat('en-US', { weekday: 'short', month: 'short', day: 'numeric', year: 'numeric', timeZone: 'UTC' }).format(
+        new Date(`${date}T00:00:00Z`),
+      )
+    : '—';
+
+export const instant = (iso: string | null | undefined, timeZone: string) => (iso ? formatInZone(new Date(iso), timeZone) : '—');
+
+export const statusColor: Record<RequestStatus, string> = {
+  draft: 'default',
+  open: 'blue',
+  bidding_closed: 'purple',
+  awarded: 'cyan',
+  in_production: 'gold',
+  shipped: 'orange',
+  received: 'green',
+  cancelled: 'red',
+};
+export const statusLabel = (status: RequestStatus) => requestStatusLabels[status];
+
+export const bytes = (n: number) =>
+  n < 1024 ? `${n} B` : n < 1048576 ? `${(n / 1024).toFixed(0)} KB` : `${(n / 1048576).toFixed(1)} MB`;
+
+/** Caliper is given in points (thousandths of an inch) in North America. */
+export const caliper = (inchValue: number | null | undefined) =>
+  inchValue ? `${Math.round(inchValue * 1000 * 10) / 10} pt (${inchesToMm(inchValue).toFixed(2)} mm)` : '—';

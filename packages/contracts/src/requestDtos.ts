@@ -1,0 +1,107 @@
+import type { Press } from './presses';
+import type { Grain, RequestStatus, RuleType, Visibility } from './requests';
+
+/** The dieline metrics as the analysis reports them (lengths in inches). */
+export interface DielineMetrics {
+  units: string;
+  length: Record<'cut' | 'crease' | 'perf' | 'kiss' | 'other' | 'total', number>;
+  lengthMm: Record<'cut' | 'crease' | 'perf' | 'kiss' | 'other' | 'total', number>;
+  curves: number;
+  minRadius: number | null;
+  bends: number;
+  joints: number;
+  closedContours: number;
+  punches: number;
+  bbox: { width: number; height: number };
+  board: { width: number; height: number };
+  complexity: 'simple' | 'complex';
+  warnings: string[];
+  fitsPress?: boolean | null;
+  layers?: Array<{ name: string; ruleType: string; entities: number }>;
+}
+
+export type AnalysisStatus = 'pending' | 'analysing' | 'done' | 'failed';
+
+export interface DielineFileDto {
+  id: number;
+  fileName: string;
+  format: 'dxf' | 'svg' | 'pdf';
+  byteSize: number;
+  sha256: string;
+  isPrimary: boolean;
+  uploadedAt: string;
+  analysisStatus: AnalysisStatus;
+  analysisError: string | null;
+  metrics: DielineMetrics | null;
+  layerMap: Record<string, string>;
+}
+
+export interface DieRequestSummary {
+  id: number;
+  title: string;
+  jobReference: string | null;
+  status: RequestStatus;
+  organisationName: string;
+  quantity: number;
+  ups: number;
+  ruleTypes: RuleType[];
+  needByDate: string | null;
+  bidDeadline: string | null;
+  pressName: string | null;
+  deliveryPostcode: string | null;
+  visibility: Visibility;
+  metrics: DielineMetrics | null;
+  analysisStatus: AnalysisStatus | null;
+  createdAt: string;
+  updatedAt: string;
+}
+
+export interface RequestQuestionDto {
+  id: number;
+  question: string;
+  askedAt: string;
+  /** Only the printer and the asking shop see who asked. */
+  askedByYou: boolean;
+  answer: string | null;
+  answeredAt: string | null;
+}
+
+export interface NeedByPlan {
+  runHours: number | null;
+  runDays: number;
+  dieReadyBy: string;
+  latestArrival: string;
+  slackDays: number;
+  ok: boolean;
+}
+
+export interface DieRequestDetail extends DieRequestSummary {
+  pieceWidthIn: number | null;
+  pieceHeightIn: number | null;
+  stockName: string | null;
+  caliperIn: number | null;
+  stockWeightGsm: number | null;
+  grain: Grain | null;
+  pressId: number | null;
+  press: Press | null;
+  runSheets: number | null;
+  plannedLeadDays: number;
+  counterWanted: boolean;
+  ejectionRubberWanted: boolean;
+  deliveryAddress: string | null;
+  notes: string | null;
+  invitedShops: Array<{ id: number; name: string }>;
+  files: DielineFileDto[];
+  questions: RequestQuestionDto[];
+  allowedActions: string[];
+  isOwner: boolean;
+  boardFitsPress: boolean | null;
+  needBy: NeedByPlan | null;
+}
+
+export interface Page<T> {
+  items: T[];
+  total: number;
+  page: number;
+  pageSize: number;
+}

@@ -1,0 +1,149 @@
+import { z } from 'zod';
+
+/** A die request's life, in plain words of our own. */
+export const requestStatuses = [
+  'draft',
+  'open',
+  'bidding_closed',
+  'awarded',
+  'in_production',
+  'shipped',
+  'received',
+  'cancelled',
+] as const;
+export const RequestStatus = z.enum(requestStatuses);
+export type RequestStatus = z.infer<typeof RequestStatus>;
+
+export const requestStatusLabels: Record<RequestStatus, string> = {
+  draft: 'Draft',
+  open: 'Open for bids',
+  bidding_closed: 'Bidding closed',
+  awarded: 'Awarded',
+  in_production: 'In production',
+  shipped: 'Shipped',
+  received: 'Received',
+  cancelled: 'Cancelled',
+};
+
+/** Who moves a request from one status to the next: the printer's side or the awarded die shop. */
+export type TransitionActor = 'printer' | 'awarded_shop';
+
+export interface Transition {
+  from: RequestStatus;
+  to: RequestStatus;
+  action: string;
+  actor: TransitionActor;
+  roles: readonly string[];
+}
+
+// The only moves a request can make. The API enforces this table in one place.
+export const requestTransitions: readonly Transition[] = [
+  { from: 'draft', to: 'open', action: 'publish', actor: 'printer', roles: ['buyer', 'purchasing', 'admin'] },
+  { from: 'draft', to: 'cancelled', action: 'cancel', actor: 'printer', roles: ['buyer', 'purchasing', 'admin'] },
+  { from: 'open', to: 'bidding_closed', action: 'close-bidding', actor: 'printer', roles: ['purchasing', 'admin'] },
+  { from: 'open', to: 'cancelled', action: 'cancel', actor: 'printer', roles: ['buyer', 'purchasing', 'admin'] },
+  { from: 'bidding_closed', to: 'open', action: 'reopen', actor: 'printer', roles: ['purchasing', 'admin'] },
+  { from: 'bidding_closed', to: 'awarded', action: 'award', actor: 'printer', roles: ['purchasing', 'admin'] },
+  { from: 'bidding_closed', to: 'cancelled', action: 'cancel', actor: 'printer', roles: ['purchasing', 'admin'] },
+  { from: 'awarded', to: 'in_production', action: 'start-production', actor: 'awarded_shop', roles: ['estimator', 'admin'] },
+  { from: 'awarded', to: 'cancelled', action: 'cancel', actor: 'printer', roles: ['purchasing', 'admin'] },
+  { from: 'in_production', to: 'shipped', action: 'ship', actor: 'awarded_shop', roles: ['estimator', 'admin'] },
+  { from: 'shipped', to: 'received', action: 'receive', actor: 'printer', roles: ['buyer', 'purchasing', 'admin'] },
+];
+
+export function findTransition(from: RequestStatus, action: string): Transition | undefined {
+  return requestTransitions.find((t) => t.from === from && t.action === action);
+}
+
+export const ruleTypes = ['cut', 'crease', 'perf', 'kiss'] as const;
+export const RuleType = z.enum(ruleTypes);
+export type RuleType = z.infer<typeof RuleType>;
+export const ruleTypeLabels: Record<RuleType | 'other', string> = {
+  cut: 'Cutting rule',
+  crease: 'Creasing rule',
+  perf: 'Perforating rule',
+  kiss: 'Kiss cut',
+  other: 'Other (not priced)',
+};
+
+export const Grain = z.enum(['long', 'short']);
+export type Grain = z.infer<typeof Grain>;
+export const Visibility = z.enum(['public', 'invited']);
+export type Visibility = z.infer<typeof Visibility>;
+
+const IsoDate = z.iso.date({ error: 'Enter a date as YYYY-MM-DD' });
+const Instant = z.iso.datetime({ offset: true, error: 'Enter a date and time' });
+const Inches = (what: string) =>
+  z.number({ error: `Enter ${what} in inches` }).positive(`${what} must be more than 0`).max(120, `${what} is at most 120 in`);
+const optionalText = (max: number) =>
+  z.string().trim().max(max, `At most ${max} characters`).nullable().optional();
+
+/** Everything a buyer fills in; a draft may leave most of it empty, publishing needs it complete. */
+export const DieRequestFields = z.object({
+  title: z.string({ error: 'Enter a title' }).trim().min(1, 'Enter a title').max(160, 'At most 160 characters'),
+  jobReference: optionalText(60),
+  quantity: z.number({ error: 'Enter how many dies' }).int('A whole number of dies').min(1, 'At least 1 die').max(100, 'At most 100 dies'),
+  ups: z.number({ error: 'Enter the number of ups' }).int('A whole number of ups').min(1, 'At least 1 up').max(500, 'At most 500 ups'),
+  pieceWidthIn: Inches('The finished width').nullable().optional(),
+  pieceHeightIn: Inches('The finished height').nullable().optional(),
+  stockName: optionalText(120),
+  // Paperboard caliper: 0.001 in (1 pt) to 0.5 in covers folding carton to heavy corrugated.
+  caliperIn: z.number({ error: 'Enter the caliper' }).min(0.001, 'At least 0.001 in').max(0.5, 'At most 0.5 in').nullable().optional(),
+  stockWeightGsm: z.number({ error: 'Enter the stock weight' }).min(20, 'At least 20 g/m²').max(3000, 'At most 3,000 g/m²').nullable().optional(),
+  grain: Grain.nullable().optional(),
+  pressId: z.number().int().positive().nullable().optional(),
+  runSheets: z.number({ error: 'Enter the sheets to run' }).int('A whole number of sheets').min(1).max(10_000_000).nullable().optional(),
+  plannedLeadDays: z.number().int().min(1, 'At least 1 working day').max(60, 'At most 60 working days').default(5),
+  ruleTypes: z.array(RuleType).min(1, 'Choose at least one rule type').max(4),
+  counterWanted: z.boolean().default(false),
+  ejectionRubberWanted: z.boolean().default(true),
+  needByDate: IsoDate.nullable().optional(),
+  bidDeadline: Instant.nullable().optional(),
+  deliveryAddress: optionalText(500),
+  deliveryPostcode: z.string().trim().max(12, 'At most 12 characters').nullable().optional(),
+  notes: optionalText(4000),
+  visibility: Visibility.default('public'),
+  invitedShopIds: z.array(z.number().int().positive()).max(50).default([]),
+});
+
+export const DieRequestCreate = DieRequestFields;
+export type DieRequestCreate = z.input<typeof DieRequestCreate>;
+export const DieRequestUpdate = DieRequestFields.partial().refine((v) => Object.keys(v).length > 0, { error: 'Nothing to change' });
+export type DieRequestUpdate = z.input<typeof DieRequestUpdate>;
+
+/** What publishing needs on top of a draft: dates, stock and where the die goes. */
+export const PublishReady = z
+  .object({
+    caliperIn: z.number({ error: 'Enter the caliper before publishing' }),
+    stockName: z.string({ error: 'Name the stock before publishing' }).min(1, 'Name the stock before publishing'),
+    needByDate: IsoDate,
+    bidDeadline: Instant,
+    deliveryPostcode: z.string({ error: 'Enter the delivery postcode' }).min(3, 'Enter the delivery postcode'),
+  })
+  .refine((v) => new Date(v.bidDeadline).getTime() > Date.now(), { error: 'The bid deadline must be in the future', path: ['bidDeadline'] })
+  .refine((v) => v.needByDate >= v.bidDeadline.slice(0, 10), {
+    error: 'The need-by date cannot be before the bid deadline',
+    path: ['needByDate'],
+  });
+
+export const RequestListQuery = z.object({
+  status: RequestStatus.optional(),
+  pressId: z.coerce.number().int().positive().optional(),
+  needByFrom: IsoDate.optional(),
+  needByTo: IsoDate.optional(),
+  q: z.string().trim().max(100).optional(),
+  sort: z.enum(['needByDate', '-needByDate', 'bidDeadline', '-bidDeadline', 'createdAt', '-createdAt', 'title']).default('-createdAt'),
+  page: z.coerce.number().int().min(1).max(10_000).default(1),
+  pageSize: z.coerce.number().int().min(1).max(100).default(25),
+});
+export type RequestListQuery = z.input<typeof RequestListQuery>;
+
+export const QuestionCreate = z.object({
+  question: z.string({ error: 'Write your question' }).trim().min(3, 'Write your question').max(2000, 'At most 2,000 characters'),
+});
+export const AnswerCreate = z.object({
+  answer: z.string({ error: 'Write the answer' }).trim().min(1, 'Write the answer').max(4000, 'At most 4,000 characters'),
+});
+export const LayerMapUpdate = z.object({
+  layerMap: z.record(z.string().max(255), z.enum(['cut', 'crease', 'perf', 'kiss', 'other'])),
+});

@@ -1,0 +1,133 @@
+// Command-line wrapper: reads a dieline file and prints its metrics. All I/O lives here.
+import { readFileSync, statSync } from 'node:fs';
+import { basename } from 'node:path';
+import { parseArgs } from 'node:util';
+import {
+  analyseDieline,
+  type AnalyseOptions,
+  COMPLEXITY_RULE,
+  DEFAULT_LIMITS,
+  DielineError,
+  type DielineAnalysis,
+  type LayerMap,
+  RULE_TYPES,
+  type RuleType,
+  UNIT_NAMES,
+  type UnitName,
+} from '../src/index';
+
+const USAGE = 'usage: dieline FILE [--json] [--margin IN] [--map LAYER=TYPE]... [--units in|mm|cm|m|ft|px] [--press WxL]';
+
+class UsageError extends Error {}
+
+function options(argv: string[]): { file: string; json: boolean; opts: AnalyseOptions } {
+  const { values, positionals } = parseArgs({
+    args: argv,
+    allowPositionals: true,
+    options: {
+      json: { type: 'boolean', default: false },
+      margin: { type: 'string' },
+      map: { type: 'string', multiple: true },
+      units: { type: 'string' },
+      press: { type: 'string' },
+      help: { type: 'boolean', short: 'h', default: false },
+    },
+  });
+  if (values.help) {
+    process.stdout.write(`${USAGE}\n`);
+    process.exit(0);
+  }
+  if (positionals.length !== 1) throw new UsageError(positionals.length === 0 ? 'no file given' : 'give one file');
+  const opts: AnalyseOptions = { fileName: basename(positionals[0]!) };
+  if (values.margin !== undefined) {
+    const m = Number(values.margin);
+    if (!Number.isFinite(m) || m < 0) throw new UsageError(`--margin "${values.margin}" is not a number of inches`);
+    opts.marginIn = m;
+  }
+  if (values.map) {
+    const map: Record<string, RuleType> = {};
+    for (const entry of values.map) {
+      const at = entry.lastIndexOf('=');
+      const type = entry.slice(at + 1).toLowerCase();
+      if (at <= 0 || !(RULE_TYPES as readonly string[]).includes(type)) {
+        throw new UsageError(`--map "${entry}" is not LAYER=TYPE with TYPE one of ${RULE_TYPES.join(', ')}`);
+      }
+      map[entry.slice(0, at)] = type as RuleType;
+    }
+    opts.layerMap = map as LayerMap;
+  }
+  if (values.units !== undefined) {
+    if (!(UNIT_NAMES as readonly string[]).includes(values.units)) throw new UsageError(`--units must be one of ${UNIT_NAMES.join(', ')}`);
+    opts.units = values.units as UnitName;
+  }
+  if (values.press !== undefined) {
+    const m = /^\s*(\d+(?:\.\d+)?)\s*[xX×]\s*(\d+(?:\.\d+)?)\s*$/.exec(values.press);
+    if (!m) throw new UsageError(`--press "${values.press}" is not WIDTHxLENGTH in inches, e.g. 22x30`);
+    opts.press = { widthIn: Number(m[1]), lengthIn: Number(m[2]) };
+  }
+  return { file: positionals[0]!, json: values.json ?? false, opts };
+}
+
+function table(a: DielineAnalysis, file: string): string {
+  const m = a.metrics;
+  const f = (v: number, digits = 3) => v.toFixed(digits);
+  const rows: Array<[string, string]> = [
+    ['file', file],
+    ['format', `${a.format.toUpperCase()}, drawing units ${a.drawingUnits.name}${a.drawingUnits.source === 'assumed' ? ' (assumed)' : ''}`],
+    ...(['cut', 'crease', 'perf', 'kiss', 'other', 'total'] as const).map(
+      (k): [string, string] => [`length ${k}`, `${f(m.length[k])} in   ${f(m.lengthMm[k], 1)} mm`],
+    ),
+    ['curves', String(m.curves)],
+    ['smallest radius', m.minRadius === null ? '-' : `${f(m.minRadius, 4)} in   ${f(m.minRadius * 25.4, 2)} mm`],
+    ['bends', String(m.bends)],
+    ['joints', String(m.joints)],
+    ['closed contours', String(m.closedContours)],
+    ['punches', String(m.punches)],
+    ['rules box', `${f(m.bbox.width)} × ${f(m.bbox.height)} in`],
+    ['board', `${f(m.board.width)} × ${f(m.board.height)} in`],
+    ['fits press', m.fitsPress === null ? '- (no press given)' : m.fitsPress ? 'yes' : 'no'],
+    ['complexity', m.complexity],
+  ];
+  const w = Math.max(...rows.map(([k]) => k.length));
+  const lines = rows.map(([k, v]) => `${k.padEnd(w)}  ${v}`);
+  lines.push('', 'layers:');
+  for (const l of m.layers) lines.push(`  ${l.name}  →  ${l.ruleType}  (${l.entities} entit${l.entities === 1 ? 'y' : 'ies'})`);
+  if (m.warnings.length > 0) lines.push('', 'warnings:', ...m.warnings.map((x) => `  - ${x}`));
+  lines.push('', `complexity rule: ${COMPLEXITY_RULE}`);
+  return `${lines.join('\n')}\n`;
+}
+
+function main(): number {
+  let file = '';
+  try {
+    const parsed = options(process.argv.slice(2));
+    file = parsed.file;
+    const size = statSync(file).size;
+    if (size > DEFAULT_LIMITS.maxBytes) {
+      throw new DielineError('TOO_LARGE', `The file is ${(size / 1048576).toFixed(1)} MB; the most accepted is ${DEFAULT_LIMITS.maxBytes / 1048576} MB.`);
+    }
+    const result = analyseDieline(new Uint8Array(readFileSync(file)), parsed.opts);
+    process.stdout.write(parsed.json ? `${JSON.stringify(result.metrics)}\n` : table(result, file));
+    return 0;
+  } catch (err) {
+    const oneLine = (s: string) => s.replace(/\s+/g, ' ').trim();
+    if (err instanceof UsageError) {
+      process.stderr.write(`dieline: ${oneLine(err.message)}\n${USAGE}\n`);
+      return 2;
+    }
+    if (err instanceof DielineError) {
+      process.stderr.write(`dieline: ${file}: ${oneLine(err.message)} [${err.code}]\n`);
+      return 1;
+    }
+    const e = err as NodeJS.ErrnoException;
+    if (e && typeof e.code === 'string' && typeof e.message === 'string') {
+      const why = e.code === 'ENOENT' ? 'no such file' : e.code === 'EISDIR' ? 'is a folder, not a file' : e.code === 'EACCES' ? 'permission denied' : oneLine(e.message);
+      process.stderr.write(`dieline: ${file || 'input'}: ${why}\n`);
+      return 1;
+    }
+    process.stderr.write(`dieline: ${file}: ${oneLine(err instanceof Error ? err.message : String(err))}\n`);
+    return 1;
+  }
+}
+
+process.exitCode = main();

@@ -1,0 +1,153 @@
+import type { DrawingUnits, LayerInfo, RulePath } from './drawing';
+import { DielineError } from './errors';
+import { type DielineFormat, decodeInput, detectFormat, FORMATS } from './input';
+import { DEFAULT_LIMITS, type Limits } from './limits';
+import { countBends } from './metrics/bends';
+import { boardSize, boundsOf, DEFAULT_MARGIN_IN, fitsPress, type Press, type Size, sizeOf } from './metrics/board';
+import { type Complexity, complexityOf } from './metrics/complexity';
+import { countContours } from './metrics/contours';
+import { countJoints } from './metrics/joints';
+import { countCurves, type LengthByType, lengthsByType, toMm } from './metrics/lengths';
+import { buildPreview, type DielinePreview } from './preview';
+import { createRuleTypeResolver, isRuleType, type LayerMap } from './ruleType';
+import { readDxf } from './dxf/readDxf';
+import { readSvg } from './svg/readSvg';
+import { buildChains } from './topology/chains';
+import { removeDuplicates } from './topology/duplicates';
+import { buildNetwork } from './topology/network';
+import { isUnitName, type UnitName } from './unitNames';
+
+export interface AnalyseOptions {
+  /** Only words errors; the format is found from the content. */
+  fileName?: string;
+  /** Reads the content as this format, skipping detection. */
+  format?: DielineFormat;
+  /** Layer or label name → rule type, over the keywords; names match case-insensitively. */
+  layerMap?: LayerMap;
+  /** Die board margin around the rules on each side, in inches (default 1). */
+  marginIn?: number;
+  /** The press to check the board against; fitsPress is null without one. */
+  press?: Press | null;
+  /** What one drawing unit is, over $INSUNITS (DXF) or width/height/viewBox (SVG). */
+  units?: UnitName;
+  /** Tighter or looser bounds than DEFAULT_LIMITS. */
+  limits?: Partial<Limits>;
+}
+
+/** The metrics as JSON: every length in inches, lengthMm repeating `length` in millimetres. */
+export interface DielineMetrics {
+  units: 'in';
+  length: LengthByType;
+  lengthMm: LengthByType;
+  curves: number;
+  minRadius: number | null;
+  bends: number;
+  joints: number;
+  closedContours: number;
+  punches: number;
+  bbox: Size;
+  board: Size;
+  complexity: Complexity;
+  warnings: string[];
+  fitsPress: boolean | null;
+  layers: LayerInfo[];
+}
+
+export interface DielineAnalysis {
+  metrics: DielineMetrics;
+  /** Geometry to draw the dieline, kept apart from the metrics. */
+  preview: DielinePreview;
+  format: DielineFormat;
+  /** What one unit of the drawing was taken to be. */
+  drawingUnits: DrawingUnits;
+}
+
+/** Analyses a DXF or SVG dieline. Throws DielineError, with a code and a plain message, on bad input. */
+export function analyseDieline(content: string | Uint8Array, opts: AnalyseOptions = {}): DielineAnalysis {
+  checkOptions(opts);
+  const limits: Limits = { ...DEFAULT_LIMITS, ...opts.limits };
+  const text = decodeInput(content, limits.maxBytes);
+  const format = opts.format ?? detectFormat(text, opts.fileName);
+  const resolve = createRuleTypeResolver(opts.layerMap);
+  if (format === 'pdf') {
+    throw new DielineError(
+      'UNSUPPORTED_FORMAT',
+      'PDF dielines are not read: export the dieline from the drawing program as DXF or SVG and upload that.',
+    );
+  }
+  const drawing =
+    format === 'dxf' ? readDxf(text, { resolve, limits, units: opts.units }) : readSvg(text, { resolve, limits, units: opts.units });
+  if (drawing.paths.length === 0) {
+    throw new DielineError('NO_GEOMETRY', 'The drawing has no lines, arcs or curves to measure.');
+  }
+  const warnings = [...drawing.warnings];
+
+  const dedup = removeDuplicates(drawing.paths);
+  if (dedup.removed > 0) {
+    const at = dedup.firstAt!;
+    warnings.push(
+      `${dedup.removed} duplicate or overlapping segment${dedup.removed === 1 ? ' was' : 's were'} counted once ` +
+        `(the first near x ${at.x.toFixed(3)} in, y ${at.y.toFixed(3)} in).`,
+    );
+  }
+  const paths = dedup.paths;
+  const priced: RulePath[] = paths.filter((p) => p.ruleType !== 'other');
+  const otherLayers = [...new Set(drawing.layers.filter((l) => l.ruleType === 'other').map((l) => l.name))];
+  if (otherLayers.length > 0) {
+    warnings.push(
+      `Not priced (no rule type): ${otherLayers.map((n) => `"${n}"`).join(', ')}. Name the rule type in the layer or map the layer.`,
+    );
+  }
+  if (priced.length === 0) warnings.push('No cutting, creasing, perforating or kiss-cut rules were found.');
+
+  const net = buildNetwork(priced);
+  const chains = buildChains(net);
+  const length = lengthsByType(paths);
+  const { curves, minRadius } = countCurves(net.segments);
+  const bends = countBends(net);
+  const joints = countJoints(net);
+  const { closedContours, punches } = countContours(net, chains);
+  const bbox = sizeOf(boundsOf(priced));
+  const board = priced.length > 0 ? boardSize(bbox, opts.marginIn ?? DEFAULT_MARGIN_IN) : { width: 0, height: 0 };
+  const pricedLength = length.total - length.other;
+
+  const metrics: DielineMetrics = {
+    units: 'in',
+    length,
+    lengthMm: toMm(length),
+    curves,
+    minRadius,
+    bends,
+    joints,
+    closedContours,
+    punches,
+    bbox,
+    board,
+    complexity: complexityOf({ bends, curves, joints, punches }, pricedLength),
+    warnings,
+    fitsPress: opts.press && priced.length > 0 ? fitsPress(board, opts.press) : null,
+    layers: [...drawing.layers].sort((a, b) => a.name.localeCompare(b.name) || a.ruleType.localeCompare(b.ruleType)),
+  };
+  return { metrics, preview: buildPreview(paths, boundsOf(paths), drawing.yUp), format, drawingUnits: drawing.units };
+}
+
+function checkOptions(opts: AnalyseOptions): void {
+  const bad = (what: string) => {
+    throw new DielineError('BAD_OPTION', what);
+  };
+  if (opts.format !== undefined && !(FORMATS as readonly string[]).includes(opts.format)) bad(`Unknown format "${opts.format}".`);
+  if (opts.marginIn !== undefined && !(Number.isFinite(opts.marginIn) && opts.marginIn >= 0)) {
+    bad('The board margin must be a number of inches, 0 or more.');
+  }
+  if (opts.press) {
+    const { widthIn, lengthIn } = opts.press;
+    if (!(widthIn > 0 && lengthIn > 0 && Number.isFinite(widthIn) && Number.isFinite(lengthIn))) {
+      bad('The press sheet size must be two positive numbers of inches.');
+    }
+  }
+  if (opts.units !== undefined && !isUnitName(opts.units)) bad(`Unknown units "${String(opts.units)}"; use in, mm, cm, m, ft or px.`);
+  for (const [layer, type] of Object.entries(opts.layerMap ?? {})) {
+    if (!isRuleType(type)) bad(`Layer "${layer}" is mapped to "${String(type)}"; use cut, crease, perf, kiss or other.`);
+  }
+}
+

@@ -1,0 +1,56 @@
+import { spawnSync } from 'node:child_process';
+import { mkdtempSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { describe, expect, it } from 'vitest';
+
+// The command as `npm run -s dieline` runs it: tsx on bin/dieline.ts.
+const root = fileURLToPath(new URL('../../..', import.meta.url));
+const fixture = (name: string) => fileURLToPath(new URL(`../fixtures/${name}`, import.meta.url));
+const run = (...args: string[]) =>
+  spawnSync(process.execPath, [join(root, 'node_modules/tsx/dist/cli.mjs'), join(root, 'packages/dieline/bin/dieline.ts'), ...args], {
+    cwd: root,
+    encoding: 'utf8',
+  });
+
+describe('dieline command', () => {
+  it('prints one JSON object with the metrics fields', () => {
+    const r = run(fixture('box-mm.dxf'), '--json', '--press', '22x30', '--margin', '0.5', '--map', 'CREASE=perf');
+    expect(r.status).toBe(0);
+    const lines = r.stdout.trim().split('\n');
+    expect(lines).toHaveLength(1);
+    const m = JSON.parse(lines[0]!);
+    expect(Object.keys(m)).toEqual(
+      ['units', 'length', 'lengthMm', 'curves', 'minRadius', 'bends', 'joints', 'closedContours', 'punches', 'bbox', 'board', 'complexity', 'warnings', 'fitsPress', 'layers'],
+    );
+    expect(m.lengthMm.perf).toBeCloseTo(50, 9);
+    expect(m.board.width).toBeCloseTo(100 / 25.4 + 1, 12); // 0.5 in margin each side
+    expect(m.fitsPress).toBe(true);
+  }, 30_000);
+
+  it('prints a readable table', () => {
+    const r = run(fixture('label-a4.svg'));
+    expect(r.status).toBe(0);
+    expect(r.stdout).toMatch(/length cut\s+13\.003 in\s+330\.3 mm/);
+    expect(r.stdout).toMatch(/complexity rule: A die is complex/);
+  }, 30_000);
+
+  it('exits non-zero with one line on stderr for a file it cannot read', () => {
+    const dir = mkdtempSync(join(tmpdir(), 'dieline-'));
+    const bad = join(dir, 'broken.dxf');
+    writeFileSync(bad, '0\nSECTION\n2\nENTITIES\n0\nLINE\n8\nCUT\n10\n0');
+    for (const r of [run(bad), run(join(dir, 'missing.dxf')), run(bad, '--json')]) {
+      expect(r.status).not.toBe(0);
+      expect(r.stdout).toBe('');
+      expect(r.stderr.trim().split('\n')).toHaveLength(1);
+      expect(r.stderr).toMatch(/^dieline: .*(cut short|no such file)/);
+    }
+  }, 30_000);
+
+  it('explains a bad option', () => {
+    const r = run(fixture('box-mm.dxf'), '--press', 'big');
+    expect(r.status).toBe(2);
+    expect(r.stderr).toMatch(/--press "big" is not WIDTHxLENGTH/);
+  }, 30_000);
+});

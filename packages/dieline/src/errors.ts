@@ -1,0 +1,22 @@
+/** Why a dieline could not be analysed. Each code has one plain message for the user. */
+export type DielineErrorCode =
+  | 'EMPTY'
+  | 'TOO_LARGE'
+  | 'BINARY'
+  | 'UNKNOWN_FORMAT'
+  | 'UNSUPPORTED_FORMAT'
+  | 'MALFORMED'
+  | 'TRUNCATED'
+  | 'TOO_MANY_ENTITIES'
+  | 'NO_GEOMETRY'
+  | 'BAD_OPTION';
+
+export class DielineError extends Error {
+  readonly code: DielineErrorCode;
+
+  constructor(code: DielineErrorCode, message: string) {
+    super(message);
+    this.name = 'DielineError';
+    this.code = code;
+  }
+}

@@ -1,0 +1,55 @@
+import { describe, expect, it } from 'vitest';
+import { addWorkingDays, checkNeedBy, isWorkingDay, runHours, workingDaysBetween } from './schedule';
+
+// Weekdays of the dates below are from the Gregorian calendar (ISO 8601): 2026-12-04 is a
+// Friday, 2026-12-07 a Monday, 2026-12-25 a Friday.
+describe('working days', () => {
+  it('skips weekends', () => {
+    expect(isWorkingDay('2026-12-04')).toBe(true);
+    expect(isWorkingDay('2026-12-05')).toBe(false);
+    expect(addWorkingDays('2026-12-04', 1)).toBe('2026-12-07');
+    expect(addWorkingDays('2026-12-07', 5)).toBe('2026-12-14');
+    expect(addWorkingDays('2026-12-07', -1)).toBe('2026-12-04');
+    expect(addWorkingDays('2026-12-07', 0)).toBe('2026-12-07');
+  });
+
+  it('skips a shop’s holidays', () => {
+    const holidays = new Set(['2026-12-25']);
+    expect(addWorkingDays('2026-12-24', 1, holidays)).toBe('2026-12-28');
+    expect(workingDaysBetween('2026-12-21', '2026-12-28', holidays)).toBe(4);
+  });
+
+  it('counts between two dates, signed', () => {
+    expect(workingDaysBetween('2026-12-04', '2026-12-07')).toBe(1);
+    expect(workingDaysBetween('2026-12-07', '2026-12-04')).toBe(-1);
+    expect(workingDaysBetween('2026-12-07', '2026-12-07')).toBe(0);
+  });
+
+  it('refuses what is not a date', () => {
+    expect(() => addWorkingDays('2026-13-01', 1)).toThrow(RangeError);
+    expect(() => addWorkingDays('tomorrow', 1)).toThrow(RangeError);
+  });
+});
+
+describe('die-cutting run and need-by date', () => {
+  // Common practice: a run of 10,000 sheets at 5,000 sheets an hour takes 2 hours.
+  it('times the run from the press’s typical speed', () => {
+    expect(runHours(10_000, 5_000)).toBe(2);
+    expect(() => runHours(10, 0)).toThrow(RangeError);
+  });
+
+  it('finds the latest arrival and the slack', () => {
+    // Today Mon 7 Dec, lead 5 working days → die ready Mon 14 Dec. A 20-hour run is 3 shifts
+    // of 8 hours; need-by Fri 18 Dec → latest arrival 3 working days before: Tue 15 Dec.
+    const check = checkNeedBy({ today: '2026-12-07', needByDate: '2026-12-18', leadDays: 5, runHours: 20 });
+    expect(check).toEqual({ dieReadyBy: '2026-12-14', runDays: 3, latestArrival: '2026-12-15', slackDays: 1, ok: true });
+  });
+
+  it('flags a need-by date that is too close', () => {
+    const check = checkNeedBy({ today: '2026-12-07', needByDate: '2026-12-11', leadDays: 5, runHours: 2 });
+    // Ready Mon 14 Dec, but the die must arrive by Thu 10 Dec: 2 working days late.
+    expect(check.latestArrival).toBe('2026-12-10');
+    expect(check.slackDays).toBe(-2);
+    expect(check.ok).toBe(false);
+  });
+});

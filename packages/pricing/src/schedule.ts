@@ -1,0 +1,79 @@
+// Dates for planning a die: working days, the die-cutting run, and whether a need-by date holds.
+// Dates are plain 'YYYY-MM-DD' strings (a need-by date is a date, not an instant).
+
+const DAY_MS = 86_400_000;
+
+function toUtc(date: string): number {
+  const ms = Date.parse(`${date}T00:00:00Z`);
+  if (!/^\d{4}-\d{2}-\d{2}$/.test(date) || Number.isNaN(ms)) throw new RangeError(`Not a date: ${date}`);
+  return ms;
+}
+
+const fromUtc = (ms: number) => new Date(ms).toISOString().slice(0, 10);
+const isWeekend = (ms: number) => [0, 6].includes(new Date(ms).getUTCDay());
+
+export function isWorkingDay(date: string, holidays: ReadonlySet<string> = new Set()): boolean {
+  return !isWeekend(toUtc(date)) && !holidays.has(date);
+}
+
+/** The date `days` working days after `start` (Saturdays, Sundays and the holidays skipped). */
+export function addWorkingDays(start: string, days: number, holidays: ReadonlySet<string> = new Set()): string {
+  let ms = toUtc(start);
+  const step = days >= 0 ? DAY_MS : -DAY_MS;
+  let left = Math.abs(days);
+  while (left > 0) {
+    ms += step;
+    if (!isWeekend(ms) && !holidays.has(fromUtc(ms))) left--;
+  }
+  return fromUtc(ms);
+}
+
+/** Working days from `from` to `to`, counting `to` but not `from`; negative when `to` is earlier. */
+export function workingDaysBetween(from: string, to: string, holidays: ReadonlySet<string> = new Set()): number {
+  const a = toUtc(from);
+  const b = toUtc(to);
+  const sign = b >= a ? 1 : -1;
+  let count = 0;
+  for (let ms = a + sign * DAY_MS; sign > 0 ? ms <= b : ms >= b; ms += sign * DAY_MS) {
+    if (!isWeekend(ms) && !holidays.has(fromUtc(ms))) count++;
+  }
+  return sign * count;
+}
+
+/** Hours to run `sheets` on a press at `sheetsPerHour` (its typical speed). */
+export function runHours(sheets: number, sheetsPerHour: number): number {
+  if (!(sheets >= 0) || !(sheetsPerHour > 0)) throw new RangeError('Sheets must be 0 or more and the speed above 0');
+  return sheets / sheetsPerHour;
+}
+
+export interface NeedByCheck {
+  /** When the die can be here at the earliest: today plus the die's lead time in working days. */
+  dieReadyBy: string;
+  /** Working days the die-cutting run takes, in shifts of `hoursPerDay`, rounded up. */
+  runDays: number;
+  /** The last date the die can arrive for the run to finish by the need-by date. */
+  latestArrival: string;
+  /** Working days to spare (negative: late by that many). */
+  slackDays: number;
+  ok: boolean;
+}
+
+/**
+ * Does the need-by date leave time for the die maker's lead time plus the die-cutting run?
+ * The run starts the working day after the die arrives and uses whole shifts.
+ */
+export function checkNeedBy(opts: {
+  today: string;
+  needByDate: string;
+  leadDays: number;
+  runHours: number;
+  hoursPerDay?: number;
+  holidays?: ReadonlySet<string>;
+}): NeedByCheck {
+  const holidays = opts.holidays ?? new Set<string>();
+  const runDays = Math.ceil(opts.runHours / (opts.hoursPerDay ?? 8));
+  const dieReadyBy = addWorkingDays(opts.today, opts.leadDays, holidays);
+  const latestArrival = addWorkingDays(opts.needByDate, -runDays, holidays);
+  const slackDays = workingDaysBetween(dieReadyBy, latestArrival, holidays);
+  return { dieReadyBy, runDays, latestArrival, slackDays, ok: slackDays >= 0 };
+}
