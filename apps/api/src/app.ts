@@ -12,7 +12,9 @@ import { authRoutes } from './routes/authRoutes';
 import { healthRoutes } from './routes/healthRoutes';
 import { invitationRoutes } from './routes/invitationRoutes';
 import { meRoutes } from './routes/meRoutes';
+import { bidRoutes } from './routes/bidRoutes';
 import { fileRoutes } from './routes/fileRoutes';
+import { notificationRoutes } from './routes/notificationRoutes';
 import { marketplaceRoutes } from './routes/marketplaceRoutes';
 import { pressRoutes } from './routes/pressRoutes';
 import { requestRoutes } from './routes/requestRoutes';
@@ -56,6 +58,8 @@ export function createApp(deps: AppDeps): Express {
   api.use('/presses', pressRoutes(services, requireAuth));
   api.use('/requests', requestRoutes(services, requireAuth, config.maxUploadBytes));
   api.use('/files', fileRoutes(services, requireAuth));
+  api.use('/notifications', notificationRoutes(requireAuth));
+  api.use(bidRoutes(services, requireAuth));
   api.use(marketplaceRoutes(services, requireAuth));
   api.use(notFoundHandler);
   app.use('/api', api);

@@ -7,3 +7,4 @@ export * from './queues';
 export * from './dates';
 export * from './requests';
 export * from './requestDtos';
+export * from './bids';

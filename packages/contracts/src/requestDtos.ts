@@ -1,3 +1,4 @@
+import type { BidDto } from './bids';
 import type { Press } from './presses';
 import type { Grain, RequestStatus, RuleType, Visibility } from './requests';
 
@@ -97,6 +98,18 @@ export interface DieRequestDetail extends DieRequestSummary {
   isOwner: boolean;
   boardFitsPress: boolean | null;
   needBy: NeedByPlan | null;
+  /** Bids can be sent or changed now. */
+  biddingOpen: boolean;
+  /** A die shop's own bid on this request. */
+  myBid: BidDto | null;
+  /** What a die shop learns after the award: only whether it won. */
+  outcome: 'won' | 'not_awarded' | null;
+  /** The award: the printer sees it whole; the winning shop sees its purchase order. */
+  award: { id: number; poNumber: string; shopName: string | null; totalCents: number; currency: string; promisedShipDate: string; reason: string | null } | null;
+  trackingNote: string | null;
+  shippedAt: string | null;
+  receivedAt: string | null;
+  receivedCondition: 'good' | 'damaged' | null;
 }
 
 export interface Page<T> {

@@ -34,6 +34,14 @@ export class DieRequest extends Model {
   notes!: string | null;
   visibility!: Visibility;
   publishedAt!: Date | null;
+  biddingClosedAt!: Date | null;
+  closedEarly!: boolean;
+  productionStartedAt!: Date | null;
+  shippedAt!: Date | null;
+  trackingNote!: string | null;
+  receivedAt!: Date | null;
+  receivedCondition!: 'good' | 'damaged' | null;
+  receivedNotes!: string | null;
   createdAt!: Date;
   updatedAt!: Date;
   organisation?: Organisation;

@@ -7,3 +7,7 @@ export { User } from './User';
 export { DieRequest } from './DieRequest';
 export { DielineFile } from './DielineFile';
 export { RequestQuestion } from './RequestQuestion';
+export { Award } from './Award';
+export { Bid } from './Bid';
+export { BidRevision } from './BidRevision';
+export { Notification } from './Notification';

@@ -6,12 +6,16 @@ import { createPressService } from './pressService';
 import { createUserService } from './userService';
 import { createRequestService } from './requestService';
 import { createFileService } from './fileService';
+import { createBidService } from './bidService';
+import { createAwardService } from './awardService';
 
 export function createServices(deps: ServiceDeps, limiter: LoginLimiter) {
   const requests = createRequestService(deps);
   return {
     requests,
     files: createFileService(deps, requests),
+    bids: createBidService(deps, requests),
+    awards: createAwardService(deps, requests),
     auth: createAuthService(deps, limiter),
     users: createUserService(deps),
     invitations: createInvitationService(deps),

@@ -8,6 +8,7 @@ import {
   type Page,
   RequestListQuery,
   type RequestQuestionDto,
+  type BidDto,
 } from '@kerfmark/contracts';
 import { checkNeedBy, runHours } from '@kerfmark/pricing';
 import type { Knex } from 'knex';
@@ -15,11 +16,13 @@ import type { QueryBuilder } from 'objection';
 import type { AuthUser } from '../auth/passport';
 import { badRequest, conflict, forbidden, HttpError, notFound } from '../lib/httpError';
 import { parse } from '../lib/parse';
-import { DieRequest, Organisation, Press, RequestQuestion } from '../models';
+import { Award, Bid, BidRevision, DieRequest, Organisation, Press, RequestQuestion } from '../models';
+import { todayIn } from '../lib/todayIn';
+import { biddingOpen } from './bidService';
 import { recordAudit } from './auditService';
 import type { ServiceDeps } from './deps';
 import { transitionRequest, allowedActions } from './requestStatus';
-import { primaryFile, toFileDto, toPressDto, toSummary } from './requestViews';
+import { primaryFile, toBidDto, toFileDto, toPressDto, toSummary } from './requestViews';
 
 /** Statuses a die shop may look at, when the request is open to it. */
 const SHOP_VISIBLE = ['open', 'bidding_closed'] as const;
@@ -28,18 +31,24 @@ const EDITABLE = ['draft', 'open'] as const;
 /** Narrows a query to requests this die shop may see: open to every shop, or it was invited. */
 // eslint-disable-next-line @typescript-eslint/no-explicit-any
 export function visibleToShop<Q extends QueryBuilder<DieRequest, any>>(query: Q, shopId: number): Q {
-  return query
-    .whereIn('die_requests.status', [...SHOP_VISIBLE])
-    .where((q) =>
-      q
-        .where('die_requests.visibility', 'public')
-        .orWhereExists(
-          DieRequest.relatedQuery('invitedShops').where('invitedShops.id', shopId),
-        ),
-    ) as Q;
+  return query.where((visible) =>
+    visible
+      .where((open) =>
+        open
+          .whereIn('die_requests.status', [...SHOP_VISIBLE])
+          .where((q) =>
+            q.where('die_requests.visibility', 'public').orWhereExists(DieRequest.relatedQuery('invitedShops').where('invitedShops.id', shopId)),
+          ),
+      )
+      // A shop that bid keeps seeing the request, to learn the outcome.
+      .orWhereExists(Bid.query().whereColumn('bids.requestId', 'die_requests.id').where('bids.shopId', shopId)),
+  ) as Q;
 }
 
-const today = (timeZone: string) => new Intl.DateTimeFormat('en-CA', { timeZone }).format(new Date());
+
+async function bidDto(bid: Bid): Promise<BidDto> {
+  return toBidDto(bid, await BidRevision.query().where({ bidId: bid.id }).orderBy('id'));
+}
 
 export function createRequestService({ knex }: ServiceDeps) {
   /** The request if this user may see it; anything else is the same 404. */
@@ -100,6 +109,10 @@ export function createRequestService({ knex }: ServiceDeps) {
     const request = await findVisible(actor, id);
     await request.$fetchGraph('[organisation, press, files(byUpload), invitedShops]');
     const isOwner = actor.orgKind === 'printer';
+    const award = await Award.query().findOne({ requestId: id }).withGraphFetched('shop');
+    const won = !isOwner && award?.shopId === actor.organisationId;
+    const ownBid = isOwner ? undefined : await Bid.query().findOne({ requestId: id, shopId: actor.organisationId });
+    const myBid = ownBid ? await bidDto(ownBid) : null;
     const questions = await RequestQuestion.query().where({ requestId: id }).orderBy('askedAt');
     const file = primaryFile(request.files);
     const board = file?.analysisStatus === 'done' ? (file.metrics as { board?: { width: number; height: number } } | null)?.board : undefined;
@@ -111,7 +124,7 @@ export function createRequestService({ knex }: ServiceDeps) {
         : null;
     const hours = press && request.runSheets ? runHours(request.runSheets, press.typicalSpeedSph) : null;
     const needBy = request.needByDate
-      ? { runHours: hours, ...checkNeedBy({ today: today(actor.timeZone), needByDate: request.needByDate, leadDays: request.plannedLeadDays, runHours: hours ?? 0 }) }
+      ? { runHours: hours, ...checkNeedBy({ today: todayIn(actor.timeZone), needByDate: request.needByDate, leadDays: request.plannedLeadDays, runHours: hours ?? 0 }) }
       : null;
     return {
       ...toSummary(request),
@@ -127,15 +140,34 @@ export function createRequestService({ knex }: ServiceDeps) {
       plannedLeadDays: request.plannedLeadDays,
       counterWanted: request.counterWanted,
       ejectionRubberWanted: request.ejectionRubberWanted,
-      deliveryAddress: isOwner ? request.deliveryAddress : null,
+      deliveryAddress: isOwner || won ? request.deliveryAddress : null,
       notes: request.notes,
       invitedShops: isOwner ? (request.invitedShops ?? []).map((s) => ({ id: s.id, name: s.name })) : [],
       files: (request.files ?? []).map(toFileDto),
       questions: questionsFor(actor, questions, isOwner),
-      allowedActions: allowedActions(actor, request.status, request.organisationId, null),
+      allowedActions: allowedActions(actor, request.status, request.organisationId, award?.shopId ?? null),
       isOwner,
       boardFitsPress: fits,
       needBy,
+      biddingOpen: biddingOpen(request),
+      myBid,
+      outcome: isOwner || !award ? null : won ? 'won' : 'not_awarded',
+      award:
+        award && (isOwner || won)
+          ? {
+              id: award.id,
+              poNumber: award.poNumber,
+              shopName: isOwner ? (award.shop?.name ?? null) : null,
+              totalCents: award.totalCents,
+              currency: award.currency,
+              promisedShipDate: award.promisedShipDate,
+              reason: isOwner ? award.reason : null,
+            }
+          : null,
+      trackingNote: isOwner || won ? request.trackingNote : null,
+      shippedAt: request.shippedAt?.toISOString() ?? null,
+      receivedAt: isOwner || won ? (request.receivedAt?.toISOString() ?? null) : null,
+      receivedCondition: isOwner || won ? request.receivedCondition : null,
     };
   }
 

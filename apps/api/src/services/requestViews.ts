@@ -1,5 +1,5 @@
-import type { DielineFileDto, DielineMetrics, DieRequestSummary, Press as PressDto } from '@kerfmark/contracts';
-import type { DielineFile, DieRequest, Press } from '../models';
+import type { BidDto, DielineFileDto, DielineMetrics, DieRequestSummary, Press as PressDto } from '@kerfmark/contracts';
+import type { Bid, BidRevision, DielineFile, DieRequest, Press } from '../models';
 
 /** The file whose metrics stand for the request: the one marked primary, else the newest analysed. */
 export function primaryFile(files: DielineFile[] = []): DielineFile | undefined {
@@ -62,3 +62,32 @@ export function toSummary(request: DieRequest): DieRequestSummary {
     updatedAt: request.updatedAt.toISOString(),
   };
 }
+
+export function toBidDto(bid: Bid, revisions: BidRevision[]): BidDto {
+  return {
+    id: bid.id,
+    requestId: bid.requestId,
+    status: bid.status,
+    revision: bid.revision,
+    lines: bid.lines,
+    currency: bid.currency,
+    totalCents: bid.totalCents,
+    leadDays: bid.leadDays,
+    promisedShipDate: bid.promisedShipDate,
+    validUntil: bid.validUntil,
+    notes: bid.notes,
+    submittedAt: bid.submittedAt.toISOString(),
+    updatedAt: bid.updatedAt.toISOString(),
+    revisions: revisions.map((r) => ({
+      revision: r.revision,
+      action: r.action,
+      totalCents: r.totalCents,
+      currency: r.currency,
+      leadDays: r.leadDays,
+      promisedShipDate: r.promisedShipDate,
+      validUntil: r.validUntil,
+      createdAt: r.createdAt.toISOString(),
+    })),
+  };
+}
+

@@ -92,13 +92,68 @@ export async function createWorld() {
 }
 
 /** Waits for an e-mail to arrive at the mail catcher and returns it. */
-export async function waitForEmail(to: string, timeoutMs = 15_000): Promise<{ subject: string; text: string; html: string | null }> {
+export async function waitForEmail(
+  to: string,
+  subject: string | RegExp = '',
+  timeoutMs = 15_000,
+): Promise<{ subject: string; text: string; html: string | null }> {
   const until = Date.now() + timeoutMs;
   while (Date.now() < until) {
     const res = await fetch(`${process.env.MAIL_CATCHER_URL}/api/messages?to=${encodeURIComponent(to)}`);
     const messages = (await res.json()) as Array<{ subject: string; text: string; html: string | null }>;
-    if (messages.length) return messages[0]!;
+    const match = messages.find((m) => (typeof subject === 'string' ? m.subject.includes(subject) : subject.test(m.subject)));
+    if (match) return match;
     await new Promise((r) => setTimeout(r, 200));
   }
   throw new Error(`no e-mail to ${to} within ${timeoutMs} ms`);
+}
+
+/**
+ * An open request with a measured dieline (the 4 × 3 in test rectangle: 14 in of cutting rule and
+ * 4 in of creasing rule), made straight in the database so marketplace tests need no worker.
+ */
+export async function createOpenRequest(world: { printer: Organisation; users: { buyer: User } }, opts: { deadline?: Date; needByDate?: string } = {}) {
+  const { analyseDieline } = await import('@kerfmark/dieline');
+  const { rectangleDxf } = await import('./fixtures');
+  const { DieRequest, DielineFile } = await import('../models');
+  const { metrics, preview } = analyseDieline(rectangleDxf);
+  const request = await DieRequest.query().insertAndFetch({
+    organisationId: world.printer.id,
+    createdBy: world.users.buyer.id,
+    title: `Carton ${unique()}`,
+    status: 'open',
+    quantity: 1,
+    ups: 2,
+    stockName: '18 pt SBS',
+    caliperIn: 0.018,
+    ruleTypes: ['cut', 'crease'],
+    needByDate: opts.needByDate ?? new Date(Date.now() + 40 * 86_400_000).toISOString().slice(0, 10),
+    bidDeadline: opts.deadline ?? new Date(Date.now() + 7 * 86_400_000),
+    deliveryAddress: '1 Test Street',
+    deliveryPostcode: '60614',
+    visibility: 'public',
+    publishedAt: new Date(),
+  } as Partial<InstanceType<typeof DieRequest>>);
+  await DielineFile.query().insert({
+    requestId: request.id,
+    fileName: 'carton.dxf',
+    format: 'dxf',
+    contentType: 'application/dxf',
+    byteSize: rectangleDxf.length,
+    sha256: 'test',
+    s3Key: `test/${unique()}.dxf`,
+    isPrimary: true,
+    analysisStatus: 'done',
+    metrics: metrics as unknown as Record<string, unknown>,
+    preview,
+    layerMap: {},
+  });
+  return request;
+}
+
+/** Another die shop with an estimator, signed in. */
+export async function createShop() {
+  const shop = await createOrg('die_shop');
+  const estimator = await createUser(shop, 'estimator');
+  return { shop, estimator, token: await signIn(estimator) };
 }

@@ -1,0 +1,58 @@
+import { Router, type RequestHandler } from 'express';
+import { AwardInput, BidInput, DeclineInput, ReceiveInput, ShipInput } from '@kerfmark/contracts';
+import { parse, parseId } from '../lib/parse';
+import { allow } from '../middleware/allow';
+import type { Services } from '../services';
+
+/** Bids, the award and the die's way back to the printer. */
+export function bidRoutes(services: Services, requireAuth: RequestHandler): Router {
+  const router = Router();
+  const shop = [requireAuth, allow({ kind: 'die_shop' })];
+  const printer = [requireAuth, allow({ kind: 'printer' })];
+  const requestId = (value: unknown) => parseId(value, 'That die request');
+
+  router.post('/requests/:id/bids', ...shop, async (req, res) => {
+    res.status(201).json(await services.bids.submit(req.user!, requestId(req.params.id), parse(BidInput, req.body)));
+  });
+  router.get('/requests/:id/my-bid', ...shop, async (req, res) => {
+    res.json(await services.bids.mine(req.user!, requestId(req.params.id)));
+  });
+  router.post('/requests/:id/decline', ...shop, async (req, res) => {
+    await services.bids.decline(req.user!, requestId(req.params.id), parse(DeclineInput, req.body).reason);
+    res.status(204).end();
+  });
+  router.patch('/bids/:id', ...shop, async (req, res) => {
+    res.json(await services.bids.revise(req.user!, parseId(req.params.id, 'That bid'), parse(BidInput, req.body)));
+  });
+  router.post('/bids/:id/withdraw', ...shop, async (req, res) => {
+    res.json(await services.bids.withdraw(req.user!, parseId(req.params.id, 'That bid')));
+  });
+
+  router.get('/requests/:id/bids', ...printer, async (req, res) => {
+    res.json(await services.bids.compare(req.user!, requestId(req.params.id)));
+  });
+  router.post('/requests/:id/close-bidding', ...printer, async (req, res) => {
+    res.json(await services.awards.closeBidding(req.user!, requestId(req.params.id)));
+  });
+  router.post('/requests/:id/award', ...printer, async (req, res) => {
+    res.json(await services.awards.award(req.user!, requestId(req.params.id), parse(AwardInput, req.body)));
+  });
+  router.post('/requests/:id/receive', ...printer, async (req, res) => {
+    res.json(await services.awards.receive(req.user!, requestId(req.params.id), parse(ReceiveInput, req.body)));
+  });
+
+  router.post('/requests/:id/start-production', ...shop, async (req, res) => {
+    res.json(await services.awards.startProduction(req.user!, requestId(req.params.id)));
+  });
+  router.post('/requests/:id/ship', ...shop, async (req, res) => {
+    res.json(await services.awards.ship(req.user!, requestId(req.params.id), parse(ShipInput, req.body).trackingNote));
+  });
+
+  router.get('/purchase-orders/:id/pdf', requireAuth, async (req, res) => {
+    const { fileName, pdf } = await services.awards.purchaseOrder(req.user!, parseId(req.params.id, 'That purchase order'));
+    res.set({ 'Content-Type': 'application/pdf', 'Content-Disposition': `inline; filename="${fileName}"`, 'Cache-Control': 'private, no-store' });
+    res.send(pdf);
+  });
+
+  return router;
+}

@@ -1,0 +1,264 @@
+import { formatMoney } from '@kerfmark/pricing';
+import type { DielineMetrics } from '@kerfmark/contracts';
+import type { Knex } from 'knex';
+import type { AuthUser } from '../auth/passport';
+import { badRequest, conflict, HttpError, notFound } from '../lib/httpError';
+import { todayIn } from '../lib/todayIn';
+import { Award, Bid, DieRequest, Organisation, User } from '../models';
+import { biddingOpen } from './bidService';
+import type { ServiceDeps } from './deps';
+import { purchaseOrderPdf } from './documents/purchaseOrderPdf';
+import { notifyOrganisation } from './notificationService';
+import type { createRequestService } from './requestService';
+import { transitionRequest } from './requestStatus';
+import { primaryFile } from './requestViews';
+
+export function createAwardService(deps: ServiceDeps, requests: ReturnType<typeof createRequestService>) {
+  const { knex, config, storage, logger } = deps;
+  const notify = (trx: Knex.Transaction, orgId: number, notice: Parameters<typeof notifyOrganisation>[3]) =>
+    notifyOrganisation(trx, { emails: deps.emails, appUrl: config.appUrl }, orgId, notice);
+
+  async function bidderShops(trx: Knex.Transaction, requestId: number): Promise<number[]> {
+    return (await Bid.query(trx).where({ requestId }).select('shopId')).map((b) => b.shopId);
+  }
+
+  async function closeInside(trx: Knex.Transaction, actor: AuthUser, request: DieRequest) {
+    const early = biddingOpen(request);
+    await transitionRequest(trx, actor, request.id, 'close-bidding', {
+      patch: { biddingClosedAt: new Date(), closedEarly: early },
+      detail: { early },
+    });
+    for (const shopId of await bidderShops(trx, request.id)) {
+      await notify(trx, shopId, {
+        kind: 'bidding_closed',
+        title: `Bidding closed: ${request.title}`,
+        body: early
+          ? `The buyer closed bidding on "${request.title}" before the deadline. Bids can no longer be changed.`
+          : `Bidding on "${request.title}" has closed. Bids can no longer be changed.`,
+        link: `/requests/${request.id}`,
+      });
+    }
+  }
+
+  /** The awarded shop of a request, for the moves only that shop may make. */
+  async function awardOf(trx: Knex.Transaction | Knex, requestId: number) {
+    return Award.query(trx).findOne({ requestId });
+  }
+
+  return {
+    async closeBidding(actor: AuthUser, requestId: number) {
+      await knex.transaction(async (trx) => {
+        await requests.findOwned(actor, requestId, trx);
+        const request = await DieRequest.query(trx).findById(requestId).forUpdate().throwIfNotFound();
+        await closeInside(trx, actor, request);
+      });
+      return requests.detail(actor, requestId);
+    },
+
+    /**
+     * Awards one bid, once: the request row is locked, so a second award waits and then finds the
+     * request awarded (409); the unique award per request backs that up.
+     */
+    async award(actor: AuthUser, requestId: number, input: { bidId: number; reason?: string }) {
+      const awardId = await knex.transaction(async (trx) => {
+        await requests.findOwned(actor, requestId, trx);
+        const request = await DieRequest.query(trx).findById(requestId).forUpdate().throwIfNotFound();
+        if (request.status === 'awarded' || (await awardOf(trx, requestId))) throw conflict('This request has already been awarded.');
+        if (request.status === 'open') {
+          if (biddingOpen(request)) throw conflict('Close bidding before awarding: bids are still sealed.');
+          await closeInside(trx, actor, request);
+        }
+        const bid = await Bid.query(trx).findOne({ id: input.bidId, requestId }).withGraphFetched('shop');
+        if (!bid || bid.status !== 'submitted') throw notFound('That bid');
+        if (bid.validUntil < todayIn(actor.timeZone)) {
+          throw new HttpError(409, 'bid_expired', `That bid’s price held until ${bid.validUntil}. Ask the shop to confirm it before awarding.`);
+        }
+        const others = await Bid.query(trx).where({ requestId, status: 'submitted', currency: bid.currency });
+        const lowest = Math.min(...others.map((b) => b.totalCents));
+        const reason = input.reason?.trim() || null;
+        // Common purchasing practice: passing over the lowest price needs a written reason.
+        if (bid.totalCents > lowest && !reason) {
+          throw badRequest('Say why you chose a bid that is not the lowest total.', {
+            reason: `The lowest total is ${formatMoney({ cents: lowest, currency: bid.currency })}: write the reason for this choice`,
+          });
+        }
+        const { nextval } = (await trx.raw("SELECT nextval('purchase_order_numbers') AS nextval")).rows[0] as { nextval: string };
+        const poNumber = `PO-${new Date().getUTCFullYear()}-${String(nextval).padStart(5, '0')}`;
+        let award: Award;
+        try {
+          award = await Award.query(trx).insertAndFetch({
+            requestId,
+            bidId: bid.id,
+            shopId: bid.shopId,
+            revision: bid.revision,
+            totalCents: bid.totalCents,
+            dieCents: bid.dieCents,
+            currency: bid.currency,
+            leadDays: bid.leadDays,
+            promisedShipDate: bid.promisedShipDate,
+            reason,
+            awardedBy: actor.id,
+            poNumber,
+          });
+        } catch (error) {
+          if ((error as { name?: string }).name === 'UniqueViolationError') throw conflict('This request has already been awarded.');
+          throw error;
+        }
+        await transitionRequest(trx, actor, requestId, 'award', { detail: { bidId: bid.id, poNumber, reason } });
+        for (const shopId of await bidderShops(trx, requestId)) {
+          const won = shopId === bid.shopId;
+          await notify(trx, shopId, won
+            ? {
+                kind: 'award_won',
+                title: `Awarded to you: ${request.title} (${poNumber})`,
+                body: `Your bid of ${formatMoney({ cents: bid.totalCents, currency: bid.currency })} on "${request.title}" was awarded. Purchase order ${poNumber} is attached to the request; the promised ship date is ${bid.promisedShipDate}.`,
+                link: `/requests/${requestId}`,
+              }
+            : {
+                kind: 'award_lost',
+                title: `Not awarded: ${request.title}`,
+                body: `Thank you for bidding on "${request.title}". This job was not awarded to your shop.`,
+                link: `/requests/${requestId}`,
+              });
+        }
+        return award.id;
+      });
+      // The PDF is made and kept now; should the store be down, it is made again when opened.
+      this.purchaseOrder(actor, awardId).catch((error: unknown) => logger.warn({ err: error, awardId }, 'purchase order PDF not stored yet'));
+      return requests.detail(actor, requestId);
+    },
+
+    /** The purchase order PDF: for the printer that issued it and the shop it was issued to. */
+    async purchaseOrder(actor: AuthUser, awardId: number): Promise<{ fileName: string; pdf: Buffer }> {
+      const award = await Award.query().findById(awardId).withGraphFetched('shop');
+      if (!award) throw notFound('That purchase order');
+      const request = await DieRequest.query().findById(award.requestId).withGraphFetched('[organisation, files(byUpload)]');
+      const mayRead = request && (actor.organisationId === request.organisationId || actor.organisationId === award.shopId);
+      if (!request || !mayRead) throw notFound('That purchase order');
+      const fileName = `${award.poNumber}.pdf`;
+      if (award.poS3Key) {
+        try {
+          return { fileName, pdf: Buffer.from(await storage.get(award.poS3Key)) };
+        } catch {
+          // made again below
+        }
+      }
+      const bid = await Bid.query().findById(award.bidId);
+      const buyer = await User.query().findById(award.awardedBy ?? 0);
+      const file = primaryFile(request.files);
+      const metrics = file?.metrics as DielineMetrics | null | undefined;
+      const shop = award.shop as Organisation;
+      const pdf = await purchaseOrderPdf({
+        poNumber: award.poNumber,
+        issuedAt: award.awardedAt,
+        timeZone: request.organisation?.timeZone ?? 'UTC',
+        buyer: {
+          organisation: request.organisation?.name ?? '',
+          contact: buyer?.name ?? '',
+          email: buyer?.email ?? '',
+          deliveryAddress: request.deliveryAddress,
+          deliveryPostcode: request.deliveryPostcode,
+        },
+        supplier: { organisation: shop.name, postcode: shop.postcode },
+        request: { id: request.id, title: request.title, jobReference: request.jobReference, needByDate: request.needByDate, quantity: request.quantity, ups: request.ups },
+        dieline: file && metrics ? { fileName: file.fileName, totalRuleIn: metrics.length.total - metrics.length.other, complexity: metrics.complexity } : null,
+        lines: (bid?.lines ?? []).map((l) => ({ kind: l.kind, description: l.description, amountCents: l.amountCents })),
+        totalCents: award.totalCents,
+        currency: award.currency,
+        leadDays: award.leadDays,
+        promisedShipDate: award.promisedShipDate,
+        bidRevision: award.revision,
+        awardReason: award.reason,
+        notes: request.notes,
+      });
+      const key = `purchase-orders/${award.requestId}/${award.poNumber}.pdf`;
+      try {
+        await storage.put(key, pdf, 'application/pdf');
+        await award.$query().patch({ poS3Key: key });
+      } catch (error) {
+        logger.warn({ err: error }, 'purchase order PDF not stored');
+      }
+      return { fileName, pdf };
+    },
+
+    async startProduction(actor: AuthUser, requestId: number) {
+      await knex.transaction(async (trx) => {
+        const award = await awardOf(trx, requestId);
+        if (!award || award.shopId !== actor.organisationId) throw notFound('That die request');
+        await transitionRequest(trx, actor, requestId, 'start-production', { awardedShopId: award.shopId, patch: { productionStartedAt: new Date() } });
+        const request = await DieRequest.query(trx).findById(requestId).throwIfNotFound();
+        await notify(trx, request.organisationId, {
+          kind: 'in_production',
+          title: `In production: ${request.title}`,
+          body: `${actor.name} started making the die for "${request.title}".`,
+          link: `/requests/${requestId}`,
+        });
+      });
+      return requests.detail(actor, requestId);
+    },
+
+    async ship(actor: AuthUser, requestId: number, trackingNote: string) {
+      await knex.transaction(async (trx) => {
+        const award = await awardOf(trx, requestId);
+        if (!award || award.shopId !== actor.organisationId) throw notFound('That die request');
+        await transitionRequest(trx, actor, requestId, 'ship', { awardedShopId: award.shopId, patch: { shippedAt: new Date(), trackingNote }, detail: { trackingNote } });
+        const request = await DieRequest.query(trx).findById(requestId).throwIfNotFound();
+        await notify(trx, request.organisationId, {
+          kind: 'shipped',
+          title: `Shipped: ${request.title}`,
+          body: `The die for "${request.title}" has shipped. ${trackingNote}`,
+          link: `/requests/${requestId}`,
+        });
+      });
+      return requests.detail(actor, requestId);
+    },
+
+    /** The die is in: its awarded price and the dieline's metrics join the price history. */
+    async receive(actor: AuthUser, requestId: number, input: { condition: 'good' | 'damaged'; notes?: string }) {
+      await knex.transaction(async (trx) => {
+        await requests.findOwned(actor, requestId, trx);
+        const award = await awardOf(trx, requestId);
+        if (!award) throw conflict('This request has no award yet.');
+        await transitionRequest(trx, actor, requestId, 'receive', {
+          awardedShopId: award.shopId,
+          patch: { receivedAt: new Date(), receivedCondition: input.condition, receivedNotes: input.notes ?? null },
+          detail: { condition: input.condition },
+        });
+        const request = await DieRequest.query(trx).findById(requestId).withGraphFetched('files(byUpload)').throwIfNotFound();
+        const metrics = primaryFile(request.files)?.metrics as DielineMetrics | null | undefined;
+        const shop = await Organisation.query(trx).findById(award.shopId);
+        if (metrics) {
+          await trx('priceRecords').insert({
+            organisationId: request.organisationId,
+            requestId,
+            awardId: award.id,
+            shopId: award.shopId,
+            shopName: shop?.name ?? '',
+            totalCents: award.totalCents,
+            dieCents: award.dieCents,
+            currency: award.currency,
+            pricedOn: todayIn(actor.timeZone, award.awardedAt),
+            ruleLengthIn: metrics.length.total - metrics.length.other,
+            cutIn: metrics.length.cut,
+            creaseIn: metrics.length.crease,
+            perfIn: metrics.length.perf,
+            kissIn: metrics.length.kiss,
+            bends: metrics.bends,
+            curves: metrics.curves,
+            joints: metrics.joints,
+            punches: metrics.punches,
+            boardAreaSqIn: metrics.board.width * metrics.board.height,
+            complexity: metrics.complexity,
+          });
+        }
+        await notify(trx, award.shopId, {
+          kind: 'received',
+          title: `Received: ${request.title}`,
+          body: `The buyer received the die for "${request.title}" in ${input.condition} condition.`,
+          link: `/requests/${requestId}`,
+        });
+      });
+      return requests.detail(actor, requestId);
+    },
+  };
+}

@@ -1,0 +1,225 @@
+import {
+  formatInZone,
+  type BidComparisonDto,
+  type BidDto,
+  type DielineMetrics,
+} from '@kerfmark/contracts';
+import { addWorkingDays, compareBids, sumCents } from '@kerfmark/pricing';
+import type { Knex } from 'knex';
+import type { z } from 'zod';
+import type { BidInput as BidInputSchema } from '@kerfmark/contracts';
+import type { AuthUser } from '../auth/passport';
+import { badRequest, HttpError, notFound } from '../lib/httpError';
+import { todayIn } from '../lib/todayIn';
+import { Award, Bid, BidRevision, DieRequest } from '../models';
+import { recordAudit } from './auditService';
+import type { ServiceDeps } from './deps';
+import type { createRequestService } from './requestService';
+import { primaryFile, toBidDto } from './requestViews';
+
+type ParsedBid = z.output<typeof BidInputSchema>;
+
+/** Bidding is open while the request is open and its deadline has not passed. */
+export function biddingOpen(request: DieRequest, now = new Date()): boolean {
+  return request.status === 'open' && (!request.bidDeadline || request.bidDeadline.getTime() > now.getTime());
+}
+
+/** Shops' on-time record: awarded jobs shipped by the promised ship date, over all shipped. */
+export async function shopRecords(knex: Knex, shopIds: number[]): Promise<Map<number, { pastJobs: number; onTimeRate: number | null }>> {
+  const rows = shopIds.length
+    ? await knex('awards')
+        .join('dieRequests', 'dieRequests.id', 'awards.requestId')
+        .whereIn('awards.shopId', shopIds)
+        .groupBy('awards.shopId')
+        .select('awards.shopId')
+        .count('* as jobs')
+        .select(knex.raw('count(die_requests.shipped_at) as shipped'))
+        .select(knex.raw('count(*) filter (where die_requests.shipped_at::date <= awards.promised_ship_date) as on_time'))
+    : [];
+  const records = new Map<number, { pastJobs: number; onTimeRate: number | null }>();
+  for (const row of rows as Array<{ shopId: number; jobs: number; shipped: number; onTime: number }>) {
+    records.set(row.shopId, { pastJobs: Number(row.jobs), onTimeRate: Number(row.shipped) ? Number(row.onTime) / Number(row.shipped) : null });
+  }
+  return records;
+}
+
+export function createBidService({ knex }: ServiceDeps, requests: ReturnType<typeof createRequestService>) {
+  const closedError = (request: DieRequest, timeZone: string) =>
+    new HttpError(
+      409,
+      'bidding_closed',
+      request.bidDeadline && request.status === 'open'
+        ? `Bidding on this request closed at ${formatInZone(request.bidDeadline, timeZone)}.`
+        : 'This request is not open for bids.',
+    );
+
+  /** The terms of a bid as the server computes them: totals from the lines, the ship date from the lead time. */
+  async function terms(trx: Knex.Transaction, actor: AuthUser, request: DieRequest, input: ParsedBid) {
+    const today = todayIn(actor.timeZone);
+    if (input.validUntil < today) throw badRequest('The price must hold until today at least.', { validUntil: 'Choose today or later' });
+    const deadlineDay = request.bidDeadline ? todayIn(actor.timeZone, request.bidDeadline) : today;
+    if (input.validUntil < deadlineDay) {
+      throw badRequest('The price must hold at least until the bid deadline.', { validUntil: `Choose ${deadlineDay} or later` });
+    }
+    const holidays = new Set<string>(
+      (await trx('shopHolidays').where({ shopId: actor.organisationId }).pluck('date')).map(String),
+    );
+    return {
+      lines: input.lines,
+      currency: input.currency,
+      totalCents: sumCents(input.lines.map((l) => l.amountCents)),
+      dieCents: sumCents(input.lines.filter((l) => l.kind === 'die').map((l) => l.amountCents)),
+      leadDays: input.leadDays,
+      promisedShipDate: addWorkingDays(today, input.leadDays, holidays),
+      validUntil: input.validUntil,
+      notes: input.notes ?? null,
+    };
+  }
+
+  async function ownBid(trx: Knex.Transaction, actor: AuthUser, bidId: number) {
+    const bid = await Bid.query(trx).findOne({ id: bidId, shopId: actor.organisationId }).forUpdate();
+    if (!bid) throw notFound('That bid');
+    const request = await DieRequest.query(trx).findById(bid.requestId).forShare();
+    if (!request) throw notFound('That bid');
+    return { bid, request };
+  }
+
+  async function withRevisions(bid: Bid): Promise<BidDto> {
+    return toBidDto(bid, await BidRevision.query().where({ bidId: bid.id }).orderBy('id'));
+  }
+
+  const revisionRow = (bid: Bid, action: BidRevision['action'], actor: AuthUser) => ({
+    bidId: bid.id,
+    revision: bid.revision,
+    action,
+    lines: bid.lines,
+    currency: bid.currency,
+    totalCents: bid.totalCents,
+    leadDays: bid.leadDays,
+    promisedShipDate: bid.promisedShipDate,
+    validUntil: bid.validUntil,
+    notes: bid.notes,
+    createdBy: actor.id,
+  });
+
+  return {
+    async submit(actor: AuthUser, requestId: number, input: ParsedBid): Promise<BidDto> {
+      const bid = await knex.transaction(async (trx) => {
+        await requests.findVisible(actor, requestId, trx);
+        const request = await DieRequest.query(trx).findById(requestId).forShare().throwIfNotFound();
+        if (!biddingOpen(request)) throw closedError(request, actor.timeZone);
+        if (await Bid.query(trx).findOne({ requestId, shopId: actor.organisationId })) {
+          throw new HttpError(409, 'bid_exists', 'Your shop has already bid on this request: revise that bid instead.');
+        }
+        let created: Bid;
+        try {
+          created = await Bid.query(trx).insertAndFetch({
+            requestId,
+            shopId: actor.organisationId,
+            status: 'submitted',
+            revision: 1,
+            ...(await terms(trx, actor, request, input)),
+          });
+        } catch (error) {
+          // Two submissions from one shop at once: the unique key lets one through.
+          if ((error as { name?: string }).name === 'UniqueViolationError') {
+            throw new HttpError(409, 'bid_exists', 'Your shop has already bid on this request: revise that bid instead.');
+          }
+          throw error;
+        }
+        await BidRevision.query(trx).insert(revisionRow(created, 'submitted', actor));
+        await recordAudit(trx, { organisationId: actor.organisationId, actorUserId: actor.id, entity: 'bid', entityId: created.id, action: 'submitted', detail: { requestId, revision: 1 } });
+        return created;
+      });
+      return withRevisions(bid);
+    },
+
+    async revise(actor: AuthUser, bidId: number, input: ParsedBid): Promise<BidDto> {
+      const bid = await knex.transaction(async (trx) => {
+        const { bid, request } = await ownBid(trx, actor, bidId);
+        if (!biddingOpen(request)) throw closedError(request, actor.timeZone);
+        const revised = await bid
+          .$query(trx)
+          .patchAndFetch({ ...(await terms(trx, actor, request, input)), status: 'submitted', revision: bid.revision + 1, updatedAt: new Date() });
+        await BidRevision.query(trx).insert(revisionRow(revised, 'revised', actor));
+        await recordAudit(trx, { organisationId: actor.organisationId, actorUserId: actor.id, entity: 'bid', entityId: bid.id, action: 'revised', detail: { revision: revised.revision } });
+        return revised;
+      });
+      return withRevisions(bid);
+    },
+
+    async withdraw(actor: AuthUser, bidId: number): Promise<BidDto> {
+      const bid = await knex.transaction(async (trx) => {
+        const { bid, request } = await ownBid(trx, actor, bidId);
+        if (!biddingOpen(request)) throw closedError(request, actor.timeZone);
+        if (bid.status === 'withdrawn') return bid;
+        const withdrawn = await bid.$query(trx).patchAndFetch({ status: 'withdrawn', updatedAt: new Date() });
+        await BidRevision.query(trx).insert(revisionRow(withdrawn, 'withdrawn', actor));
+        await recordAudit(trx, { organisationId: actor.organisationId, actorUserId: actor.id, entity: 'bid', entityId: bid.id, action: 'withdrawn' });
+        return withdrawn;
+      });
+      return withRevisions(bid);
+    },
+
+    async mine(actor: AuthUser, requestId: number): Promise<BidDto | null> {
+      if (actor.orgKind !== 'die_shop') return null;
+      const bid = await Bid.query().findOne({ requestId, shopId: actor.organisationId });
+      return bid ? withRevisions(bid) : null;
+    },
+
+    async decline(actor: AuthUser, requestId: number, reason: string): Promise<void> {
+      await requests.findVisible(actor, requestId);
+      await knex('requestDeclines')
+        .insert({ requestId, shopId: actor.organisationId, reason, createdBy: actor.id })
+        .onConflict(['requestId', 'shopId'])
+        .merge(['reason', 'createdBy']);
+    },
+
+    /** The sealed bids, opened: only the printer, and only once bidding has closed. */
+    async compare(actor: AuthUser, requestId: number): Promise<BidComparisonDto> {
+      const request = await requests.findOwned(actor, requestId);
+      if (biddingOpen(request) || request.status === 'draft') {
+        throw new HttpError(404, 'bids_sealed', 'Bids stay sealed until the bid deadline, unless purchasing closes bidding early.');
+      }
+      await request.$fetchGraph('files(byUpload)');
+      const metrics = primaryFile(request.files)?.metrics as DielineMetrics | null | undefined;
+      const ruleLengthIn = metrics ? metrics.length.total - metrics.length.other : null;
+      const bids = await Bid.query().where({ requestId, status: 'submitted' }).withGraphFetched('shop').orderBy('totalCents');
+      const records = await shopRecords(knex, bids.map((b) => b.shopId));
+      const rows = compareBids(
+        bids.map((b) => ({ ...b, bidId: b.id, onTimeRate: records.get(b.shopId)?.onTimeRate ?? null, model: b })),
+        { ruleLengthIn, needByDate: request.needByDate, today: todayIn(actor.timeZone) },
+      );
+      const award = await Award.query().findOne({ requestId }).withGraphFetched('shop');
+      return {
+        requestId,
+        needByDate: request.needByDate,
+        priceRuleIn: ruleLengthIn,
+        fairPrice: null,
+        award: award
+          ? { id: award.id, bidId: award.bidId, shopName: award.shop?.name ?? '', totalCents: award.totalCents, currency: award.currency, reason: award.reason, poNumber: award.poNumber, awardedAt: award.awardedAt.toISOString() }
+          : null,
+        bids: rows.map((row) => ({
+          bidId: row.bid.id,
+          shopId: row.bid.shopId,
+          shopName: row.bid.model.shop?.name ?? '',
+          lines: row.bid.lines,
+          currency: row.bid.currency,
+          totalCents: row.bid.totalCents,
+          dieCents: row.bid.dieCents,
+          overLowestCents: row.overLowestCents,
+          centsPerInch: row.centsPerInch,
+          leadDays: row.bid.leadDays,
+          promisedShipDate: row.bid.promisedShipDate,
+          daysLate: row.daysLate,
+          validUntil: row.bid.validUntil,
+          expired: row.expired,
+          onTimeRate: row.bid.onTimeRate,
+          pastJobs: records.get(row.bid.shopId)?.pastJobs ?? 0,
+          revision: row.bid.revision,
+          best: row.best,
+        })),
+      };
+    },
+  };
+}

@@ -1,0 +1,197 @@
+import { bidLineLabels, formatInZone } from '@kerfmark/contracts';
+import { formatMoney, sumCents } from '@kerfmark/pricing';
+import PDFDocument from 'pdfkit';
+import type { PurchaseOrderDoc } from './types';
+
+// The standard PDF fonts: nothing embedded, nothing fetched. They cover Windows-1252 only.
+const REGULAR = 'Helvetica';
+const BOLD = 'Helvetica-Bold';
+const INK = '#1a1a1a';
+const MUTED = '#666666';
+const RULE = '#bbbbbb';
+const MARGIN = 50;
+const SAFETY_LINE = 'Safety: steel-rule dies are sharp. Pack rule edges protected; handle with gloves.';
+
+type Pdf = PDFKit.PDFDocument;
+
+/**
+ * The purchase order an award issues, as a PDF: who buys, who makes, what, for how much and by
+ * when. Deterministic: the same document gives the same bytes (the creation date is issuedAt).
+ */
+export async function purchaseOrderPdf(doc: PurchaseOrderDoc): Promise<Buffer> {
+  checkDocument(doc);
+  const money = (cents: number) => formatMoney({ cents, currency: doc.currency });
+  const pdf = new PDFDocument({
+    size: 'LETTER',
+    margin: MARGIN,
+    bufferPages: true, // so every page can carry "page n of m" at the end
+    info: { Title: `Purchase order ${doc.poNumber}`, Author: 'Kerfmark', Creator: 'Kerfmark', Producer: 'Kerfmark', CreationDate: doc.issuedAt },
+  });
+  const bytes = collect(pdf);
+  const left = pdf.page.margins.left;
+  const width = pdf.page.width - left - pdf.page.margins.right;
+
+  // Wordmark and title.
+  pdf.fillColor(INK).font(BOLD).fontSize(22).text('Kerfmark', left, MARGIN);
+  pdf.fontSize(18).text('Purchase order', left, MARGIN + 2, { width, align: 'right' });
+  pdf.font(REGULAR).fontSize(10).moveDown(0.3);
+  pdf.text(`PO number ${doc.poNumber}`, { width, align: 'right' });
+  pdf.text(`Issued ${formatInZone(doc.issuedAt, doc.timeZone)}`, { width, align: 'right' });
+  pdf.moveDown(1.5);
+
+  // Buyer, supplier and delivery side by side.
+  const gap = 16;
+  const column = (width - 2 * gap) / 3;
+  const top = pdf.y;
+  const bottoms = [
+    block(pdf, left, top, column, 'Buyer', [doc.buyer.organisation, doc.buyer.contact, doc.buyer.email]),
+    block(pdf, left + column + gap, top, column, 'Supplier', [doc.supplier.organisation, doc.supplier.postcode]),
+    block(pdf, left + 2 * (column + gap), top, column, 'Deliver to', doc.buyer.deliveryAddress
+      ? [doc.buyer.deliveryAddress, doc.buyer.deliveryPostcode]
+      : ['To be confirmed by the buyer']),
+  ];
+  pdf.x = left;
+  pdf.y = Math.max(...bottoms) + 12;
+
+  section(pdf, 'Request', width);
+  field(pdf, 'Title', doc.request.title);
+  if (doc.request.jobReference) field(pdf, 'Job reference', doc.request.jobReference);
+  field(pdf, 'Quantity of dies', String(doc.request.quantity));
+  field(pdf, 'Ups', String(doc.request.ups));
+  field(pdf, 'Need-by date', doc.request.needByDate ?? 'None given');
+
+  section(pdf, 'Dieline', width);
+  if (doc.dieline) {
+    field(pdf, 'File', doc.dieline.fileName);
+    field(pdf, 'Total rule length', `${new Intl.NumberFormat('en-US', { maximumFractionDigits: 1 }).format(doc.dieline.totalRuleIn)} in`);
+    field(pdf, 'Complexity', doc.dieline.complexity === 'complex' ? 'Complex' : 'Simple');
+  } else {
+    pdf.text('No dieline attached.');
+  }
+
+  section(pdf, 'Price lines', width);
+  priceTable(pdf, doc, money, left, width);
+
+  section(pdf, 'Terms', width);
+  field(pdf, 'Currency', doc.currency);
+  field(pdf, 'Lead time', `${doc.leadDays} working ${doc.leadDays === 1 ? 'day' : 'days'}`);
+  field(pdf, 'Promised ship date', doc.promisedShipDate);
+  field(pdf, 'Bid revision', String(doc.bidRevision));
+  if (doc.awardReason) field(pdf, 'Award reason', doc.awardReason);
+  if (doc.notes) field(pdf, 'Notes', doc.notes);
+  pdf.moveDown(0.5);
+  pdf.text(`This purchase order accepts bid revision ${doc.bidRevision} as submitted.`);
+  pdf.moveDown(0.5);
+  pdf.font(BOLD).text(SAFETY_LINE).font(REGULAR);
+
+  pageFooters(pdf, doc.poNumber, left, width);
+  pdf.end();
+  return bytes;
+}
+
+/** Refuses a document whose sums, currency or time zone would print wrong. */
+function checkDocument(doc: PurchaseOrderDoc): void {
+  if (doc.lines.length === 0) throw new RangeError('A purchase order needs at least one price line');
+  const sum = sumCents(doc.lines.map((line) => line.amountCents));
+  if (sum !== doc.totalCents) throw new RangeError(`The price lines add up to ${sum} but the total is ${doc.totalCents} (minor units)`);
+  try {
+    formatMoney({ cents: 0, currency: doc.currency });
+  } catch {
+    throw new RangeError(`Not an ISO 4217 currency code: "${doc.currency}"`);
+  }
+  try {
+    formatInZone(doc.issuedAt, doc.timeZone);
+  } catch {
+    throw new RangeError(`Not a valid issue date or time zone: "${doc.timeZone}"`);
+  }
+}
+
+function collect(pdf: Pdf): Promise<Buffer> {
+  return new Promise((resolve, reject) => {
+    const chunks: Buffer[] = [];
+    pdf.on('data', (chunk: Buffer) => chunks.push(chunk));
+    pdf.on('end', () => resolve(Buffer.concat(chunks)));
+    pdf.on('error', reject);
+  });
+}
+
+/** A small labelled block of lines at (x, y); returns where it ends. */
+function block(pdf: Pdf, x: number, y: number, width: number, heading: string, lines: Array<string | null>): number {
+  pdf.font(BOLD).fontSize(9).fillColor(MUTED).text(heading.toUpperCase(), x, y, { width });
+  pdf.font(REGULAR).fontSize(10).fillColor(INK);
+  for (const line of lines) if (line) pdf.text(line, x, pdf.y, { width });
+  return pdf.y;
+}
+
+function section(pdf: Pdf, title: string, width: number): void {
+  // Keep a heading with at least a few lines of what follows it.
+  if (pdf.y + 60 > pdf.page.maxY()) pdf.addPage();
+  const x = pdf.page.margins.left;
+  pdf.moveDown(0.8);
+  pdf.font(BOLD).fontSize(11).fillColor(INK).text(title, x, pdf.y, { width });
+  pdf.moveTo(x, pdf.y + 1).lineTo(x + width, pdf.y + 1).lineWidth(0.5).strokeColor(RULE).stroke();
+  pdf.moveDown(0.4).font(REGULAR).fontSize(10);
+}
+
+function field(pdf: Pdf, label: string, value: string): void {
+  pdf.font(BOLD).text(`${label}: `, { continued: true }).font(REGULAR).text(value);
+}
+
+/** The price lines with amounts right-aligned and the total in bold; repeats its header on a new page. */
+function priceTable(pdf: Pdf, doc: PurchaseOrderDoc, money: (cents: number) => string, left: number, width: number): void {
+  const kindWidth = 130;
+  const amountWidth = 100;
+  const descX = left + kindWidth + 10;
+  const descWidth = width - kindWidth - amountWidth - 20;
+  const amountX = left + width - amountWidth;
+  const header = () => {
+    pdf.font(BOLD).fontSize(9).fillColor(MUTED);
+    const y = pdf.y;
+    pdf.text('Item', left, y, { width: kindWidth });
+    pdf.text('Description', descX, y, { width: descWidth });
+    pdf.text(`Amount (${doc.currency})`, amountX, y, { width: amountWidth, align: 'right' });
+    pdf.y = y + 14;
+    pdf.font(REGULAR).fontSize(10).fillColor(INK);
+  };
+  const row = (kind: string, description: string, amount: string) => {
+    const height = Math.max(pdf.heightOfString(description || ' ', { width: descWidth }), pdf.heightOfString(kind, { width: kindWidth })) + 6;
+    if (pdf.y + height > pdf.page.maxY()) {
+      pdf.addPage();
+      header();
+    }
+    const y = pdf.y;
+    pdf.text(kind, left, y, { width: kindWidth });
+    if (description) pdf.text(description, descX, y, { width: descWidth });
+    pdf.text(amount, amountX, y, { width: amountWidth, align: 'right' });
+    pdf.y = y + height;
+  };
+
+  header();
+  for (const line of doc.lines) {
+    row(bidLineLabels[line.kind as keyof typeof bidLineLabels] ?? line.kind, line.description, money(line.amountCents));
+  }
+  if (pdf.y + 24 > pdf.page.maxY()) {
+    pdf.addPage();
+    header();
+  }
+  pdf.moveTo(left, pdf.y).lineTo(left + width, pdf.y).lineWidth(0.5).strokeColor(RULE).stroke();
+  pdf.y += 4;
+  pdf.font(BOLD);
+  row('Total', '', money(doc.totalCents));
+  pdf.font(REGULAR);
+  pdf.x = left;
+}
+
+/** "PO number · page n of m" under the bottom margin of every page. */
+function pageFooters(pdf: Pdf, poNumber: string, left: number, width: number): void {
+  const { start, count } = pdf.bufferedPageRange();
+  for (let i = start; i < start + count; i++) {
+    pdf.switchToPage(i);
+    const bottom = pdf.page.margins.bottom;
+    // Writing below the margin would make pdfkit start a new page; lift the margin meanwhile.
+    pdf.page.margins.bottom = 0;
+    pdf.font(REGULAR).fontSize(8).fillColor(MUTED)
+      .text(`${poNumber} · page ${i - start + 1} of ${count}`, left, pdf.page.height - bottom + 16, { width, align: 'right', lineBreak: false });
+    pdf.page.margins.bottom = bottom;
+  }
+}

@@ -1,0 +1,53 @@
+/** What a purchase order document says; money in integer cents (minor units) with its currency. */
+export interface PurchaseOrderDoc {
+  poNumber: string;
+  issuedAt: Date;
+  timeZone: string;
+  buyer: { organisation: string; contact: string; email: string; deliveryAddress: string | null; deliveryPostcode: string | null };
+  supplier: { organisation: string; postcode: string | null };
+  request: { id: number; title: string; jobReference: string | null; needByDate: string | null; quantity: number; ups: number };
+  dieline: { fileName: string; totalRuleIn: number; complexity: 'simple' | 'complex' } | null;
+  lines: Array<{ kind: string; description: string; amountCents: number }>;
+  totalCents: number;
+  currency: string;
+  leadDays: number;
+  promisedShipDate: string;
+  bidRevision: number;
+  awardReason: string | null;
+  notes: string | null;
+}
+
+/** Everything the Open Contracting release of one awarded request is built from. */
+export interface OcdsInput {
+  ocidPrefix: string; // e.g. 'ocds-kerfmark'
+  request: {
+    id: number;
+    title: string;
+    description: string | null;
+    status: string; // our request status
+    publishedAt: Date | null;
+    bidDeadline: Date | null;
+    needByDate: string | null;
+    quantity: number;
+  };
+  buyer: { id: number; name: string };
+  bids: Array<{
+    id: number;
+    shop: { id: number; name: string };
+    status: 'submitted' | 'withdrawn';
+    submittedAt: Date;
+    totalCents: number;
+    currency: string;
+  }>;
+  award: {
+    id: number;
+    bidId: number;
+    shop: { id: number; name: string };
+    awardedAt: Date;
+    totalCents: number;
+    currency: string;
+    reason: string | null;
+  };
+  purchaseOrder: { poNumber: string; issuedAt: Date; status: 'active' | 'terminated' };
+  releasedAt: Date;
+}
