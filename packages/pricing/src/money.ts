@@ -22,3 +22,17 @@ export function formatMoney({ cents, currency }: Money, locale = 'en-US'): strin
   const digits = format.resolvedOptions().maximumFractionDigits ?? 2;
   return format.format(cents / 10 ** digits);
 }
+
+/**
+ * Reads an amount as people type it ("1,234.5", "845") into whole minor units, by digits
+ * alone: no binary fraction is ever formed. Returns null for anything that is not an amount.
+ */
+export function parseMoneyInput(text: string, minorDigits = 2): number | null {
+  const cleaned = text.trim().replace(/[,\s]/g, '').replace(/^[$€£¥]/, '');
+  const match = /^(\d+)(?:\.(\d*))?$/.exec(cleaned);
+  if (!match) return null;
+  const fraction = match[2] ?? '';
+  if (fraction.length > minorDigits) return null;
+  const cents = BigInt(match[1]!) * 10n ** BigInt(minorDigits) + BigInt(fraction.padEnd(minorDigits, '0') || '0');
+  return cents <= BigInt(Number.MAX_SAFE_INTEGER) ? Number(cents) : null;
+}

@@ -170,6 +170,9 @@ export function createAwardService(deps: ServiceDeps, requests: ReturnType<typeo
         bidRevision: award.revision,
         awardReason: award.reason,
         notes: request.notes,
+      }).catch((error: unknown) => {
+        if (error instanceof RangeError) throw new HttpError(422, 'document_unprintable', `The purchase order cannot be printed: ${error.message}`);
+        throw error;
       });
       const key = `purchase-orders/${award.requestId}/${award.poNumber}.pdf`;
       try {

@@ -1,4 +1,8 @@
 import type {
+  BidComparisonDto,
+  BidDto,
+  BidInput,
+  NotificationDto,
   DielineFileDto,
   DieRequestCreate,
   DieRequestDetail,
@@ -73,4 +77,25 @@ export const filesApi = {
   makePrimary: (id: number) => api<DielineFileDto>(`/files/${id}/primary`, { method: 'POST' }),
   remap: (id: number, layerMap: Record<string, string>) => api<DielineFileDto>(`/files/${id}/layers`, { method: 'PUT', body: { layerMap } }),
   remove: (id: number) => api<void>(`/files/${id}`, { method: 'DELETE' }),
+};
+
+export const bidsApi = {
+  submit: (requestId: number, input: BidInput) => api<BidDto>(`/requests/${requestId}/bids`, { method: 'POST', body: input }),
+  revise: (bidId: number, input: BidInput) => api<BidDto>(`/bids/${bidId}`, { method: 'PATCH', body: input }),
+  withdraw: (bidId: number) => api<BidDto>(`/bids/${bidId}/withdraw`, { method: 'POST' }),
+  decline: (requestId: number, reason: string) => api<void>(`/requests/${requestId}/decline`, { method: 'POST', body: { reason } }),
+  compare: (requestId: number) => api<BidComparisonDto>(`/requests/${requestId}/bids`),
+  closeBidding: (requestId: number) => api<DieRequestDetail>(`/requests/${requestId}/close-bidding`, { method: 'POST' }),
+  award: (requestId: number, bidId: number, reason?: string) =>
+    api<DieRequestDetail>(`/requests/${requestId}/award`, { method: 'POST', body: { bidId, reason } }),
+  startProduction: (requestId: number) => api<DieRequestDetail>(`/requests/${requestId}/start-production`, { method: 'POST' }),
+  ship: (requestId: number, trackingNote: string) => api<DieRequestDetail>(`/requests/${requestId}/ship`, { method: 'POST', body: { trackingNote } }),
+  receive: (requestId: number, condition: 'good' | 'damaged', notes?: string) =>
+    api<DieRequestDetail>(`/requests/${requestId}/receive`, { method: 'POST', body: { condition, notes } }),
+};
+
+export const notificationsApi = {
+  list: () => api<{ items: NotificationDto[]; unread: number }>('/notifications'),
+  read: (id: number) => api<void>(`/notifications/${id}/read`, { method: 'POST' }),
+  readAll: () => api<void>('/notifications/read-all', { method: 'POST' }),
 };

@@ -107,5 +107,18 @@ describe('purchaseOrderPdf', () => {
     await expect(purchaseOrderPdf({ ...base, totalCents: 99999 })).rejects.toThrow('The price lines add up to 100000 but the total is 99999');
     await expect(purchaseOrderPdf({ ...base, currency: 'US' })).rejects.toThrow('Not an ISO 4217 currency code: "US"');
     await expect(purchaseOrderPdf({ ...base, lines: [], totalCents: 0 })).rejects.toThrow('at least one price line');
+    await expect(purchaseOrderPdf({ ...base, timeZone: 'Mars/Olympus' })).rejects.toThrow('time zone: "Mars/Olympus"');
+  });
+
+  it('prints Western European text and line ends plainly, and refuses what the standard fonts cannot show', async () => {
+    // The standard fonts' WinAnsiEncoding is Windows-1252 (ISO 32000-1, Annex D): "é" and "€" are in it, "ł" is not.
+    const buf = await purchaseOrderPdf({ ...base, notes: 'Livraison à l’entrepôt, 5 € de frais\r\nQuai\t2' });
+    const text = (await readBack(buf)).join(' ');
+    expect(text).toContain('Livraison à l’entrepôt, 5 € de frais');
+    // A Windows line end and a tab print as a line break and a space, not as stray glyphs (common practice).
+    expect(text).toContain('Quai 2');
+    expect(text).not.toMatch(/frais\S/);
+    await expect(purchaseOrderPdf({ ...base, supplier: { organisation: 'Zakład Wykrojników', postcode: null } }))
+      .rejects.toThrow('cannot print "ł" (in the supplier\'s organisation)');
   });
 });

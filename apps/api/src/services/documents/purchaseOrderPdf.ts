@@ -2,6 +2,7 @@ import { bidLineLabels, formatInZone } from '@kerfmark/contracts';
 import { formatMoney, sumCents } from '@kerfmark/pricing';
 import PDFDocument from 'pdfkit';
 import type { PurchaseOrderDoc } from './types';
+import { unprintableCharacter } from './unprintableCharacter';
 
 // The standard PDF fonts: nothing embedded, nothing fetched. They cover Windows-1252 only.
 const REGULAR = 'Helvetica';
@@ -89,7 +90,7 @@ export async function purchaseOrderPdf(doc: PurchaseOrderDoc): Promise<Buffer> {
   return bytes;
 }
 
-/** Refuses a document whose sums, currency or time zone would print wrong. */
+/** Refuses a document whose sums, currency, time zone or characters would print wrong. */
 function checkDocument(doc: PurchaseOrderDoc): void {
   if (doc.lines.length === 0) throw new RangeError('A purchase order needs at least one price line');
   const sum = sumCents(doc.lines.map((line) => line.amountCents));
@@ -104,6 +105,32 @@ function checkDocument(doc: PurchaseOrderDoc): void {
   } catch {
     throw new RangeError(`Not a valid issue date or time zone: "${doc.timeZone}"`);
   }
+  const texts: Array<[string, string | null]> = [
+    ['PO number', doc.poNumber],
+    ["buyer's organisation", doc.buyer.organisation],
+    ["buyer's contact", doc.buyer.contact],
+    ["buyer's e-mail", doc.buyer.email],
+    ['delivery address', doc.buyer.deliveryAddress],
+    ['delivery postcode', doc.buyer.deliveryPostcode],
+    ["supplier's organisation", doc.supplier.organisation],
+    ["supplier's postcode", doc.supplier.postcode],
+    ['request title', doc.request.title],
+    ['job reference', doc.request.jobReference],
+    ['dieline file name', doc.dieline?.fileName ?? null],
+    ['award reason', doc.awardReason],
+    ['notes', doc.notes],
+    ...doc.lines.map((line, i): [string, string] => [`price line ${i + 1}`, `${line.kind} ${line.description}`]),
+  ];
+  for (const [where, text] of texts) {
+    const bad = text === null ? undefined : unprintableCharacter(plain(text));
+    // Refuse rather than print garbage: the standard PDF fonts cover Western European letters only.
+    if (bad) throw new RangeError(`The purchase order cannot print ${JSON.stringify(bad)} (in the ${where}): use Western European letters`);
+  }
+}
+
+/** Text as the standard fonts print it: pdfkit shows a carriage return or a tab as a stray glyph. */
+function plain(text: string): string {
+  return text.replace(/\r\n?/g, '\n').replace(/\t/g, ' ');
 }
 
 function collect(pdf: Pdf): Promise<Buffer> {
@@ -119,7 +146,7 @@ function collect(pdf: Pdf): Promise<Buffer> {
 function block(pdf: Pdf, x: number, y: number, width: number, heading: string, lines: Array<string | null>): number {
   pdf.font(BOLD).fontSize(9).fillColor(MUTED).text(heading.toUpperCase(), x, y, { width });
   pdf.font(REGULAR).fontSize(10).fillColor(INK);
-  for (const line of lines) if (line) pdf.text(line, x, pdf.y, { width });
+  for (const line of lines) if (line) pdf.text(plain(line), x, pdf.y, { width });
   return pdf.y;
 }
 
@@ -134,7 +161,7 @@ function section(pdf: Pdf, title: string, width: number): void {
 }
 
 function field(pdf: Pdf, label: string, value: string): void {
-  pdf.font(BOLD).text(`${label}: `, { continued: true }).font(REGULAR).text(value);
+  pdf.font(BOLD).text(`${label}: `, { continued: true }).font(REGULAR).text(plain(value));
 }
 
 /** The price lines with amounts right-aligned and the total in bold; repeats its header on a new page. */
@@ -153,7 +180,8 @@ function priceTable(pdf: Pdf, doc: PurchaseOrderDoc, money: (cents: number) => s
     pdf.y = y + 14;
     pdf.font(REGULAR).fontSize(10).fillColor(INK);
   };
-  const row = (kind: string, description: string, amount: string) => {
+  const row = (kind: string, text: string, amount: string) => {
+    const description = plain(text);
     const height = Math.max(pdf.heightOfString(description || ' ', { width: descWidth }), pdf.heightOfString(kind, { width: kindWidth })) + 6;
     if (pdf.y + height > pdf.page.maxY()) {
       pdf.addPage();
@@ -168,7 +196,7 @@ function priceTable(pdf: Pdf, doc: PurchaseOrderDoc, money: (cents: number) => s
 
   header();
   for (const line of doc.lines) {
-    row(bidLineLabels[line.kind as keyof typeof bidLineLabels] ?? line.kind, line.description, money(line.amountCents));
+    row(plain(bidLineLabels[line.kind as keyof typeof bidLineLabels] ?? line.kind), line.description, money(line.amountCents));
   }
   if (pdf.y + 24 > pdf.page.maxY()) {
     pdf.addPage();

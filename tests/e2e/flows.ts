@@ -1,0 +1,54 @@
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
+import type { Page } from 'playwright-core';
+import { expect } from 'vitest';
+import { baseUrl } from './browser';
+
+export const fixtures = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../fixtures');
+
+/** Picks a day in an ant-design date picker the way a person does: open it, page to the month, click. */
+export async function pickDate(p: Page, testId: string, date: Date, withTime: boolean) {
+  await p.locator(`[data-test=${testId}] input`).click();
+  await p.waitForTimeout(300); // let a picker that just closed finish its animation
+  const panel = p.locator('.ant-picker-dropdown:not(.ant-picker-dropdown-hidden)').last();
+  const cell = panel.locator(`td.ant-picker-cell-in-view[title="${date.toISOString().slice(0, 10)}"]`);
+  for (let i = 0; i < 3 && (await cell.count()) === 0; i++) await panel.locator('.ant-picker-header-next-btn').click();
+  await cell.click();
+  if (withTime) await panel.locator('.ant-picker-ok button').click();
+}
+
+
+/** A print buyer, signed in, posts a request through the four steps with the 8 × 5 in sleeve DXF. */
+export async function postRequest(p: Page, title: string, opts: { svg?: boolean; screenshots?: (name: string) => Promise<void> } = {}): Promise<number> {
+  await p.goto(`${baseUrl}/requests/new`);
+  await p.locator('[data-test=req-title]').fill(title);
+  await p.locator('[data-test=req-job]').fill('LPC-E2E');
+  await p.locator('[data-test=req-stock]').fill('16 pt SBS');
+  await p.locator('[data-test=req-caliper] input, input[data-test=req-caliper]').first().fill('16');
+  await p.locator('[data-test=next]').click();
+  await p.locator('[data-test=req-press]').click();
+  await p.locator('.ant-select-item-option >> text=Platen 1').click();
+  await p.locator('[data-test=req-sheets] input, input[data-test=req-sheets]').first().fill('10000');
+  await pickDate(p, 'req-deadline', new Date(Date.now() + 5 * 86_400_000), true);
+  await pickDate(p, 'req-needby', new Date(Date.now() + 30 * 86_400_000), false);
+  await p.locator('[data-test=req-postcode]').fill('60614');
+  await p.locator('[data-test=next]').click();
+  await p.waitForURL(/\/requests\/\d+\/edit/);
+  const input = p.locator('[data-test=dieline-drop] input[type=file]');
+  await input.setInputFiles(path.join(fixtures, 'sleeve-8x5.dxf'));
+  await expect.poll(() => p.locator('[data-test=file-list]').innerText(), { timeout: 20_000 }).toContain('measured');
+  if (opts.svg) {
+    await input.setInputFiles(path.join(fixtures, 'tag-100x50mm.svg'));
+    await expect.poll(async () => (await p.locator('[data-test=file-list]').innerText()).match(/measured/g)?.length ?? 0, { timeout: 20_000 }).toBe(2);
+    await p.locator('[data-test=file-list] >> text=sleeve-8x5.dxf').click();
+  }
+  await expect.poll(() => p.locator('[data-test=metrics]').innerText()).toContain('26.79 in');
+  await opts.screenshots?.('dieline');
+  await p.locator('[data-test=next]').click();
+  await expect.poll(() => p.locator('[data-test=request-checks]').innerText()).toContain('fits Platen 1');
+  await opts.screenshots?.('review');
+  await p.locator('[data-test=publish]').click();
+  await p.waitForURL(/\/requests\/\d+$/);
+  await expect.poll(() => p.locator('[data-test=request-status]').innerText()).toBe('Open for bids');
+  return Number(new URL(p.url()).pathname.split('/').pop());
+}
