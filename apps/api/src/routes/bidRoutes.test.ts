@@ -1,6 +1,7 @@
 import request from 'supertest';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { DieRequest } from '../models';
+import { errorsText, validateRelease } from '../test/ocdsValidator';
 import { app, createOpenRequest, createShop, createWorld, knex, waitForEmail } from '../test/harness';
 
 const bearer = (token: string) => ({ Authorization: `Bearer ${token}` });
@@ -148,6 +149,14 @@ describe('award', () => {
     expect(pdf.body.subarray(0, 5).toString()).toBe('%PDF-');
     expect((await request(app).get(`/api/purchase-orders/${awarded.body.award.id}/pdf`).set(bearer(second.token))).status).toBe(404);
     expect((await request(app).get(`/api/purchase-orders/${awarded.body.award.id}/pdf`).set(bearer(w.tokens.estimator))).status).toBe(200);
+
+    // Open Contracting Data Standard 1.1 release with the bids extension, validated with ajv.
+    const release = await request(app).get(`/api/requests/${open.id}/ocds`).set(bearer(w.tokens.purchasing));
+    expect(release.status).toBe(200);
+    expect(validateRelease(release.body), errorsText(validateRelease.errors)).toBe(true);
+    expect(release.body.awards[0].value).toEqual({ amount: 985, currency: 'USD' });
+    expect(release.body.bids.details).toHaveLength(2);
+    expect((await request(app).get(`/api/requests/${open.id}/ocds`).set(bearer(second.token))).status).toBe(403);
 
     const started = await request(app).post(`/api/requests/${open.id}/start-production`).set(bearer(w.tokens.estimator));
     expect(started.body.status).toBe('in_production');

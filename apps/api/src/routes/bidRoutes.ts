@@ -41,6 +41,10 @@ export function bidRoutes(services: Services, requireAuth: RequestHandler): Rout
     res.json(await services.awards.receive(req.user!, requestId(req.params.id), parse(ReceiveInput, req.body)));
   });
 
+  router.get('/requests/:id/ocds', ...printer, async (req, res) => {
+    res.json(await services.awards.ocds(req.user!, requestId(req.params.id)));
+  });
+
   router.post('/requests/:id/start-production', ...shop, async (req, res) => {
     res.json(await services.awards.startProduction(req.user!, requestId(req.params.id)));
   });

@@ -7,6 +7,7 @@ import { todayIn } from '../lib/todayIn';
 import { Award, Bid, DieRequest, Organisation, User } from '../models';
 import { biddingOpen } from './bidService';
 import type { ServiceDeps } from './deps';
+import { ocdsRelease } from './documents/ocdsRelease';
 import { purchaseOrderPdf } from './documents/purchaseOrderPdf';
 import { notifyOrganisation } from './notificationService';
 import type { createRequestService } from './requestService';
@@ -182,6 +183,35 @@ export function createAwardService(deps: ServiceDeps, requests: ReturnType<typeo
         logger.warn({ err: error }, 'purchase order PDF not stored');
       }
       return { fileName, pdf };
+    },
+
+    /** The request, its bids and the award as one Open Contracting Data Standard 1.1 release. */
+    async ocds(actor: AuthUser, requestId: number): Promise<Record<string, unknown>> {
+      const request = await requests.findOwned(actor, requestId);
+      const award = await awardOf(knex, requestId);
+      if (!award) throw new HttpError(409, 'not_awarded', 'The export is available once the request has been awarded.');
+      await request.$fetchGraph('organisation');
+      const bids = await Bid.query().where({ requestId }).withGraphFetched('shop').orderBy('submittedAt');
+      const shopOf = (bid: Bid) => ({ id: bid.shopId, name: bid.shop?.name ?? '' });
+      const awarded = bids.find((b) => b.id === award.bidId)!;
+      return ocdsRelease({
+        ocidPrefix: 'ocds-kerfmark',
+        request: {
+          id: request.id,
+          title: request.title,
+          description: request.notes,
+          status: request.status,
+          publishedAt: request.publishedAt,
+          bidDeadline: request.bidDeadline,
+          needByDate: request.needByDate,
+          quantity: request.quantity,
+        },
+        buyer: { id: request.organisationId, name: request.organisation?.name ?? '' },
+        bids: bids.map((b) => ({ id: b.id, shop: shopOf(b), status: b.status, submittedAt: b.submittedAt, totalCents: b.totalCents, currency: b.currency })),
+        award: { id: award.id, bidId: award.bidId, shop: shopOf(awarded), awardedAt: award.awardedAt, totalCents: award.totalCents, currency: award.currency, reason: award.reason },
+        purchaseOrder: { poNumber: award.poNumber, issuedAt: award.awardedAt, status: request.status === 'cancelled' ? 'terminated' : 'active' },
+        releasedAt: new Date(),
+      });
     },
 
     async startProduction(actor: AuthUser, requestId: number) {

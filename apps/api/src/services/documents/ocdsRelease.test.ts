@@ -1,32 +1,9 @@
-import { readFileSync } from 'node:fs';
-import Ajv from 'ajv-draft-04';
-import addFormats from 'ajv-formats';
 import { describe, expect, it } from 'vitest';
+import { errorsText, validateRelease } from '../../test/ocdsValidator';
 import { ocdsRelease } from './ocdsRelease';
 import type { OcdsInput } from './types';
 
-// The Open Contracting Data Standard 1.1.5 release schema and the OCDS bids extension's patch
-// (tests/reference/ocds/README.md), merged as the extension mechanism says: JSON Merge Patch.
-const reference = (name: string): unknown =>
-  JSON.parse(readFileSync(new URL(`../../../../../tests/reference/ocds/${name}`, import.meta.url), 'utf8'));
-const releaseSchema = mergePatch(reference('release-schema-1.1.5.json'), reference('bid-extension-release-schema.json'));
-
-// OCDS 1.1 schemas are JSON Schema draft-04 and carry their own keywords (codelist, openCodelist…).
-const ajv = new Ajv({ strict: false, allErrors: true });
-addFormats(ajv);
-const validate = ajv.compile(releaseSchema as object);
-
-/** JSON Merge Patch, RFC 7386 section 2: objects merge key by key, null deletes, anything else replaces. */
-function mergePatch(target: unknown, patch: unknown): unknown {
-  const isObject = (v: unknown): v is Record<string, unknown> => typeof v === 'object' && v !== null && !Array.isArray(v);
-  if (!isObject(patch)) return patch;
-  const result: Record<string, unknown> = isObject(target) ? { ...target } : {};
-  for (const [key, value] of Object.entries(patch)) {
-    if (value === null) delete result[key];
-    else result[key] = mergePatch(result[key], value);
-  }
-  return result;
-}
+const validate = validateRelease;
 
 const northside = { id: 20, name: 'Northside Rule & Die' };
 const lakeshore = { id: 21, name: 'Lakeshore Dies' };
@@ -73,7 +50,7 @@ const release = (overrides: Partial<OcdsInput> = {}) => ocdsRelease({ ...input, 
 describe('ocdsRelease', () => {
   it('builds a release that the OCDS 1.1.5 release schema with the bids extension accepts', () => {
     const out = ocdsRelease(input);
-    expect(validate(out), ajv.errorsText(validate.errors)).toBe(true);
+    expect(validate(out), errorsText(validate.errors)).toBe(true);
     expect(out).toMatchObject({
       ocid: 'ocds-kerfmark-17',
       id: 'ocds-kerfmark-17-award-7',
@@ -112,7 +89,7 @@ describe('ocdsRelease', () => {
       award: { ...input.award, totalCents: 150000, currency: 'JPY' },
     });
     expect(jpy.awards[0]?.value.amount).toBe(150000);
-    expect(validate(jpy), ajv.errorsText(validate.errors)).toBe(true);
+    expect(validate(jpy), errorsText(validate.errors)).toBe(true);
 
     const bhd = release({ bids: [{ ...input.bids[0]!, totalCents: 1234567, currency: 'BHD' }], award: { ...input.award, totalCents: 1234567, currency: 'BHD' } });
     expect(bhd.awards[0]?.value.amount).toBe(1234.567);
@@ -132,7 +109,7 @@ describe('ocdsRelease', () => {
     for (const [status, expected] of cases) {
       const out = ocdsRelease({ ...input, request: { ...input.request, status } });
       expect((out as unknown as Release).tender.status, status).toBe(expected);
-      expect(validate(out), ajv.errorsText(validate.errors)).toBe(true);
+      expect(validate(out), errorsText(validate.errors)).toBe(true);
     }
     expect(() => ocdsRelease({ ...input, request: { ...input.request, status: 'paused' } })).toThrow('Unknown request status "paused"');
   });
@@ -146,7 +123,7 @@ describe('ocdsRelease', () => {
     const bad = structuredClone(ocdsRelease(input)) as unknown as Release;
     bad.bids.details[0]!.status = 'accepted';
     expect(validate(bad)).toBe(false);
-    expect(ajv.errorsText(validate.errors)).toContain('/bids/details/0/status');
+    expect(errorsText(validate.errors)).toContain('/bids/details/0/status');
   });
 
   it('refuses an award whose bid is missing, withdrawn or from another shop', () => {
