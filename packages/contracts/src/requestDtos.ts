@@ -53,6 +53,11 @@ export interface DieRequestSummary {
   visibility: Visibility;
   metrics: DielineMetrics | null;
   analysisStatus: AnalysisStatus | null;
+  /** For die shops: straight-line miles from the shop to the delivery postcode, when both are known. */
+  distanceMiles?: number | null;
+  /** For die shops: the shop said it is not bidding, or it has bid. */
+  declined?: boolean;
+  hasBid?: boolean;
   createdAt: string;
   updatedAt: string;
 }

@@ -3,6 +3,7 @@ import { createHash } from 'node:crypto';
 import type { Knex } from 'knex';
 import bcrypt from 'bcryptjs';
 import { analyseDieline } from '@kerfmark/dieline';
+import { addWorkingDays } from '@kerfmark/pricing';
 import type { Storage } from '@kerfmark/storage';
 import { doorHanger, labelSheet, tuckEndCarton } from './demoDielines';
 
@@ -204,6 +205,76 @@ async function seedRequests(knex: Knex, storage: Storage): Promise<void> {
   }
 }
 
+// Past dies that Larkspur bought and received: awarded bids, purchase orders and the price
+// history they left. Prices are invented for the demo.
+const pastDies = [
+  { title: 'Pizza box, 1 up', shop: 'Brightline Rule & Die', dieline: tuckEndCarton, dieCents: 118_500, extrasCents: 14_000, monthsAgo: 11, lateDays: 0 },
+  { title: 'Shelf talker with perforation', shop: 'Okafor Steel Rule Dies', dieline: doorHanger, dieCents: 42_000, extrasCents: 3_500, monthsAgo: 9, lateDays: 2 },
+  { title: 'Sample-pack label sheet', shop: 'Cedar Bend Die Works', dieline: labelSheet, dieCents: 64_500, extrasCents: 5_000, monthsAgo: 7, lateDays: 0 },
+  { title: 'Folding carton for candles', shop: 'Brightline Rule & Die', dieline: tuckEndCarton, dieCents: 109_000, extrasCents: 12_500, monthsAgo: 5, lateDays: 0 },
+  { title: 'Hang tag, 12 up', shop: 'Okafor Steel Rule Dies', dieline: labelSheet, dieCents: 71_000, extrasCents: 4_000, monthsAgo: 3, lateDays: 0 },
+  { title: 'Hotel door hanger', shop: 'Cedar Bend Die Works', dieline: doorHanger, dieCents: 39_500, extrasCents: 3_500, monthsAgo: 2, lateDays: 1 },
+];
+
+/** Open bids from two shops on the demo tuck-end carton, so a board and a comparison have content. */
+const demoBids = [
+  { jobReference: 'LPC-24117', shop: 'Okafor Steel Rule Dies', dieCents: 112_000, leadDays: 6 },
+  { jobReference: 'LPC-24117', shop: 'Cedar Bend Die Works', dieCents: 104_500, leadDays: 8 },
+];
+
+async function seedHistory(knex: Knex): Promise<void> {
+  const org = await knex('organisations').where({ name: 'Larkspur Press & Carton' }).first();
+  if (await knex('priceRecords').where({ organisationId: org.id }).first()) return;
+  const purchasing = await knex('users').where({ organisationId: org.id, role: 'purchasing' }).first();
+  const press = await knex('presses').where({ organisationId: org.id }).orderBy('id').first();
+  for (const [i, past] of pastDies.entries()) {
+    const shop = await knex('organisations').where({ name: past.shop }).first();
+    const estimator = await knex('users').where({ organisationId: shop.id, role: 'estimator' }).first();
+    const { metrics } = analyseDieline(past.dieline());
+    const awardedAt = atDays(-past.monthsAgo * 30);
+    const promised = atDays(-past.monthsAgo * 30 + 7);
+    const day = (d: Date) => d.toISOString().slice(0, 10);
+    const total = past.dieCents + past.extrasCents;
+    const [{ id: requestId }] = await knex('dieRequests')
+      .insert({
+        organisationId: org.id, createdBy: purchasing.id, title: past.title, jobReference: `LPC-2${3100 + i}`, status: 'received',
+        quantity: 1, ups: 1, stockName: '18 pt SBS', caliperIn: 0.018, ruleTypes: ['cut', 'crease'], pressId: press.id,
+        needByDate: day(atDays(-past.monthsAgo * 30 + 14)), bidDeadline: atDays(-past.monthsAgo * 30 - 3), deliveryPostcode: '60614',
+        publishedAt: atDays(-past.monthsAgo * 30 - 10), biddingClosedAt: atDays(-past.monthsAgo * 30 - 3),
+        shippedAt: atDays(-past.monthsAgo * 30 + 7 + past.lateDays), receivedAt: atDays(-past.monthsAgo * 30 + 9 + past.lateDays), receivedCondition: 'good',
+        createdAt: atDays(-past.monthsAgo * 30 - 12),
+      })
+      .returning('id');
+    const lines = [{ kind: 'die', description: 'Steel-rule die', amountCents: past.dieCents }, { kind: 'shipping', description: 'Ground', amountCents: past.extrasCents }];
+    const [{ id: bidId }] = await knex('bids')
+      .insert({ requestId, shopId: shop.id, status: 'submitted', revision: 1, lines: JSON.stringify(lines), currency: 'USD', totalCents: total, dieCents: past.dieCents, leadDays: 5, promisedShipDate: day(promised), validUntil: day(atDays(-past.monthsAgo * 30 + 30)), submittedAt: atDays(-past.monthsAgo * 30 - 5) })
+      .returning('id');
+    await knex('bidRevisions').insert({ bidId, revision: 1, action: 'submitted', lines: JSON.stringify(lines), currency: 'USD', totalCents: total, leadDays: 5, promisedShipDate: day(promised), validUntil: day(atDays(-past.monthsAgo * 30 + 30)), createdBy: estimator.id, createdAt: atDays(-past.monthsAgo * 30 - 5) });
+    const { nextval } = (await knex.raw("SELECT nextval('purchase_order_numbers') AS nextval")).rows[0];
+    const [{ id: awardId }] = await knex('awards')
+      .insert({ requestId, bidId, shopId: shop.id, revision: 1, totalCents: total, dieCents: past.dieCents, currency: 'USD', leadDays: 5, promisedShipDate: day(promised), awardedBy: purchasing.id, awardedAt, poNumber: `PO-${awardedAt.getUTCFullYear()}-${String(nextval).padStart(5, '0')}` })
+      .returning('id');
+    await knex('priceRecords').insert({
+      organisationId: org.id, requestId, awardId, shopId: shop.id, shopName: shop.name, totalCents: total, dieCents: past.dieCents, currency: 'USD', pricedOn: day(awardedAt),
+      ruleLengthIn: metrics.length.total - metrics.length.other, cutIn: metrics.length.cut, creaseIn: metrics.length.crease, perfIn: metrics.length.perf, kissIn: metrics.length.kiss,
+      bends: metrics.bends, curves: metrics.curves, joints: metrics.joints, punches: metrics.punches, boardAreaSqIn: metrics.board.width * metrics.board.height, complexity: metrics.complexity,
+    });
+  }
+  for (const demo of demoBids) {
+    const request = await knex('dieRequests').where({ jobReference: demo.jobReference }).first();
+    const shop = await knex('organisations').where({ name: demo.shop }).first();
+    const estimator = await knex('users').where({ organisationId: shop.id, role: 'estimator' }).first();
+    const lines = [{ kind: 'die', description: 'Steel-rule die on 5/8 in board', amountCents: demo.dieCents }, { kind: 'counter', description: 'Phenolic counter', amountCents: 18_000 }, { kind: 'shipping', description: 'Ground', amountCents: 4_500 }];
+    const total = demo.dieCents + 22_500;
+    const shipDate = addWorkingDays(new Date().toISOString().slice(0, 10), demo.leadDays);
+    const validUntil = atDays(45).toISOString().slice(0, 10);
+    const [{ id: bidId }] = await knex('bids')
+      .insert({ requestId: request.id, shopId: shop.id, status: 'submitted', revision: 1, lines: JSON.stringify(lines), currency: 'USD', totalCents: total, dieCents: demo.dieCents, leadDays: demo.leadDays, promisedShipDate: shipDate, validUntil })
+      .returning('id');
+    await knex('bidRevisions').insert({ bidId, revision: 1, action: 'submitted', lines: JSON.stringify(lines), currency: 'USD', totalCents: total, leadDays: demo.leadDays, promisedShipDate: shipDate, validUntil, createdBy: estimator.id });
+  }
+}
+
 export async function seedDemo(knex: Knex, opts: { storage?: Storage; bcryptRounds?: number } = {}): Promise<void> {
   const bcryptRounds = opts.bcryptRounds ?? 10;
   const passwordHash = await bcrypt.hash(DEMO_PASSWORD, bcryptRounds);
@@ -229,5 +300,8 @@ export async function seedDemo(knex: Knex, opts: { storage?: Storage; bcryptRoun
       }
     }
   });
-  if (opts.storage) await seedRequests(knex, opts.storage);
+  if (opts.storage) {
+    await seedRequests(knex, opts.storage);
+    await seedHistory(knex);
+  }
 }

@@ -14,6 +14,9 @@ export function bidRoutes(services: Services, requireAuth: RequestHandler): Rout
   router.post('/requests/:id/bids', ...shop, async (req, res) => {
     res.status(201).json(await services.bids.submit(req.user!, requestId(req.params.id), parse(BidInput, req.body)));
   });
+  router.get('/estimate-aid', ...shop, async (req, res) => {
+    res.json(await services.bids.estimateAid(req.user!));
+  });
   router.get('/requests/:id/my-bid', ...shop, async (req, res) => {
     res.json(await services.bids.mine(req.user!, requestId(req.params.id)));
   });

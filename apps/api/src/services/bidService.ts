@@ -161,6 +161,26 @@ export function createBidService({ knex }: ServiceDeps, requests: ReturnType<typ
       return withRevisions(bid);
     },
 
+    /**
+     * The shop's own past prices, from the dies it made that were received: the middle (median)
+     * die price per inch of rule and per bend, per currency. Only its own awards count.
+     */
+    async estimateAid(actor: AuthUser): Promise<Array<{ currency: string; dies: number; centsPerInch: number | null; centsPerBend: number | null }>> {
+      const rows = await knex('priceRecords')
+        .where({ shopId: actor.organisationId })
+        .groupBy('currency')
+        .select('currency')
+        .count('* as dies')
+        .select(knex.raw('percentile_cont(0.5) within group (order by die_cents / nullif(rule_length_in, 0)) as cents_per_inch'))
+        .select(knex.raw('percentile_cont(0.5) within group (order by die_cents / nullif(bends, 0)::numeric) as cents_per_bend'));
+      return (rows as Array<{ currency: string; dies: number; centsPerInch: number | null; centsPerBend: number | null }>).map((r) => ({
+        currency: r.currency,
+        dies: Number(r.dies),
+        centsPerInch: r.centsPerInch === null ? null : Math.round(Number(r.centsPerInch)),
+        centsPerBend: r.centsPerBend === null ? null : Math.round(Number(r.centsPerBend)),
+      }));
+    },
+
     async mine(actor: AuthUser, requestId: number): Promise<BidDto | null> {
       if (actor.orgKind !== 'die_shop') return null;
       const bid = await Bid.query().findOne({ requestId, shopId: actor.organisationId });

@@ -18,6 +18,8 @@ import { badRequest, conflict, forbidden, HttpError, notFound } from '../lib/htt
 import { parse } from '../lib/parse';
 import { Award, Bid, BidRevision, DieRequest, Organisation, Press, RequestQuestion } from '../models';
 import { todayIn } from '../lib/todayIn';
+import { distanceMiles } from '../lib/distanceMiles';
+import { postcodeCentre } from '../lib/postcodeCentre';
 import { biddingOpen } from './bidService';
 import { recordAudit } from './auditService';
 import type { ServiceDeps } from './deps';

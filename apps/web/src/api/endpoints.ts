@@ -84,6 +84,7 @@ export const bidsApi = {
   revise: (bidId: number, input: BidInput) => api<BidDto>(`/bids/${bidId}`, { method: 'PATCH', body: input }),
   withdraw: (bidId: number) => api<BidDto>(`/bids/${bidId}/withdraw`, { method: 'POST' }),
   decline: (requestId: number, reason: string) => api<void>(`/requests/${requestId}/decline`, { method: 'POST', body: { reason } }),
+  estimateAid: () => api<Array<{ currency: string; dies: number; centsPerInch: number | null; centsPerBend: number | null }>>('/estimate-aid'),
   compare: (requestId: number) => api<BidComparisonDto>(`/requests/${requestId}/bids`),
   closeBidding: (requestId: number) => api<DieRequestDetail>(`/requests/${requestId}/close-bidding`, { method: 'POST' }),
   award: (requestId: number, bidId: number, reason?: string) =>
