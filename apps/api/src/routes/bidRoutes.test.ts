@@ -95,6 +95,20 @@ describe('sealed bids', () => {
   });
 });
 
+describe('the open-requests board', () => {
+  it('shows distance from the shop, and marks requests the shop bid on or passed on', async () => {
+    const first = await createOpenRequest(w);
+    const second2 = await createOpenRequest(w);
+    const declined = await request(app).post(`/api/requests/${first.id}/decline`).set(bearer(w.tokens.estimator)).send({ reason: 'Too large for our laser' });
+    expect(declined.status, JSON.stringify(declined.body)).toBe(204);
+    const board = await request(app).get('/api/marketplace/requests').set(bearer(w.tokens.estimator));
+    const row = (id: number) => board.body.find((r: { id: number }) => r.id === id);
+    // Shop and delivery share the postcode 60614: no distance to speak of.
+    expect(row(first.id)).toMatchObject({ declined: true, hasBid: false, distanceMiles: 0 });
+    expect(row(second2.id)).toMatchObject({ declined: false });
+  });
+});
+
 describe('award', () => {
   it('runs the loop: two bids, a revision, early close, comparison, award with a reason, PO, e-mails, shipping, receiving', async () => {
     const open = await createOpenRequest(w);
@@ -168,6 +182,10 @@ describe('award', () => {
     const record = await knex('priceRecords').where({ requestId: open.id }).first();
     expect(record).toMatchObject({ totalCents: 98_500, dieCents: 95_000, currency: 'USD', shopId: w.shop.id, complexity: expect.any(String) });
     expect(Number(record.ruleLengthIn)).toBeCloseTo(18, 3);
+
+    // The winner's estimate aid now holds this die: 95,000 cents of die over 18 in = 5,277.8 → 5,278 a inch.
+    const aid = await request(app).get('/api/estimate-aid').set(bearer(w.tokens.estimator));
+    expect(aid.body).toEqual([{ currency: 'USD', dies: 1, centsPerInch: 5_278, centsPerBend: 23_750 }]);
   });
 
   it('gives exactly one success to 20 simultaneous awards', async () => {
@@ -196,5 +214,17 @@ describe('award', () => {
     expect(results.filter((r) => r.status === 409)).toHaveLength(12);
     const rows = await knex('bids').where({ requestId: open.id });
     expect(new Set(rows.map((r) => r.shopId)).size).toBe(12);
+  });
+});
+
+describe('shop holidays', () => {
+  it('skips the shop’s holidays when promising a ship date', async () => {
+    const shop = await createShop();
+    const open = await createOpenRequest(w);
+    const plain = await request(app).post(`/api/requests/${open.id}/bids`).set(bearer(shop.token)).send(bidBody(1000, { leadDays: 1 }));
+    // A holiday on the promised day pushes it one working day further.
+    await knex('shopHolidays').insert({ shopId: shop.shop.id, date: plain.body.promisedShipDate, name: 'Shop closed' });
+    const revised = await request(app).patch(`/api/bids/${plain.body.id}`).set(bearer(shop.token)).send(bidBody(1000, { leadDays: 1 }));
+    expect(revised.body.promisedShipDate > plain.body.promisedShipDate).toBe(true);
   });
 });

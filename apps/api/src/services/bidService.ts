@@ -62,7 +62,8 @@ export function createBidService({ knex }: ServiceDeps, requests: ReturnType<typ
       throw badRequest('The price must hold at least until the bid deadline.', { validUntil: `Choose ${deadlineDay} or later` });
     }
     const holidays = new Set<string>(
-      (await trx('shopHolidays').where({ shopId: actor.organisationId }).pluck('date')).map(String),
+      // knex's pluck() misses columns under the snake-case mappers, so select and map instead.
+      (await trx('shopHolidays').where({ shopId: actor.organisationId }).select('date')).map((h: { date: string }) => String(h.date)),
     );
     return {
       lines: input.lines,

@@ -28,6 +28,10 @@ import { primaryFile, toBidDto, toFileDto, toPressDto, toSummary } from './reque
 
 /** Statuses a die shop may look at, when the request is open to it. */
 const SHOP_VISIBLE = ['open', 'bidding_closed'] as const;
+
+// knex's pluck() misses columns under the snake-case mappers, so select and map instead.
+const requestIdsOf = async (query: Knex.QueryBuilder): Promise<number[]> =>
+  (await query.select('requestId')).map((row: { requestId: number }) => row.requestId);
 const EDITABLE = ['draft', 'open'] as const;
 
 /** Narrows a query to requests this die shop may see: open to every shop, or it was invited. */
@@ -201,10 +205,26 @@ export function createRequestService({ knex }: ServiceDeps) {
     async marketplace(actor: AuthUser): Promise<DieRequestSummary[]> {
       const requests = await visibleToShop(DieRequest.query(), actor.organisationId)
         .where('die_requests.status', 'open')
+        .where('die_requests.bidDeadline', '>', new Date())
         .withGraphFetched('[organisation, press, files(byUpload)]')
         .orderBy('die_requests.bidDeadline')
         .limit(500);
-      return requests.map(toSummary);
+      const ids = requests.map((r) => r.id);
+      const [shop, declined, bid] = await Promise.all([
+        Organisation.query().findById(actor.organisationId),
+        requestIdsOf(knex('requestDeclines').whereIn('requestId', ids).where({ shopId: actor.organisationId })),
+        requestIdsOf(knex('bids').whereIn('requestId', ids).where({ shopId: actor.organisationId })),
+      ]);
+      const from = postcodeCentre(shop?.postcode);
+      return requests.map((request) => {
+        const to = postcodeCentre(request.deliveryPostcode);
+        return {
+          ...toSummary(request),
+          distanceMiles: from && to ? Math.round(distanceMiles(from, to)) : null,
+          declined: declined.includes(request.id),
+          hasBid: bid.includes(request.id),
+        };
+      });
     },
 
     async create(actor: AuthUser, input: DieRequestCreate): Promise<DieRequestDetail> {
