@@ -62,7 +62,7 @@ export async function bringUp(p: Profile, supervisor: Supervisor, opts: { fresh:
   step('API and worker');
   supervisor.start('api', 'apps/api/src/server.ts', env);
   const sweepMs = p.name === 'test' ? '2000' : '30000';
-  supervisor.start('worker', 'apps/worker/src/index.ts', { ...env, OUTBOX_SWEEP_MS: sweepMs, ANALYSIS_SWEEP_MS: sweepMs });
+  supervisor.start('worker', 'apps/worker/src/index.ts', { ...env, OUTBOX_SWEEP_MS: sweepMs, ANALYSIS_SWEEP_MS: sweepMs, REMINDER_SWEEP_MS: p.name === 'test' ? '3000' : '300000' });
   await waitFor('the API', () => httpOk(`${env.APP_URL}/api/health`), 60_000);
   return env;
 }

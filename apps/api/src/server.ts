@@ -15,7 +15,7 @@ redis.on('error', (error) => logger.warn({ err: error.message }, 'redis unavaila
 const queues = createJobQueues(config.redisUrl, logger);
 const storage = createStorage(storageConfigFromEnv());
 
-const app = createApp({ config, knex, redis, logger, emails: queues.emails, analyses: queues.analyses, storage });
+const app = createApp({ config, knex, redis, logger, emails: queues.emails, analyses: queues.analyses, reminders: queues.reminders, storage });
 const server = app.listen(config.port, '127.0.0.1', () => {
   logger.info(`API listening on ${config.appUrl}`);
 });

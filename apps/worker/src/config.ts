@@ -11,6 +11,8 @@ export function loadConfig() {
     smtpUrl: required('SMTP_URL'),
     mailFrom: process.env.MAIL_FROM ?? 'Kerfmark <no-reply@kerfmark.test>',
     outboxSweepMs: Number(process.env.OUTBOX_SWEEP_MS ?? 30_000),
+    reminderSweepMs: Number(process.env.REMINDER_SWEEP_MS ?? 300_000),
+    appUrl: process.env.APP_URL ?? 'http://127.0.0.1:4100',
     analysisSweepMs: Number(process.env.ANALYSIS_SWEEP_MS ?? 30_000),
   };
 }

@@ -1,17 +1,28 @@
 import { Queue, Worker } from 'bullmq';
-import knexFactory from 'knex';
 import { pino } from 'pino';
-import { jobNames, queueNames, type AnalyseDielineJob, type DeliverEmailJob } from '@kerfmark/contracts';
+import {
+  deliverEmailJobId,
+  jobNames,
+  queueNames,
+  type AnalyseDielineJob,
+  type DeliverEmailJob,
+  type PlanRemindersJob,
+  type SendReminderJob,
+} from '@kerfmark/contracts';
 import { createStorage, storageConfigFromEnv } from '@kerfmark/storage';
 import { analyseDielineFile, waitingAnalyses } from './jobs/analyseDieline';
 import { loadConfig } from './config';
 import { deliverEmail } from './jobs/deliverEmail';
 import { sweepOutbox } from './jobs/sweepOutbox';
+import { createKnex } from './db';
 import { createMailer } from './mailer';
+import { planRequestReminders } from './reminders/planRequestReminders';
+import { sendReminder } from './reminders/sendReminder';
+import { sweepReminders } from './reminders/sweepReminders';
 
 const logger = pino({ name: 'worker', level: process.env.LOG_LEVEL ?? 'info' });
 const config = loadConfig();
-const knex = knexFactory({ client: 'pg', connection: config.databaseUrl, pool: { min: 0, max: 4 } });
+const knex = createKnex(config.databaseUrl);
 const mailer = createMailer(config.smtpUrl);
 const storage = createStorage(storageConfigFromEnv());
 const redisUrl = new URL(config.redisUrl);
@@ -61,14 +72,40 @@ const dielineWorker = new Worker<AnalyseDielineJob>(
   { connection, concurrency: 1 },
 );
 
-for (const worker of [emailWorker, dielineWorker]) {
+/** Hands committed outbox rows to the e-mail worker; the outbox sweep covers a failed add. */
+function dispatchEmails(outboxIds: number[]) {
+  for (const outboxId of outboxIds) {
+    emailQueue.add(jobNames.deliverEmail, { outboxId }, { jobId: deliverEmailJobId(outboxId), removeOnComplete: 1000 }).catch(() => undefined);
+  }
+}
+
+const reminderQueue = new Queue<SendReminderJob>(queueNames.reminders, { connection });
+await reminderQueue.upsertJobScheduler('reminder-sweep', { every: config.reminderSweepMs }, { name: jobNames.sweepReminders });
+const reminderWorker = new Worker<SendReminderJob | PlanRemindersJob>(
+  queueNames.reminders,
+  async (job) => {
+    if (job.name === jobNames.sweepReminders) return sweepReminders(knex, reminderQueue);
+    if (job.name === jobNames.planReminders) return planRequestReminders(knex, reminderQueue, job.data.requestId);
+    if (job.name === jobNames.sendReminder) {
+      const { key, requestId } = job.data as SendReminderJob;
+      const { result, outboxIds } = await sendReminder(knex, { appUrl: config.appUrl, now: new Date() }, requestId, key);
+      dispatchEmails(outboxIds);
+      logger.info({ key, result }, 'reminder');
+      return result;
+    }
+    throw new Error(`Unknown job ${job.name}`);
+  },
+  { connection, concurrency: 2 },
+);
+
+for (const worker of [emailWorker, dielineWorker, reminderWorker]) {
   worker.on('failed', (job, error) => logger.warn({ queue: worker.name, job: job?.id, err: error.message }, 'job failed'));
   worker.on('error', (error) => logger.warn({ queue: worker.name, err: error.message }, 'worker error'));
 }
-logger.info('worker running: e-mail delivery, dieline analysis and their sweeps');
+logger.info('worker running: e-mail delivery, dieline analysis, deadline reminders and their sweeps');
 
 async function shutdown() {
-  await Promise.allSettled([emailWorker.close(), dielineWorker.close(), emailQueue.close(), dielineQueue.close()]);
+  await Promise.allSettled([emailWorker.close(), dielineWorker.close(), reminderWorker.close(), emailQueue.close(), dielineQueue.close(), reminderQueue.close()]);
   await knex.destroy();
   mailer.close();
   process.exit(0);

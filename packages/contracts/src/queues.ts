@@ -2,6 +2,7 @@
 export const queueNames = {
   email: 'email-delivery',
   dieline: 'dieline-analysis',
+  reminders: 'deadline-reminders',
 } as const;
 
 export const jobNames = {
@@ -9,6 +10,9 @@ export const jobNames = {
   sweepOutbox: 'sweep-email-outbox',
   analyseDieline: 'analyse-dieline',
   sweepAnalyses: 'sweep-waiting-analyses',
+  planReminders: 'plan-request-reminders',
+  sendReminder: 'send-reminder',
+  sweepReminders: 'sweep-reminders',
 } as const;
 
 export interface DeliverEmailJob {
@@ -27,4 +31,18 @@ export function deliverEmailJobId(outboxId: number): string {
 /** One id per analysis run of a file: a remap starts a new run, a double click does not. */
 export function analyseDielineJobId(fileId: number, run: number): string {
   return `analyse-${fileId}-run-${run}`;
+}
+
+export interface PlanRemindersJob {
+  requestId: number;
+}
+
+export interface SendReminderJob {
+  requestId: number;
+  key: string;
+}
+
+/** A reminder's job id is its key: the same reminder planned twice is one job. */
+export function reminderJobId(key: string): string {
+  return `reminder-${key}`;
 }

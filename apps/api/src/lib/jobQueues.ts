@@ -7,8 +7,9 @@ import {
   queueNames,
   type AnalyseDielineJob,
   type DeliverEmailJob,
+  type PlanRemindersJob,
 } from '@kerfmark/contracts';
-import type { AnalysisDispatcher, EmailDispatcher } from '../services/deps';
+import type { AnalysisDispatcher, EmailDispatcher, ReminderPlanner } from '../services/deps';
 
 /**
  * The API's side of the job queues. Adding a job never holds a request: with Redis down the
@@ -19,7 +20,8 @@ export function createJobQueues(redisUrl: string, logger: Logger) {
   const connection = { host: url.hostname, port: Number(url.port || 6379), enableOfflineQueue: false, maxRetriesPerRequest: 1 };
   const emailQueue = new Queue<DeliverEmailJob>(queueNames.email, { connection });
   const dielineQueue = new Queue<AnalyseDielineJob>(queueNames.dieline, { connection });
-  for (const queue of [emailQueue, dielineQueue]) queue.on('error', (error) => logger.warn({ err: error.message }, 'job queue unavailable'));
+  const reminderQueue = new Queue<PlanRemindersJob>(queueNames.reminders, { connection });
+  for (const queue of [emailQueue, dielineQueue, reminderQueue]) queue.on('error', (error) => logger.warn({ err: error.message }, 'job queue unavailable'));
   const keep = { removeOnComplete: 1000, removeOnFail: 5000 };
 
   const emails: EmailDispatcher = {
@@ -38,5 +40,18 @@ export function createJobQueues(redisUrl: string, logger: Logger) {
         .catch((error: unknown) => logger.warn({ err: error, fileId }, 'analysis left for the sweep'));
     },
   };
-  return { emails, analyses, close: () => Promise.all([emailQueue.close(), dielineQueue.close()]).then(() => undefined) };
+  const reminders: ReminderPlanner = {
+    plan(requestId) {
+      // A new id each time: every change is planned; planning itself is idempotent.
+      reminderQueue
+        .add(jobNames.planReminders, { requestId }, { jobId: `plan-${requestId}-${Date.now()}`, ...keep })
+        .catch((error: unknown) => logger.warn({ err: error, requestId }, 'reminders left for the sweep'));
+    },
+  };
+  return {
+    emails,
+    analyses,
+    reminders,
+    close: () => Promise.all([emailQueue.close(), dielineQueue.close(), reminderQueue.close()]).then(() => undefined),
+  };
 }

@@ -118,6 +118,9 @@ describe('award', () => {
 
     const closed = await request(app).post(`/api/requests/${open.id}/close-bidding`).set(bearer(w.tokens.purchasing));
     expect(closed.body.status).toBe('bidding_closed');
+    // Through the running worker: the close plans the reminders, and "bids ready" is due at once.
+    const ready = await waitForEmail(w.users.purchasing.email, `Bids ready to compare: ${open.title}`);
+    expect(ready.text).toContain('2 bids to compare');
     const late = await request(app).patch(`/api/bids/${a.body.id}`).set(bearer(w.tokens.estimator)).send(bidBody(1));
     expect(late.status).toBe(409);
 

@@ -26,6 +26,7 @@ export function createAwardService(deps: ServiceDeps, requests: ReturnType<typeo
   async function closeInside(trx: Knex.Transaction, actor: AuthUser, request: DieRequest) {
     const early = biddingOpen(request);
     await transitionRequest(trx, actor, request.id, 'close-bidding', {
+      reminders: deps.reminders,
       patch: { biddingClosedAt: new Date(), closedEarly: early },
       detail: { early },
     });
@@ -105,7 +106,7 @@ export function createAwardService(deps: ServiceDeps, requests: ReturnType<typeo
           if ((error as { name?: string }).name === 'UniqueViolationError') throw conflict('This request has already been awarded.');
           throw error;
         }
-        await transitionRequest(trx, actor, requestId, 'award', { detail: { bidId: bid.id, poNumber, reason } });
+        await transitionRequest(trx, actor, requestId, 'award', { reminders: deps.reminders, detail: { bidId: bid.id, poNumber, reason } });
         for (const shopId of await bidderShops(trx, requestId)) {
           const won = shopId === bid.shopId;
           await notify(trx, shopId, won
@@ -218,7 +219,7 @@ export function createAwardService(deps: ServiceDeps, requests: ReturnType<typeo
       await knex.transaction(async (trx) => {
         const award = await awardOf(trx, requestId);
         if (!award || award.shopId !== actor.organisationId) throw notFound('That die request');
-        await transitionRequest(trx, actor, requestId, 'start-production', { awardedShopId: award.shopId, patch: { productionStartedAt: new Date() } });
+        await transitionRequest(trx, actor, requestId, 'start-production', { reminders: deps.reminders, awardedShopId: award.shopId, patch: { productionStartedAt: new Date() } });
         const request = await DieRequest.query(trx).findById(requestId).throwIfNotFound();
         await notify(trx, request.organisationId, {
           kind: 'in_production',
@@ -234,7 +235,7 @@ export function createAwardService(deps: ServiceDeps, requests: ReturnType<typeo
       await knex.transaction(async (trx) => {
         const award = await awardOf(trx, requestId);
         if (!award || award.shopId !== actor.organisationId) throw notFound('That die request');
-        await transitionRequest(trx, actor, requestId, 'ship', { awardedShopId: award.shopId, patch: { shippedAt: new Date(), trackingNote }, detail: { trackingNote } });
+        await transitionRequest(trx, actor, requestId, 'ship', { reminders: deps.reminders, awardedShopId: award.shopId, patch: { shippedAt: new Date(), trackingNote }, detail: { trackingNote } });
         const request = await DieRequest.query(trx).findById(requestId).throwIfNotFound();
         await notify(trx, request.organisationId, {
           kind: 'shipped',
@@ -253,6 +254,7 @@ export function createAwardService(deps: ServiceDeps, requests: ReturnType<typeo
         const award = await awardOf(trx, requestId);
         if (!award) throw conflict('This request has no award yet.');
         await transitionRequest(trx, actor, requestId, 'receive', {
+          reminders: deps.reminders,
           awardedShopId: award.shopId,
           patch: { receivedAt: new Date(), receivedCondition: input.condition, receivedNotes: input.notes ?? null },
           detail: { condition: input.condition },

@@ -43,7 +43,7 @@ export async function shopRecords(knex: Knex, shopIds: number[]): Promise<Map<nu
   return records;
 }
 
-export function createBidService({ knex }: ServiceDeps, requests: ReturnType<typeof createRequestService>) {
+export function createBidService({ knex, reminders }: ServiceDeps, requests: ReturnType<typeof createRequestService>) {
   const closedError = (request: DieRequest, timeZone: string) =>
     new HttpError(
       409,
@@ -132,9 +132,9 @@ export function createBidService({ knex }: ServiceDeps, requests: ReturnType<typ
         await recordAudit(trx, { organisationId: actor.organisationId, actorUserId: actor.id, entity: 'bid', entityId: created.id, action: 'submitted', detail: { requestId, revision: 1 } });
         return created;
       });
+      reminders.plan(requestId);
       return withRevisions(bid);
     },
-
     async revise(actor: AuthUser, bidId: number, input: ParsedBid): Promise<BidDto> {
       const bid = await knex.transaction(async (trx) => {
         const { bid, request } = await ownBid(trx, actor, bidId);
@@ -146,6 +146,7 @@ export function createBidService({ knex }: ServiceDeps, requests: ReturnType<typ
         await recordAudit(trx, { organisationId: actor.organisationId, actorUserId: actor.id, entity: 'bid', entityId: bid.id, action: 'revised', detail: { revision: revised.revision } });
         return revised;
       });
+      reminders.plan(bid.requestId);
       return withRevisions(bid);
     },
 
@@ -159,6 +160,7 @@ export function createBidService({ knex }: ServiceDeps, requests: ReturnType<typ
         await recordAudit(trx, { organisationId: actor.organisationId, actorUserId: actor.id, entity: 'bid', entityId: bid.id, action: 'withdrawn' });
         return withdrawn;
       });
+      reminders.plan(bid.requestId);
       return withRevisions(bid);
     },
 

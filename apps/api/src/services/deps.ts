@@ -13,11 +13,17 @@ export interface AnalysisDispatcher {
   analyse(fileId: number, run: number): void;
 }
 
+/** Asks the worker to plan a request's reminders again after it changed. */
+export interface ReminderPlanner {
+  plan(requestId: number): void;
+}
+
 export interface ServiceDeps {
   config: Config;
   knex: Knex;
   logger: Logger;
   emails: EmailDispatcher;
   analyses: AnalysisDispatcher;
+  reminders: ReminderPlanner;
   storage: Storage;
 }

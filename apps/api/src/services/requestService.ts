@@ -56,7 +56,7 @@ async function bidDto(bid: Bid): Promise<BidDto> {
   return toBidDto(bid, await BidRevision.query().where({ bidId: bid.id }).orderBy('id'));
 }
 
-export function createRequestService({ knex }: ServiceDeps) {
+export function createRequestService({ knex, reminders }: ServiceDeps) {
   /** The request if this user may see it; anything else is the same 404. */
   async function findVisible(actor: AuthUser, id: number, trx?: Knex.Transaction): Promise<DieRequest> {
     const query = DieRequest.query(trx).findById(id);
@@ -272,6 +272,7 @@ export function createRequestService({ knex }: ServiceDeps) {
           action: 'updated',
           detail: { fields: Object.keys(patch) },
         });
+        trx.executionPromise.then(() => reminders.plan(id)).catch(() => undefined);
       });
       return detail(actor, id);
     },
@@ -291,7 +292,7 @@ export function createRequestService({ knex }: ServiceDeps) {
             throw badRequest('Invite at least one die shop, or open the request to every shop.', { invitedShopIds: 'Invite at least one die shop' });
           }
         }
-        await transitionRequest(trx, actor, id, 'publish');
+        await transitionRequest(trx, actor, id, 'publish', { reminders });
       });
       return detail(actor, id);
     },
@@ -299,7 +300,7 @@ export function createRequestService({ knex }: ServiceDeps) {
     async cancel(actor: AuthUser, id: number, reason: string): Promise<DieRequestDetail> {
       await knex.transaction(async (trx) => {
         await findOwned(actor, id, trx);
-        await transitionRequest(trx, actor, id, 'cancel', { detail: { reason } });
+        await transitionRequest(trx, actor, id, 'cancel', { reminders, detail: { reason } });
       });
       return detail(actor, id);
     },

@@ -4,6 +4,7 @@ import type { AuthUser } from '../auth/passport';
 import { conflict, forbidden } from '../lib/httpError';
 import { DieRequest } from '../models';
 import { recordAudit } from './auditService';
+import type { ReminderPlanner } from './deps';
 
 /**
  * The one place a request changes status: the move must be in the transition table, made by
@@ -14,7 +15,7 @@ export async function transitionRequest(
   actor: AuthUser,
   requestId: number,
   action: string,
-  opts: { awardedShopId?: number | null; detail?: Record<string, unknown>; patch?: Partial<DieRequest> } = {},
+  opts: { reminders: ReminderPlanner; awardedShopId?: number | null; detail?: Record<string, unknown>; patch?: Partial<DieRequest> },
 ): Promise<DieRequest> {
   const request = await DieRequest.query(trx).findById(requestId).forUpdate().throwIfNotFound();
   const transition = checkTransition(actor, request, action, opts.awardedShopId ?? null);
@@ -29,6 +30,8 @@ export async function transitionRequest(
     action: `status:${transition.from}->${transition.to}`,
     detail: opts.detail ?? {},
   });
+  // Deadlines and recipients follow the status: the worker plans the reminders again.
+  trx.executionPromise.then(() => opts.reminders.plan(requestId)).catch(() => undefined);
   return updated;
 }
 

@@ -26,7 +26,7 @@ redis.on('error', () => undefined);
 const queues = createJobQueues(config.redisUrl, logger);
 export const storage = createStorage(storageConfigFromEnv());
 
-export const app: Express = createApp({ config, knex, redis, logger, emails: queues.emails, analyses: queues.analyses, storage });
+export const app: Express = createApp({ config, knex, redis, logger, emails: queues.emails, analyses: queues.analyses, reminders: queues.reminders, storage });
 export const testConfig = config;
 export const PASSWORD = 'correct horse battery';
 

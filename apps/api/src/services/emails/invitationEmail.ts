@@ -1,5 +1,5 @@
 import { formatInZone, roleLabels, type Role } from '@kerfmark/contracts';
-import { emailLayout, type EmailParts } from './layout';
+import { emailLayout, type EmailParts } from '@kerfmark/notices';
 
 export function invitationEmail(opts: {
   name: string;

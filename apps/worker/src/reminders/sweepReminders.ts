@@ -1,0 +1,17 @@
+import type { Queue } from 'bullmq';
+import type { Knex } from 'knex';
+import type { SendReminderJob } from '@kerfmark/contracts';
+import { planRequestReminders } from './planRequestReminders';
+
+const ACTIVE = ['open', 'bidding_closed', 'awarded', 'in_production'];
+
+/**
+ * Rebuilds the reminder jobs of every active request from PostgreSQL: after Redis loses its
+ * data, nothing is lost; reminders whose time has come while it was down go out now.
+ */
+export async function sweepReminders(knex: Knex, queue: Queue<SendReminderJob>, now = new Date()): Promise<number> {
+  const ids = (await knex('die_requests').whereIn('status', ACTIVE).select('id')).map((r: { id: number }) => r.id);
+  let jobs = 0;
+  for (const id of ids) jobs += (await planRequestReminders(knex, queue, id, now)).length;
+  return jobs;
+}

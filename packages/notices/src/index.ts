@@ -1,0 +1,3 @@
+// In-app notifications and the e-mails that go with them, shared by the API and the worker.
+export { emailLayout, type EmailParts } from './emailLayout';
+export { notifyOrganisation, type Notice } from './notifyOrganisation';
