@@ -1,4 +1,4 @@
-import { formatInZone, requestStatusLabels, type RequestStatus } from '@kerfmark/contracts';
+import { formatCalendarDate, formatInZone, requestStatusLabels, type RequestStatus } from '@kerfmark/contracts';
 import { inchesToMm } from '@kerfmark/dieline';
 
 /** Small display helpers shared by the views. Lengths arrive in inches. */
@@ -14,12 +14,7 @@ export const size = (w: number | null | undefined, h: number | null | undefined)
   w && h ? `${inches(w).replace(' in', '')} × ${inches(h)}` : '—';
 
 /** A calendar date (YYYY-MM-DD) for people: "Fri, Dec 18, 2026". */
-export const calendarDate = (date: string | null | undefined) =>
-  date
-    ? new Intl.DateTimeFormat('en-US', { weekday: 'short', month: 'short', day: 'numeric', year: 'numeric', timeZone: 'UTC' }).format(
-        new Date(`${date}T00:00:00Z`),
-      )
-    : '—';
+export const calendarDate = (date: string | null | undefined) => (date ? formatCalendarDate(date) : '—');
 
 export const instant = (iso: string | null | undefined, timeZone: string) => (iso ? formatInZone(new Date(iso), timeZone) : '—');
 

@@ -8,3 +8,4 @@ export * from './dates';
 export * from './requests';
 export * from './requestDtos';
 export * from './bids';
+export * from './notifications';

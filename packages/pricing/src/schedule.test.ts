@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { addWorkingDays, checkNeedBy, isWorkingDay, runHours, workingDaysBetween } from './schedule';
+import { addWorkingDays, checkArrival, checkNeedBy, isWorkingDay, runHours, workingDaysBetween } from './schedule';
 
 // Weekdays of the dates below are from the Gregorian calendar (ISO 8601): 2026-12-04 is a
 // Friday, 2026-12-07 a Monday, 2026-12-25 a Friday.
@@ -51,5 +51,13 @@ describe('die-cutting run and need-by date', () => {
     expect(check.latestArrival).toBe('2026-12-10');
     expect(check.slackDays).toBe(-2);
     expect(check.ok).toBe(false);
+  });
+});
+
+describe('checkArrival', () => {
+  it('judges a known ship date against the need-by date and the run', () => {
+    // Ships Wed 16 Dec; a 16-hour run is 2 shifts; need-by Fri 18 Dec → latest arrival Wed 16 Dec.
+    expect(checkArrival({ needByDate: '2026-12-18', dieReadyBy: '2026-12-16', runHours: 16 })).toMatchObject({ latestArrival: '2026-12-16', slackDays: 0, ok: true });
+    expect(checkArrival({ needByDate: '2026-12-18', dieReadyBy: '2026-12-17', runHours: 16 })).toMatchObject({ slackDays: -1, ok: false });
   });
 });

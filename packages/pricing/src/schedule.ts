@@ -70,10 +70,21 @@ export function checkNeedBy(opts: {
   hoursPerDay?: number;
   holidays?: ReadonlySet<string>;
 }): NeedByCheck {
+  const dieReadyBy = addWorkingDays(opts.today, opts.leadDays, opts.holidays ?? new Set<string>());
+  return checkArrival({ ...opts, dieReadyBy });
+}
+
+/** The same check when the die's date is already known (a bid's or an award's promised ship date). */
+export function checkArrival(opts: {
+  needByDate: string;
+  dieReadyBy: string;
+  runHours: number;
+  hoursPerDay?: number;
+  holidays?: ReadonlySet<string>;
+}): NeedByCheck {
   const holidays = opts.holidays ?? new Set<string>();
   const runDays = Math.ceil(opts.runHours / (opts.hoursPerDay ?? 8));
-  const dieReadyBy = addWorkingDays(opts.today, opts.leadDays, holidays);
   const latestArrival = addWorkingDays(opts.needByDate, -runDays, holidays);
-  const slackDays = workingDaysBetween(dieReadyBy, latestArrival, holidays);
-  return { dieReadyBy, runDays, latestArrival, slackDays, ok: slackDays >= 0 };
+  const slackDays = workingDaysBetween(opts.dieReadyBy, latestArrival, holidays);
+  return { dieReadyBy: opts.dieReadyBy, runDays, latestArrival, slackDays, ok: slackDays >= 0 };
 }

@@ -123,7 +123,8 @@ const demoRequests: DemoRequest[] = [
     press: 'Platen 1 (22 × 30)',
     fields: { quantity: 2, ups: 12, pieceWidthIn: 3.5, pieceHeightIn: 1.5, stockName: '60 lb semi-gloss label stock', caliperIn: 0.006, runSheets: 5000, ruleTypes: ['cut', 'kiss'], ejectionRubberWanted: false, deliveryPostcode: '60614' },
     deadlineDays: 2,
-    needByDays: 9,
+    // Tight on purpose: five working days of lead time and the run do not fit in six days.
+    needByDays: 6,
     invited: ['Brightline Rule & Die', 'Okafor Steel Rule Dies'],
     dieline: { name: 'label-sheet-12up.dxf', content: labelSheet },
   },

@@ -1,4 +1,5 @@
 import { Model } from 'objection';
+import { DieRequest } from './DieRequest';
 import { Organisation } from './Organisation';
 
 export class Award extends Model {
@@ -20,10 +21,12 @@ export class Award extends Model {
   poNumber!: string;
   poS3Key!: string | null;
   shop?: Organisation;
+  request?: DieRequest;
 
   static override get relationMappings() {
     return {
       shop: { relation: Model.BelongsToOneRelation, modelClass: Organisation, join: { from: 'awards.shopId', to: 'organisations.id' } },
+      request: { relation: Model.BelongsToOneRelation, modelClass: DieRequest, join: { from: 'awards.requestId', to: 'die_requests.id' } },
     };
   }
 }

@@ -42,6 +42,7 @@ export class DieRequest extends Model {
   receivedAt!: Date | null;
   receivedCondition!: 'good' | 'damaged' | null;
   receivedNotes!: string | null;
+  lateFlaggedAt!: Date | null;
   createdAt!: Date;
   updatedAt!: Date;
   organisation?: Organisation;

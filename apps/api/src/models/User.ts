@@ -14,7 +14,12 @@ export class User extends Model {
   status!: UserStatus;
   createdAt!: Date;
   lastSignInAt!: Date | null;
+  preferences!: Record<string, boolean>;
   organisation?: Organisation;
+
+  static override get jsonAttributes() {
+    return ['preferences'];
+  }
 
   static override get relationMappings() {
     return {

@@ -8,6 +8,7 @@ import { createRequestService } from './requestService';
 import { createFileService } from './fileService';
 import { createBidService } from './bidService';
 import { createAwardService } from './awardService';
+import { createDashboardService } from './dashboardService';
 
 export function createServices(deps: ServiceDeps, limiter: LoginLimiter) {
   const requests = createRequestService(deps);
@@ -16,6 +17,7 @@ export function createServices(deps: ServiceDeps, limiter: LoginLimiter) {
     files: createFileService(deps, requests),
     bids: createBidService(deps, requests),
     awards: createAwardService(deps, requests),
+    dashboard: createDashboardService(deps),
     auth: createAuthService(deps, limiter),
     users: createUserService(deps),
     invitations: createInvitationService(deps),

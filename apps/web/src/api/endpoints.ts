@@ -1,4 +1,7 @@
 import type {
+  DashboardDto,
+  NotificationKind,
+  PreferencesDto,
   BidComparisonDto,
   BidDto,
   BidInput,
@@ -99,4 +102,10 @@ export const notificationsApi = {
   list: () => api<{ items: NotificationDto[]; unread: number }>('/notifications'),
   read: (id: number) => api<void>(`/notifications/${id}/read`, { method: 'POST' }),
   readAll: () => api<void>('/notifications/read-all', { method: 'POST' }),
+};
+
+export const meApi = {
+  dashboard: () => api<DashboardDto>('/me/dashboard'),
+  preferences: () => api<PreferencesDto>('/me/preferences'),
+  savePreferences: (email: Partial<Record<NotificationKind, boolean>>) => api<PreferencesDto>('/me/preferences', { method: 'PUT', body: { email } }),
 };

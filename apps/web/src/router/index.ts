@@ -44,6 +44,12 @@ export const appRoutes: RouteRecordRaw[] = [
     component: () => import('../views/MarketplaceView.vue'),
     meta: { title: 'Open requests', access: { kinds: ['die_shop'] } },
   },
+  {
+    path: 'notifications',
+    name: 'notifications',
+    component: () => import('../views/NotificationsView.vue'),
+    meta: { title: 'Notifications', hidden: true },
+  },
   { path: 'team', name: 'team', component: () => import('../views/TeamView.vue'), meta: { title: 'Team' } },
   {
     path: 'presses',
