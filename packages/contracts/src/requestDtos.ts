@@ -115,6 +115,8 @@ export interface DieRequestDetail extends DieRequestSummary {
   shippedAt: string | null;
   receivedAt: string | null;
   receivedCondition: 'good' | 'damaged' | null;
+  /** Set the day after the promised ship date passed with the die unshipped. */
+  lateFlaggedAt: string | null;
 }
 
 export interface Page<T> {

@@ -174,6 +174,7 @@ export function createRequestService({ knex, reminders }: ServiceDeps) {
       shippedAt: request.shippedAt?.toISOString() ?? null,
       receivedAt: isOwner || won ? (request.receivedAt?.toISOString() ?? null) : null,
       receivedCondition: isOwner || won ? request.receivedCondition : null,
+      lateFlaggedAt: isOwner || won ? (request.lateFlaggedAt?.toISOString() ?? null) : null,
     };
   }
 

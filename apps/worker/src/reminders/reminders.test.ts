@@ -28,7 +28,8 @@ afterAll(async () => {
 });
 
 async function org(kind: 'printer' | 'die_shop') {
-  const [row] = await knex('organisations').insert({ name: `${kind} ${randomUUID().slice(0, 8)}`, kind, time_zone: 'America/Chicago' }).returning('id');
+  const timeZone = kind === 'printer' ? 'America/Chicago' : 'America/Indiana/Indianapolis';
+  const [row] = await knex('organisations').insert({ name: `${kind} ${randomUUID().slice(0, 8)}`, kind, time_zone: timeZone }).returning('id');
   return row.id as number;
 }
 async function user(organisationId: number, role: string, preferences = {}) {
@@ -73,10 +74,30 @@ describe('reminders against PostgreSQL and Redis', () => {
     const mail = await outboxTo(r.estimator.email);
     expect(mail).toHaveLength(1);
     expect(mail[0].subject).toMatch(/^Bids due in 24 hours/);
-    // The date in the e-mail is in the printer's zone (Chicago, UTC−6 in January): 17:00 CST.
-    expect(mail[0].text_body).toContain('Jan 15, 2027, 17:00 CST');
+    // The date is in the reader's zone: this shop is in Indianapolis (UTC−5 in January), 18:00 EST.
+    expect(mail[0].text_body).toContain('Jan 15, 2027, 18:00 EST');
     expect(mail[0].text_body).toContain(`${APP.appUrl}/requests/${r.id}`);
     expect(await outboxTo(r.buyer.email)).toHaveLength(0);
+  });
+
+  it('tells purchasing when the best bid is about to lapse, and the awarded shop and buyer before the need-by date', async () => {
+    const r = await openRequest(new Date('2026-12-01T23:00:00Z'));
+    await knex('die_requests').where({ id: r.id }).update({ status: 'bidding_closed', bidding_closed_at: new Date('2026-12-01T23:00:00Z') });
+    await knex('bids').insert({ request_id: r.id, shop_id: r.shop, lines: '[]', currency: 'USD', total_cents: 50_000, die_cents: 45_000, lead_days: 5, promised_ship_date: '2026-12-09', valid_until: '2026-12-20' });
+    const lapse = await keyOf(r.id, 'validity_ending');
+    // 09:00 Chicago on 18 Dec (two days before 20 Dec) = 15:00 UTC.
+    expect((await sendReminder(knex, { ...APP, now: new Date('2026-12-18T15:00:00Z') }, r.id, lapse)).result).toBe('sent');
+    expect((await outboxTo(r.purchasing.email))[0].subject).toMatch(/^Best bid lapses soon/);
+    expect(await outboxTo(r.buyer.email)).toHaveLength(0);
+
+    const bid = await knex('bids').where({ request_id: r.id }).first('id');
+    await knex('awards').insert({ request_id: r.id, bid_id: bid.id, shop_id: r.shop, revision: 1, total_cents: 50_000, die_cents: 45_000, currency: 'USD', lead_days: 5, promised_ship_date: '2027-02-20', awarded_at: new Date('2026-12-19T15:00:00Z'), po_number: `PO-T-${randomUUID().slice(0, 8)}` });
+    await knex('die_requests').where({ id: r.id }).update({ status: 'awarded' });
+    const week = await keyOf(r.id, 'need_by_7d');
+    // Need-by 1 Mar 2027, 09:00 Chicago = 15:00 UTC; seven days before: 22 Feb 15:00 UTC.
+    expect((await sendReminder(knex, { ...APP, now: new Date('2027-02-22T15:00:00Z') }, r.id, week)).result).toBe('sent');
+    expect((await outboxTo(r.estimator.email)).map((m) => m.subject)).toContain(`Needed in 7 days: ${(await knex('die_requests').where({ id: r.id }).first('title')).title}`);
+    expect((await outboxTo(r.buyer.email))[0].subject).toMatch(/^Needed in 7 days/);
   });
 
   it('checks the request again before sending: a shop that bid, or a cancelled request, gets nothing', async () => {
@@ -137,9 +158,9 @@ describe('reminders against PostgreSQL and Redis', () => {
     await knex('awards').insert({ request_id: r.id, bid_id: bid.id, shop_id: r.shop, revision: 1, total_cents: 100_000, die_cents: 90_000, currency: 'USD', lead_days: 5, promised_ship_date: '2026-11-10', awarded_at: new Date('2026-11-02T15:00:00Z'), po_number: `PO-T-${randomUUID().slice(0, 8)}` });
     await knex('die_requests').where({ id: r.id }).update({ status: 'in_production' });
     const key = await keyOf(r.id, 'late_shipment');
-    // The day after 10 Nov, 09:00 in the shop's zone (Chicago, UTC−6): 11 Nov 15:00 UTC.
-    expect((await sendReminder(knex, { ...APP, now: new Date('2026-11-11T14:59:00Z') }, r.id, key)).result).toBe('not-due');
-    expect((await sendReminder(knex, { ...APP, now: new Date('2026-11-11T15:00:00Z') }, r.id, key)).result).toBe('sent');
+    // The day after 10 Nov, 09:00 in the shop's zone (Indianapolis, UTC−5): 11 Nov 14:00 UTC.
+    expect((await sendReminder(knex, { ...APP, now: new Date('2026-11-11T13:59:00Z') }, r.id, key)).result).toBe('not-due');
+    expect((await sendReminder(knex, { ...APP, now: new Date('2026-11-11T14:00:00Z') }, r.id, key)).result).toBe('sent');
     expect((await knex('die_requests').where({ id: r.id }).first()).late_flagged_at).toBeTruthy();
     expect((await outboxTo(r.estimator.email))[0].subject).toMatch(/^Late:/);
     expect((await outboxTo(r.purchasing.email))[0].subject).toMatch(/^Late:/);

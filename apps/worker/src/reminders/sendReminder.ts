@@ -64,7 +64,10 @@ async function deliver(trx: Knex.Transaction, appUrl: string, reminder: PlannedR
     case 'bid_deadline_24h': {
       const hours = reminder.kind === 'bid_deadline_48h' ? 48 : 24;
       for (const shopId of await shopsYetToBid(trx, request.id)) {
-        await tell(shopId, { title: `Bids due in ${hours} hours: ${request.title}`, body: `Bids on "${request.title}" are due by ${deadline}. Your shop has not bid yet.` });
+        // Each shop reads the deadline in its own time zone.
+        const shop = await trx('organisations').where({ id: shopId }).first('time_zone');
+        const due = request.bid_deadline ? formatInZone(request.bid_deadline, shop?.time_zone ?? request.time_zone) : deadline;
+        await tell(shopId, { title: `Bids due in ${hours} hours: ${request.title}`, body: `Bids on "${request.title}" are due by ${due}. Your shop has not bid yet.` });
       }
       break;
     }
