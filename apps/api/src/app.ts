@@ -17,6 +17,7 @@ import { fileRoutes } from './routes/fileRoutes';
 import { notificationRoutes } from './routes/notificationRoutes';
 import { marketplaceRoutes } from './routes/marketplaceRoutes';
 import { pressRoutes } from './routes/pressRoutes';
+import { priceHistoryRoutes } from './routes/priceHistoryRoutes';
 import { requestRoutes } from './routes/requestRoutes';
 import { userRoutes } from './routes/userRoutes';
 import type { ServiceDeps } from './services/deps';
@@ -59,6 +60,7 @@ export function createApp(deps: AppDeps): Express {
   api.use('/requests', requestRoutes(services, requireAuth, config.maxUploadBytes));
   api.use('/files', fileRoutes(services, requireAuth));
   api.use('/notifications', notificationRoutes(requireAuth));
+  api.use('/price-history', priceHistoryRoutes(services, requireAuth));
   api.use(bidRoutes(services, requireAuth));
   api.use(marketplaceRoutes(services, requireAuth));
   api.use(notFoundHandler);

@@ -77,6 +77,8 @@ declare module 'vue' {
     MetricsTable: typeof import('./components/MetricsTable.vue')['default']
     NotificationBell: typeof import('./components/NotificationBell.vue')['default']
     PressFormModal: typeof import('./components/PressFormModal.vue')['default']
+    PriceCharts: typeof import('./components/PriceCharts.vue')['default']
+    PriceImportModal: typeof import('./components/PriceImportModal.vue')['default']
     QueryState: typeof import('./components/QueryState.vue')['default']
     RequestChecks: typeof import('./components/RequestChecks.vue')['default']
     RouterLink: typeof import('vue-router')['RouterLink']

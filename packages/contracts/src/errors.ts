@@ -6,6 +6,7 @@ export const ApiError = z.object({
     code: z.string(),
     message: z.string(),
     fields: z.record(z.string(), z.string()).optional(),
+    details: z.unknown().optional(),
   }),
 });
 export type ApiError = z.infer<typeof ApiError>;

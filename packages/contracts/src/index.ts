@@ -9,3 +9,4 @@ export * from './requests';
 export * from './requestDtos';
 export * from './bids';
 export * from './notifications';
+export * from './priceHistory';

@@ -228,13 +228,13 @@ async function seedHistory(knex: Knex): Promise<void> {
   if (await knex('priceRecords').where({ organisationId: org.id }).first()) return;
   const purchasing = await knex('users').where({ organisationId: org.id, role: 'purchasing' }).first();
   const press = await knex('presses').where({ organisationId: org.id }).orderBy('id').first();
+  const day = (d: Date) => d.toISOString().slice(0, 10);
   for (const [i, past] of pastDies.entries()) {
     const shop = await knex('organisations').where({ name: past.shop }).first();
     const estimator = await knex('users').where({ organisationId: shop.id, role: 'estimator' }).first();
     const { metrics } = analyseDieline(past.dieline());
     const awardedAt = atDays(-past.monthsAgo * 30);
     const promised = atDays(-past.monthsAgo * 30 + 7);
-    const day = (d: Date) => d.toISOString().slice(0, 10);
     const total = past.dieCents + past.extrasCents;
     const [{ id: requestId }] = await knex('dieRequests')
       .insert({
@@ -261,6 +261,26 @@ async function seedHistory(knex: Knex): Promise<void> {
       bends: metrics.bends, curves: metrics.curves, joints: metrics.joints, punches: metrics.punches, boardAreaSqIn: metrics.board.width * metrics.board.height, complexity: metrics.complexity,
     });
   }
+  // Two years of earlier dies the buyer kept in a spreadsheet, as if imported: invented prices
+  // that grow with rule length and features, a little dearer for complex dies, with some spread.
+  let seed = 11;
+  const rand = () => (seed = (seed * 16807) % 2147483647) / 2147483647;
+  const shops = ['Brightline Rule & Die', 'Okafor Steel Rule Dies', 'Cedar Bend Die Works', 'Lakeside Cutting Dies'];
+  const imported = Array.from({ length: 48 }, (_, i) => {
+    const ruleLengthIn = Math.round(40 + rand() * 320);
+    // One die in three is intricate: many bends per inch of rule, so the analysis calls it complex.
+    const bends = Math.round(rand() * ruleLengthIn * (i % 3 === 0 ? 0.6 : 0.3) + (i % 3 === 0 ? ruleLengthIn * 0.9 : 0));
+    const curves = Math.round(rand() * 20);
+    const joints = Math.round(rand() * 30);
+    const punches = Math.round(rand() * 6);
+    const features = bends + curves + joints + punches;
+    const complexity = features / ruleLengthIn > 1 ? 'complex' : 'simple';
+    const dieCents = Math.round((18_000 + 420 * ruleLengthIn + 650 * features) * (0.9 + rand() * 0.2) * (1 + i / 480));
+    const pricedOn = day(atDays(-730 + i * 14));
+    return { organisationId: org.id, shopName: shops[i % shops.length], totalCents: dieCents + 3_500, dieCents, currency: 'USD', pricedOn, ruleLengthIn, bends, curves, joints, punches, complexity, source: 'import' };
+  });
+  await knex('priceRecords').insert(imported);
+
   for (const demo of demoBids) {
     const request = await knex('dieRequests').where({ jobReference: demo.jobReference }).first();
     const shop = await knex('organisations').where({ name: demo.shop }).first();

@@ -6,6 +6,8 @@ export class HttpError extends Error {
     message: string,
     readonly fields?: Record<string, string>,
     readonly headers?: Record<string, string>,
+    /** Structured detail a client can show, e.g. every bad row of an import. */
+    readonly details?: unknown,
   ) {
     super(message);
   }

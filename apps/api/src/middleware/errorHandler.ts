@@ -28,7 +28,7 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
     if (res.headersSent) return;
     if (error instanceof HttpError) {
       if (error.headers) res.set(error.headers);
-      res.status(error.status).json({ error: { code: error.code, message: error.message, fields: error.fields } });
+      res.status(error.status).json({ error: { code: error.code, message: error.message, fields: error.fields, details: error.details } });
       return;
     }
     // body-parser's own errors carry a status and a type.

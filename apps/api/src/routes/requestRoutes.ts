@@ -26,6 +26,10 @@ export function requestRoutes(services: Services, requireAuth: RequestHandler, m
     res.json(await services.requests.detail(req.user!, id(req.params.id)));
   });
 
+  router.get('/:id/fair-price', printer, async (req, res) => {
+    res.json(await services.priceHistory.fairPrice(req.user!, id(req.params.id)));
+  });
+
   router.patch('/:id', printer, async (req, res) => {
     res.json(await services.requests.update(req.user!, id(req.params.id), parse(DieRequestUpdate, req.body)));
   });

@@ -14,6 +14,7 @@ import { todayIn } from '../lib/todayIn';
 import { Award, Bid, BidRevision, DieRequest } from '../models';
 import { recordAudit } from './auditService';
 import type { ServiceDeps } from './deps';
+import type { createPriceHistoryService } from './priceHistoryService';
 import type { createRequestService } from './requestService';
 import { primaryFile, toBidDto } from './requestViews';
 
@@ -43,7 +44,11 @@ export async function shopRecords(knex: Knex, shopIds: number[]): Promise<Map<nu
   return records;
 }
 
-export function createBidService({ knex, reminders }: ServiceDeps, requests: ReturnType<typeof createRequestService>) {
+export function createBidService(
+  { knex, reminders }: ServiceDeps,
+  requests: ReturnType<typeof createRequestService>,
+  priceHistory: ReturnType<typeof createPriceHistoryService>,
+) {
   const closedError = (request: DieRequest, timeZone: string) =>
     new HttpError(
       409,
@@ -214,11 +219,12 @@ export function createBidService({ knex, reminders }: ServiceDeps, requests: Ret
         { ruleLengthIn, needByDate: request.needByDate, today: todayIn(actor.timeZone) },
       );
       const award = await Award.query().findOne({ requestId }).withGraphFetched('shop');
+      const fair = await priceHistory.fairPrice(actor, requestId, bids[0]?.currency ?? 'USD');
       return {
         requestId,
         needByDate: request.needByDate,
         priceRuleIn: ruleLengthIn,
-        fairPrice: null,
+        fairPrice: fair.enough ? { lowCents: fair.band.lowCents, typicalCents: fair.band.typicalCents, highCents: fair.band.highCents, currency: fair.band.currency } : null,
         award: award
           ? { id: award.id, bidId: award.bidId, shopName: award.shop?.name ?? '', totalCents: award.totalCents, currency: award.currency, reason: award.reason, poNumber: award.poNumber, awardedAt: award.awardedAt.toISOString() }
           : null,

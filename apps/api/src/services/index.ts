@@ -9,15 +9,18 @@ import { createFileService } from './fileService';
 import { createBidService } from './bidService';
 import { createAwardService } from './awardService';
 import { createDashboardService } from './dashboardService';
+import { createPriceHistoryService } from './priceHistoryService';
 
 export function createServices(deps: ServiceDeps, limiter: LoginLimiter) {
   const requests = createRequestService(deps);
+  const priceHistory = createPriceHistoryService(deps);
   return {
     requests,
     files: createFileService(deps, requests),
-    bids: createBidService(deps, requests),
+    bids: createBidService(deps, requests, priceHistory),
     awards: createAwardService(deps, requests),
     dashboard: createDashboardService(deps),
+    priceHistory,
     auth: createAuthService(deps, limiter),
     users: createUserService(deps),
     invitations: createInvitationService(deps),

@@ -1,4 +1,5 @@
 import type {
+  PriceRecordDto,
   DashboardDto,
   NotificationKind,
   PreferencesDto,
@@ -108,4 +109,33 @@ export const meApi = {
   dashboard: () => api<DashboardDto>('/me/dashboard'),
   preferences: () => api<PreferencesDto>('/me/preferences'),
   savePreferences: (email: Partial<Record<NotificationKind, boolean>>) => api<PreferencesDto>('/me/preferences', { method: 'PUT', body: { email } }),
+};
+
+export interface PriceFitView {
+  currency: string | null;
+  total: number;
+  sampled: number;
+  fit:
+    | { enough: true; model: 'linear' | 'log'; r2: number; residualStandardErrorCents: number; n: number; df: number; describe: string; coefficients: { intercept: number; perInch: number; perFeature: number } }
+    | { enough: false; reason: string; needed: number };
+  perInch: null | Record<'simple' | 'complex', { enough: true; n: number; q1Cents: number; medianCents: number; q3Cents: number } | { enough: false; reason: string }>;
+  trend: null | { quarters: Array<{ quarter: string; n: number; medianCentsPerInch: number | null; changePct: number | null }> };
+  curve: Array<{ ruleLengthIn: number; lowCents: number; typicalCents: number; highCents: number }>;
+  typicalFeatures?: number;
+  points: Array<{ ruleLengthIn: number; dieCents: number; complexity: 'simple' | 'complex'; pricedOn: string; shopName: string; features: number }>;
+  shops: string[];
+  rule: string;
+}
+
+const query = (q: Record<string, string | number | undefined>) => {
+  const params = new URLSearchParams();
+  for (const [key, value] of Object.entries(q)) if (value !== undefined && value !== '') params.set(key, String(value));
+  return params.toString();
+};
+
+export const priceHistoryApi = {
+  list: (q: Record<string, string | number | undefined>) => api<Page<PriceRecordDto>>(`/price-history?${query(q)}`),
+  fit: (q: Record<string, string | number | undefined>) => api<PriceFitView>(`/price-history/fit?${query(q)}`),
+  exportUrl: (q: Record<string, string | number | undefined>) => `/price-history/export.csv?${query(q)}`,
+  fairPrice: (requestId: number) => api<{ enough: boolean; reason?: string; band?: { lowCents: number; typicalCents: number; highCents: number; currency: string; extrapolated: boolean } }>(`/requests/${requestId}/fair-price`),
 };

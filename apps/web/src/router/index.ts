@@ -39,6 +39,12 @@ export const appRoutes: RouteRecordRaw[] = [
     meta: { title: 'Die request', hidden: true },
   },
   {
+    path: 'price-history',
+    name: 'price-history',
+    component: () => import('../views/PriceHistoryView.vue'),
+    meta: { title: 'Price history', access: { kinds: ['printer'] } },
+  },
+  {
     path: 'open-requests',
     name: 'open-requests',
     component: () => import('../views/MarketplaceView.vue'),

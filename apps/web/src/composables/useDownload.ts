@@ -1,8 +1,8 @@
 import { message } from 'ant-design-vue';
 import { useAuthStore } from '../stores/auth';
 
-/** Opens a PDF the API serves only with the bearer token (a plain link cannot carry it). */
-export function usePdfDownload() {
+/** Downloads a file the API serves only with the bearer token (a plain link cannot carry it). */
+export function useDownload() {
   const auth = useAuthStore();
   return async function open(path: string, fileName: string) {
     const response = await fetch(`/api${path}`, { headers: { Authorization: `Bearer ${auth.session?.token ?? ''}` } }).catch(() => null);

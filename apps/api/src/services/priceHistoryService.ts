@@ -1,0 +1,193 @@
+import type { ImportRowError, Page, PriceRecordDto } from '@kerfmark/contracts';
+import type { Knex } from 'knex';
+import Papa from 'papaparse';
+import type { z } from 'zod';
+import type { PriceHistoryQuery as Query } from '@kerfmark/contracts';
+import type { AuthUser } from '../auth/passport';
+import { HttpError } from '../lib/httpError';
+import { recordAudit } from './auditService';
+import type { ServiceDeps } from './deps';
+import { previewImport, readImport } from './priceImport';
+import {
+  fairPriceBand,
+  fitPrice,
+  MODEL_CHOICE_RULE,
+  pricePerInch,
+  priceTrend,
+  type PriceObservation,
+} from '@kerfmark/pricing';
+import type { DielineMetrics } from '@kerfmark/contracts';
+import { DieRequest } from '../models';
+import { notFound } from '../lib/httpError';
+import { primaryFile } from './requestViews';
+
+/** The fit works on at most this many records (a random sample past it): enough for stable estimates. */
+export const FIT_SAMPLE = 5000;
+const CHART_POINTS = 1500;
+
+type Filters = z.output<typeof Query>;
+
+/** The printer's own price records, narrowed by the filters of the price history view. */
+export function filteredRecords(knex: Knex, organisationId: number, f: Partial<Filters>): Knex.QueryBuilder {
+  const q = knex('priceRecords').where('priceRecords.organisationId', organisationId);
+  if (f.from) q.where('pricedOn', '>=', f.from);
+  if (f.to) q.where('pricedOn', '<=', f.to);
+  if (f.complexity) q.where('complexity', f.complexity);
+  if (f.shop) q.where('shopName', f.shop);
+  if (f.minIn !== undefined) q.where('ruleLengthIn', '>=', f.minIn);
+  if (f.maxIn !== undefined) q.where('ruleLengthIn', '<=', f.maxIn);
+  if (f.currency) q.where('currency', f.currency);
+  if (f.ruleType) q.where(`${f.ruleType}In`, '>', 0);
+  return q;
+}
+
+const toDto = (r: Record<string, unknown>): PriceRecordDto => ({
+  id: Number(r.id),
+  pricedOn: String(r.pricedOn),
+  shopName: String(r.shopName),
+  requestId: (r.requestId as number | null) ?? null,
+  totalCents: Number(r.totalCents),
+  dieCents: Number(r.dieCents),
+  currency: String(r.currency),
+  ruleLengthIn: Number(r.ruleLengthIn),
+  cutIn: Number(r.cutIn),
+  creaseIn: Number(r.creaseIn),
+  perfIn: Number(r.perfIn),
+  kissIn: Number(r.kissIn),
+  bends: Number(r.bends),
+  curves: Number(r.curves),
+  joints: Number(r.joints),
+  punches: Number(r.punches),
+  boardAreaSqIn: Number(r.boardAreaSqIn),
+  complexity: r.complexity as 'simple' | 'complex',
+  source: r.source as 'award' | 'import',
+});
+
+export function createPriceHistoryService({ knex }: ServiceDeps) {
+  /** The currency most of the filtered records are in, when the filters name none. */
+  async function mainCurrency(organisationId: number, f: Partial<Filters>): Promise<string | null> {
+    const row = await filteredRecords(knex, organisationId, f).groupBy('currency').select('currency').count('* as n').orderBy('n', 'desc').first();
+    return (row?.currency as string | undefined) ?? null;
+  }
+
+  async function observations(organisationId: number, f: Partial<Filters>, currency: string) {
+    const [{ count }] = await filteredRecords(knex, organisationId, { ...f, currency }).count('* as count');
+    const q = filteredRecords(knex, organisationId, { ...f, currency }).select('dieCents', 'currency', 'ruleLengthIn', 'bends', 'curves', 'joints', 'punches', 'complexity', 'pricedOn', 'shopName');
+    if (Number(count) > FIT_SAMPLE) q.orderByRaw('random()').limit(FIT_SAMPLE);
+    const rows = (await q) as Array<Record<string, unknown>>;
+    return {
+      total: Number(count),
+      rows: rows.map((r) => ({
+        observation: {
+          dieCents: Number(r.dieCents),
+          currency: String(r.currency),
+          ruleLengthIn: Number(r.ruleLengthIn),
+          features: Number(r.bends) + Number(r.curves) + Number(r.joints) + Number(r.punches),
+          complexity: r.complexity as 'simple' | 'complex',
+          pricedOn: String(r.pricedOn),
+        } satisfies PriceObservation,
+        shopName: String(r.shopName),
+      })),
+    };
+  }
+
+  return {
+    /** The fit, the band along rule length, price per inch by class and by quarter, and points to plot. */
+    async fit(actor: AuthUser, f: Filters) {
+      const currency = f.currency ?? (await mainCurrency(actor.organisationId, f));
+      if (!currency) return { currency: null, total: 0, sampled: 0, fit: { enough: false, reason: 'There are no price records for these filters yet.', needed: 8 }, perInch: null, trend: null, curve: [], points: [], shops: [], rule: MODEL_CHOICE_RULE };
+      const { total, rows } = await observations(actor.organisationId, f, currency);
+      const obs = rows.map((r) => r.observation);
+      const fit = fitPrice(obs);
+      const features = obs.map((o) => o.features).sort((a, b) => a - b);
+      const typicalFeatures = features[Math.floor(features.length / 2)] ?? 0;
+      const lengths = obs.map((o) => o.ruleLengthIn);
+      const [lo, hi] = [Math.min(...lengths), Math.max(...lengths)];
+      const curve = fit.enough
+        ? Array.from({ length: 25 }, (_, i) => lo + ((hi - lo) * i) / 24).map((ruleLengthIn) => ({ ruleLengthIn, ...fairPriceBand(fit, { ruleLengthIn, features: typicalFeatures }) }))
+        : [];
+      return {
+        currency,
+        total,
+        sampled: obs.length,
+        fit,
+        perInch: pricePerInch(obs),
+        trend: priceTrend(obs),
+        curve,
+        typicalFeatures,
+        points: rows.slice(0, CHART_POINTS).map((r) => ({ ...r.observation, shopName: r.shopName })),
+        shops: (await filteredRecords(knex, actor.organisationId, {}).distinct('shopName').orderBy('shopName').limit(500)).map((r: { shopName: string }) => r.shopName),
+        rule: MODEL_CHOICE_RULE,
+      };
+    },
+
+    /** The fair-price band for a request's die, from the printer's own history, or why there is none. */
+    async fairPrice(actor: AuthUser, requestId: number, currency = 'USD') {
+      const request = await DieRequest.query().findOne({ id: requestId, organisationId: actor.organisationId }).withGraphFetched('files(byUpload)');
+      if (!request) throw notFound('That die request');
+      const metrics = primaryFile(request.files)?.metrics as DielineMetrics | null | undefined;
+      if (!metrics) return { enough: false as const, reason: 'The request has no measured dieline yet.', needed: 0 };
+      const { rows } = await observations(actor.organisationId, {}, currency);
+      const fit = fitPrice(rows.map((r) => r.observation));
+      if (!fit.enough) return fit;
+      const die = { ruleLengthIn: metrics.length.total - metrics.length.other, features: metrics.bends + metrics.curves + metrics.joints + metrics.punches };
+      if (!(die.ruleLengthIn > 0)) return { enough: false as const, reason: 'The dieline has no priced rule to price.', needed: 0 };
+      return { enough: true as const, band: fairPriceBand(fit, die), die, model: fit.model, n: fit.n, describe: fit.describe };
+    },
+
+    async list(actor: AuthUser, f: Filters): Promise<Page<PriceRecordDto>> {
+      const [rows, [{ count }]] = await Promise.all([
+        filteredRecords(knex, actor.organisationId, f).orderBy([{ column: 'pricedOn', order: 'desc' }, { column: 'id', order: 'desc' }]).limit(f.pageSize).offset((f.page - 1) * f.pageSize),
+        filteredRecords(knex, actor.organisationId, f).count('* as count'),
+      ]);
+      return { items: (rows as Array<Record<string, unknown>>).map(toDto), total: Number(count), page: f.page, pageSize: f.pageSize };
+    },
+
+    /** The filtered history as CSV, money in major units (as people read it), dates as YYYY-MM-DD. */
+    async csv(actor: AuthUser, f: Filters): Promise<string> {
+      const rows = ((await filteredRecords(knex, actor.organisationId, f).orderBy("pricedOn").limit(200_000)) as Array<Record<string, unknown>>).map(toDto);
+      const major = (cents: number, currency: string) => (currency === 'JPY' ? String(cents) : `${Math.trunc(cents / 100)}.${String(Math.abs(cents % 100)).padStart(2, '0')}`);
+      return Papa.unparse({
+        fields: ['Date', 'Die shop', 'Die price', 'Total price', 'Currency', 'Rule length (in)', 'Cutting (in)', 'Creasing (in)', 'Perforating (in)', 'Kiss cut (in)', 'Bends', 'Curves', 'Joints', 'Punches', 'Board area (sq in)', 'Complexity', 'Source'],
+        data: rows.map((r) => [r.pricedOn, r.shopName, major(r.dieCents, r.currency), major(r.totalCents, r.currency), r.currency, r.ruleLengthIn, r.cutIn, r.creaseIn, r.perfIn, r.kissIn, r.bends, r.curves, r.joints, r.punches, r.boardAreaSqIn, r.complexity, r.source]),
+      });
+    },
+
+    preview: (text: string) => previewImport(text),
+
+    /** Imports every row or none: a single bad row stops the whole file, with each error listed. */
+    async importCsv(actor: AuthUser, text: string, mapping: Record<string, string>): Promise<{ imported: number }> {
+      const { records, errors } = readImport(text, mapping, 'USD');
+      if (errors.length) {
+        throw new HttpError(400, 'import_rejected', `${errors.length} problem${errors.length === 1 ? '' : 's'} found; nothing was imported. Fix the rows and try again.`, undefined, undefined, {
+          rows: errors.slice(0, 500) satisfies ImportRowError[],
+        });
+      }
+      await knex.transaction(async (trx) => {
+        for (let i = 0; i < records.length; i += 1000) {
+          await trx('priceRecords').insert(
+            records.slice(i, i + 1000).map((r) => ({
+              organisationId: actor.organisationId,
+              shopName: r.shopName,
+              totalCents: r.totalCents,
+              dieCents: r.dieCents,
+              currency: r.currency,
+              pricedOn: r.pricedOn,
+              ruleLengthIn: r.ruleLengthIn,
+              bends: r.bends,
+              curves: r.curves,
+              joints: r.joints,
+              punches: r.punches,
+              complexity: r.complexity,
+              source: 'import',
+            })),
+          );
+        }
+        await recordAudit(trx, { organisationId: actor.organisationId, actorUserId: actor.id, entity: 'price_history', entityId: actor.organisationId, action: 'imported', detail: { rows: records.length } });
+      });
+      return { imported: records.length };
+    },
+  };
+}
+
+
