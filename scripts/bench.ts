@@ -3,7 +3,11 @@ import { spawnSync } from 'node:child_process';
 import path from 'node:path';
 import { repoRoot } from './lib/profile';
 
-const benches = [{ name: 'Dieline analysis (20,000-entity DXF) against the DXF parser alone', file: 'packages/dieline/bench/analyse.bench.ts' }];
+const benches = [
+  { name: 'Dieline analysis (20,000-entity DXF) against the DXF parser alone', file: 'packages/dieline/bench/analyse.bench.ts' },
+  { name: 'Price fit in memory (100,000 records, no sampling)', file: 'packages/pricing/bench/fit.bench.ts' },
+  { name: 'Price history API over 100,000 records against a bare SQL count', file: 'scripts/benchPriceHistory.ts' },
+];
 
 let failed = 0;
 for (const bench of benches) {
