@@ -15,6 +15,7 @@ import { meRoutes } from './routes/meRoutes';
 import { bidRoutes } from './routes/bidRoutes';
 import { fileRoutes } from './routes/fileRoutes';
 import { notificationRoutes } from './routes/notificationRoutes';
+import { libraryRoutes } from './routes/libraryRoutes';
 import { marketplaceRoutes } from './routes/marketplaceRoutes';
 import { pressRoutes } from './routes/pressRoutes';
 import { priceHistoryRoutes } from './routes/priceHistoryRoutes';
@@ -62,6 +63,7 @@ export function createApp(deps: AppDeps): Express {
   api.use('/notifications', notificationRoutes(requireAuth));
   api.use('/price-history', priceHistoryRoutes(services, requireAuth));
   api.use(bidRoutes(services, requireAuth));
+  api.use(libraryRoutes(services, requireAuth));
   api.use(marketplaceRoutes(services, requireAuth));
   api.use(notFoundHandler);
   app.use('/api', api);

@@ -10,3 +10,4 @@ export * from './requestDtos';
 export * from './bids';
 export * from './notifications';
 export * from './priceHistory';
+export * from './library';

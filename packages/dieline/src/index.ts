@@ -21,3 +21,4 @@ export { FORMATS, decodeInput, detectFormat } from './input';
 export type { DielineFormat } from './input';
 export { UNIT_NAMES } from './unitNames';
 export type { UnitName } from './unitNames';
+export { matchDies, SIZE_TOLERANCE_IN, LENGTH_TOLERANCE, type DieShape, type DieMatch } from './matchDies';

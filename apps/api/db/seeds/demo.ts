@@ -255,6 +255,12 @@ async function seedHistory(knex: Knex): Promise<void> {
     const [{ id: awardId }] = await knex('awards')
       .insert({ requestId, bidId, shopId: shop.id, revision: 1, totalCents: total, dieCents: past.dieCents, currency: 'USD', leadDays: 5, promisedShipDate: day(promised), awardedBy: purchasing.id, awardedAt, poNumber: `PO-${awardedAt.getUTCFullYear()}-${String(nextval).padStart(5, '0')}` })
       .returning('id');
+    // The received die went into storage: rack, impressions run since, a life the buyer set.
+    await knex('libraryDies').insert({
+      organisationId: org.id, name: `${past.title} (LPC-2${3100 + i})`, requestId, ups: 1, ruleTypes: ['cut', 'crease'], pressId: press.id,
+      storageLocation: `Rack ${String.fromCharCode(65 + (i % 3))}-${10 + i}`, impressions: [182_000, 64_500, 12_000, 240_000, 31_000, 8_000][i] ?? 0,
+      impressionLimit: 250_000, lastUsedOn: day(atDays(-past.monthsAgo * 10)), metrics: JSON.stringify(metrics), preview: JSON.stringify(analyseDieline(past.dieline()).preview),
+    });
     await knex('priceRecords').insert({
       organisationId: org.id, requestId, awardId, shopId: shop.id, shopName: shop.name, totalCents: total, dieCents: past.dieCents, currency: 'USD', pricedOn: day(awardedAt),
       ruleLengthIn: metrics.length.total - metrics.length.other, cutIn: metrics.length.cut, creaseIn: metrics.length.crease, perfIn: metrics.length.perf, kissIn: metrics.length.kiss,

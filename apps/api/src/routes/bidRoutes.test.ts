@@ -186,6 +186,15 @@ describe('award', () => {
     expect(record).toMatchObject({ totalCents: 98_500, dieCents: 95_000, currency: 'USD', shopId: w.shop.id, complexity: expect.any(String) });
     expect(Number(record.ruleLengthIn)).toBeCloseTo(18, 3);
 
+    // The received die is in the printer's library, and another request like it finds it there.
+    const library = await request(app).get('/api/library').set(bearer(w.tokens.buyer));
+    const stored = library.body.find((d: { requestId: number }) => d.requestId === open.id);
+    expect(stored).toMatchObject({ mine: true, condition: 'good', impressions: 0 });
+    const twin = await createOpenRequest(w);
+    const matches = await request(app).get(`/api/requests/${twin.id}/library-matches`).set(bearer(w.tokens.buyer));
+    expect(matches.body[0]).toMatchObject({ id: stored.id });
+    expect(matches.body[0].match.reasons.join(' ')).toContain('within 5 %');
+
     // The winner's estimate aid now holds this die: 95,000 cents of die over 18 in = 5,277.8 → 5,278 a inch.
     const aid = await request(app).get('/api/estimate-aid').set(bearer(w.tokens.estimator));
     expect(aid.body).toEqual([{ currency: 'USD', dies: 1, centsPerInch: 5_278, centsPerBend: 23_750 }]);

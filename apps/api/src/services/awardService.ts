@@ -10,11 +10,16 @@ import type { ServiceDeps } from './deps';
 import { ocdsRelease } from './documents/ocdsRelease';
 import { purchaseOrderPdf } from './documents/purchaseOrderPdf';
 import { notifyOrganisation } from './notificationService';
+import type { createLibraryService } from './libraryService';
 import type { createRequestService } from './requestService';
 import { transitionRequest } from './requestStatus';
 import { primaryFile } from './requestViews';
 
-export function createAwardService(deps: ServiceDeps, requests: ReturnType<typeof createRequestService>) {
+export function createAwardService(
+  deps: ServiceDeps,
+  requests: ReturnType<typeof createRequestService>,
+  library: ReturnType<typeof createLibraryService>,
+) {
   const { knex, config, storage, logger } = deps;
   const notify = (trx: Knex.Transaction, orgId: number, notice: Parameters<typeof notifyOrganisation>[3]) =>
     notifyOrganisation(trx, { emails: deps.emails, appUrl: config.appUrl }, orgId, notice);
@@ -286,6 +291,7 @@ export function createAwardService(deps: ServiceDeps, requests: ReturnType<typeo
             complexity: metrics.complexity,
           });
         }
+        await library.addReceived(trx, requestId);
         await notify(trx, award.shopId, {
           kind: 'received',
           title: `Received: ${request.title}`,

@@ -10,15 +10,18 @@ import { createBidService } from './bidService';
 import { createAwardService } from './awardService';
 import { createDashboardService } from './dashboardService';
 import { createPriceHistoryService } from './priceHistoryService';
+import { createLibraryService } from './libraryService';
 
 export function createServices(deps: ServiceDeps, limiter: LoginLimiter) {
   const requests = createRequestService(deps);
   const priceHistory = createPriceHistoryService(deps);
+  const library = createLibraryService(deps, requests);
   return {
+    library,
     requests,
     files: createFileService(deps, requests),
     bids: createBidService(deps, requests, priceHistory),
-    awards: createAwardService(deps, requests),
+    awards: createAwardService(deps, requests, library),
     dashboard: createDashboardService(deps),
     priceHistory,
     auth: createAuthService(deps, limiter),
