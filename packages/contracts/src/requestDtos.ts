@@ -88,6 +88,11 @@ export interface DieRequestDetail extends DieRequestSummary {
   caliperIn: number | null;
   stockWeightGsm: number | null;
   grain: Grain | null;
+  stockKind: 'paper' | 'paperboard' | 'corrugated';
+  stockWeightEntry: string | null;
+  foldAcrossGrain: boolean | null;
+  heavyInkOnFold: boolean | null;
+  colourBreakOnFold: boolean | null;
   pressId: number | null;
   press: Press | null;
   runSheets: number | null;

@@ -91,6 +91,12 @@ export const DieRequestFields = z.object({
   caliperIn: z.number({ error: 'Enter the caliper' }).min(0.001, 'At least 0.001 in').max(0.5, 'At most 0.5 in').nullable().optional(),
   stockWeightGsm: z.number({ error: 'Enter the stock weight' }).min(20, 'At least 20 g/m²').max(3000, 'At most 3,000 g/m²').nullable().optional(),
   grain: Grain.nullable().optional(),
+  stockKind: z.enum(['paper', 'paperboard', 'corrugated']).default('paperboard'),
+  /** The weight as the buyer entered it, e.g. "80 lb cover"; stockWeightGsm holds it in g/m². */
+  stockWeightEntry: optionalText(40),
+  foldAcrossGrain: z.boolean().nullable().optional(),
+  heavyInkOnFold: z.boolean().nullable().optional(),
+  colourBreakOnFold: z.boolean().nullable().optional(),
   pressId: z.number().int().positive().nullable().optional(),
   runSheets: z.number({ error: 'Enter the sheets to run' }).int('A whole number of sheets').min(1).max(10_000_000).nullable().optional(),
   plannedLeadDays: z.number().int().min(1, 'At least 1 working day').max(60, 'At most 60 working days').default(5),

@@ -21,6 +21,11 @@ export class DieRequest extends Model {
   caliperIn!: number | null;
   stockWeightGsm!: number | null;
   grain!: Grain | null;
+  stockKind!: 'paper' | 'paperboard' | 'corrugated';
+  stockWeightEntry!: string | null;
+  foldAcrossGrain!: boolean | null;
+  heavyInkOnFold!: boolean | null;
+  colourBreakOnFold!: boolean | null;
   pressId!: number | null;
   runSheets!: number | null;
   plannedLeadDays!: number;

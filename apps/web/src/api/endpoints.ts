@@ -1,4 +1,5 @@
 import type {
+  LibraryDieDto,
   PriceRecordDto,
   DashboardDto,
   NotificationKind,
@@ -138,4 +139,13 @@ export const priceHistoryApi = {
   fit: (q: Record<string, string | number | undefined>) => api<PriceFitView>(`/price-history/fit?${query(q)}`),
   exportUrl: (q: Record<string, string | number | undefined>) => `/price-history/export.csv?${query(q)}`,
   fairPrice: (requestId: number) => api<{ enough: boolean; reason?: string; band?: { lowCents: number; typicalCents: number; highCents: number; currency: string; extrapolated: boolean } }>(`/requests/${requestId}/fair-price`),
+};
+
+export const libraryApi = {
+  list: () => api<LibraryDieDto[]>('/library'),
+  get: (id: number) => api<LibraryDieDto & { preview: DielinePreview | null }>(`/library/${id}`),
+  update: (id: number, patch: Record<string, unknown>) => api<LibraryDieDto>(`/library/${id}`, { method: 'PATCH', body: patch }),
+  addRun: (id: number, run: { runOn: string; impressions: number; jobReference?: string | null; notes?: string | null }) =>
+    api<LibraryDieDto>(`/library/${id}/runs`, { method: 'POST', body: run }),
+  matches: (requestId: number) => api<LibraryDieDto[]>(`/requests/${requestId}/library-matches`),
 };

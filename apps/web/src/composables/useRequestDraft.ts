@@ -1,4 +1,5 @@
 import type { DieRequestCreate, DieRequestDetail, Grain, RuleType, Visibility } from '@kerfmark/contracts';
+import { basisWeightToGsm, gsmToBasisWeight } from '@kerfmark/stock';
 import dayjs, { type Dayjs } from 'dayjs';
 import { reactive } from 'vue';
 
@@ -12,8 +13,14 @@ export interface RequestForm {
   pieceHeightIn: number | undefined;
   stockName: string;
   caliperPt: number | undefined;
-  stockWeightGsm: number | undefined;
+  /** The weight as typed, in g/m² or in pounds of a US basis grade. */
+  stockWeight: number | undefined;
+  weightUnit: WeightUnit;
+  stockKind: 'paper' | 'paperboard' | 'corrugated';
   grain: Grain | undefined;
+  foldAcrossGrain: boolean | undefined;
+  heavyInkOnFold: boolean | undefined;
+  colourBreakOnFold: boolean | undefined;
   ruleTypes: RuleType[];
   counterWanted: boolean;
   ejectionRubberWanted: boolean;
@@ -29,6 +36,22 @@ export interface RequestForm {
   notes: string;
 }
 
+export type WeightUnit = 'gsm' | 'text' | 'cover' | 'bristol' | 'index' | 'bond';
+export const weightUnitLabels: Record<WeightUnit, string> = {
+  gsm: 'g/m²',
+  text: 'lb text',
+  cover: 'lb cover',
+  bristol: 'lb bristol',
+  index: 'lb index',
+  bond: 'lb bond',
+};
+
+/** The weight in g/m², converted from a US basis weight by its basis size when needed. */
+export function weightInGsm(value: number | undefined, unit: WeightUnit): number | null {
+  if (!value) return null;
+  return unit === 'gsm' ? value : Math.round(basisWeightToGsm(value, unit) * 10) / 10;
+}
+
 export function emptyRequestForm(): RequestForm {
   return {
     title: '',
@@ -39,8 +62,13 @@ export function emptyRequestForm(): RequestForm {
     pieceHeightIn: undefined,
     stockName: '',
     caliperPt: undefined,
-    stockWeightGsm: undefined,
+    stockWeight: undefined,
+    weightUnit: 'gsm',
+    stockKind: 'paperboard',
     grain: undefined,
+    foldAcrossGrain: undefined,
+    heavyInkOnFold: undefined,
+    colourBreakOnFold: undefined,
     ruleTypes: ['cut', 'crease'],
     counterWanted: false,
     ejectionRubberWanted: true,
@@ -70,8 +98,13 @@ export function toRequestInput(form: RequestForm): DieRequestCreate {
     pieceHeightIn: form.pieceHeightIn ?? null,
     stockName: blankToNull(form.stockName),
     caliperIn: form.caliperPt ? Math.round(form.caliperPt * 10) / 10000 : null,
-    stockWeightGsm: form.stockWeightGsm ?? null,
+    stockWeightGsm: weightInGsm(form.stockWeight, form.weightUnit),
+    stockWeightEntry: form.stockWeight ? `${form.stockWeight} ${weightUnitLabels[form.weightUnit]}` : null,
+    stockKind: form.stockKind,
     grain: form.grain ?? null,
+    foldAcrossGrain: form.foldAcrossGrain ?? null,
+    heavyInkOnFold: form.heavyInkOnFold ?? null,
+    colourBreakOnFold: form.colourBreakOnFold ?? null,
     ruleTypes: form.ruleTypes,
     counterWanted: form.counterWanted,
     ejectionRubberWanted: form.ejectionRubberWanted,
@@ -98,8 +131,12 @@ export function fromRequest(request: DieRequestDetail): RequestForm {
     pieceHeightIn: request.pieceHeightIn ?? undefined,
     stockName: request.stockName ?? '',
     caliperPt: request.caliperIn ? Math.round(request.caliperIn * 10000) / 10 : undefined,
-    stockWeightGsm: request.stockWeightGsm ?? undefined,
+    ...weightFromEntry(request.stockWeightEntry, request.stockWeightGsm),
+    stockKind: request.stockKind,
     grain: request.grain ?? undefined,
+    foldAcrossGrain: request.foldAcrossGrain ?? undefined,
+    heavyInkOnFold: request.heavyInkOnFold ?? undefined,
+    colourBreakOnFold: request.colourBreakOnFold ?? undefined,
     ruleTypes: request.ruleTypes,
     counterWanted: request.counterWanted,
     ejectionRubberWanted: request.ejectionRubberWanted,
@@ -114,6 +151,20 @@ export function fromRequest(request: DieRequestDetail): RequestForm {
     invitedShopIds: request.invitedShops.map((s) => s.id),
     notes: request.notes ?? '',
   };
+}
+
+/** Back to what the buyer typed: "80 lb cover" stays in pounds of cover; otherwise g/m². */
+function weightFromEntry(entry: string | null, gsm: number | null): { stockWeight: number | undefined; weightUnit: WeightUnit } {
+  const unit = (Object.entries(weightUnitLabels) as Array<[WeightUnit, string]>).find(([, label]) => entry?.endsWith(` ${label}`))?.[0];
+  if (entry && unit) return { stockWeight: Number(entry.split(' ')[0]), weightUnit: unit };
+  return { stockWeight: gsm ?? undefined, weightUnit: 'gsm' };
+}
+
+/** Shown beside the weight field: the other unit, so the buyer can check the conversion. */
+export function weightHint(value: number | undefined, unit: WeightUnit): string | undefined {
+  if (!value) return undefined;
+  if (unit !== 'gsm') return `= ${weightInGsm(value, unit)} g/m²`;
+  return `= ${Math.round(gsmToBasisWeight(value, 'cover'))} lb cover, ${Math.round(gsmToBasisWeight(value, 'text'))} lb text`;
 }
 
 export function useRequestDraft() {

@@ -45,6 +45,12 @@ export const appRoutes: RouteRecordRaw[] = [
     meta: { title: 'Price history', access: { kinds: ['printer'] } },
   },
   {
+    path: 'library',
+    name: 'library',
+    component: () => import('../views/LibraryView.vue'),
+    meta: { title: 'Die library' },
+  },
+  {
     path: 'open-requests',
     name: 'open-requests',
     component: () => import('../views/MarketplaceView.vue'),
