@@ -7,6 +7,7 @@ const benches = [
   { name: 'Dieline analysis (20,000-entity DXF) against the DXF parser alone', file: 'packages/dieline/bench/analyse.bench.ts' },
   { name: 'Price fit in memory (100,000 records, no sampling)', file: 'packages/pricing/bench/fit.bench.ts' },
   { name: 'Price history API over 100,000 records against a bare SQL count', file: 'scripts/benchPriceHistory.ts' },
+  { name: 'API under load against bare Express + pg routes', file: 'scripts/benchApi.ts' },
 ];
 
 let failed = 0;

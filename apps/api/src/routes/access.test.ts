@@ -1,6 +1,6 @@
 import request from 'supertest';
 import { beforeAll, describe, expect, it } from 'vitest';
-import { app, createPress, createWorld, unique } from '../test/harness';
+import { app, createOpenRequest, createPress, createWorld, unique } from '../test/harness';
 
 type Actor = 'anonymous' | 'buyer' | 'purchasing' | 'printerAdmin' | 'estimator' | 'shopAdmin';
 type World = Awaited<ReturnType<typeof createWorld>>;
@@ -69,6 +69,55 @@ const cases: RouteCase[] = [
     send: (w) => request(app).patch(`/api/presses/${pressIds.get(w)}`).send({ typicalSpeedSph: 3500 }),
     expect: { anonymous: 401, buyer: 403, purchasing: 403, printerAdmin: 200, estimator: 403, shopAdmin: 403 },
   },
+  { name: 'GET /api/me/dashboard', send: () => request(app).get('/api/me/dashboard'), expect: everyone(200) },
+  { name: 'GET /api/me/preferences', send: () => request(app).get('/api/me/preferences'), expect: everyone(200) },
+  { name: 'GET /api/notifications', send: () => request(app).get('/api/notifications'), expect: everyone(200) },
+  { name: 'GET /api/library', send: () => request(app).get('/api/library'), expect: everyone(200) },
+  {
+    name: 'GET /api/requests',
+    send: () => request(app).get('/api/requests'),
+    expect: { anonymous: 401, buyer: 200, purchasing: 200, printerAdmin: 200, estimator: 403, shopAdmin: 403 },
+  },
+  {
+    name: 'POST /api/requests',
+    send: () => request(app).post('/api/requests').send({ title: `Access ${unique()}`, quantity: 1, ups: 1, ruleTypes: ['cut'] }),
+    expect: { anonymous: 401, buyer: 201, purchasing: 201, printerAdmin: 201, estimator: 403, shopAdmin: 403 },
+  },
+  {
+    name: 'GET /api/requests/:id',
+    send: (w) => request(app).get(`/api/requests/${openIds.get(w)}`),
+    expect: everyone(200),
+  },
+  {
+    name: 'GET /api/requests/:id/bids (sealed until the deadline)',
+    send: (w) => request(app).get(`/api/requests/${openIds.get(w)}/bids`),
+    expect: { anonymous: 401, buyer: 404, purchasing: 404, printerAdmin: 404, estimator: 403, shopAdmin: 403 },
+  },
+  {
+    name: 'GET /api/marketplace/requests',
+    send: () => request(app).get('/api/marketplace/requests'),
+    expect: { anonymous: 401, buyer: 403, purchasing: 403, printerAdmin: 403, estimator: 200, shopAdmin: 200 },
+  },
+  {
+    name: 'GET /api/die-shops',
+    send: () => request(app).get('/api/die-shops'),
+    expect: { anonymous: 401, buyer: 200, purchasing: 200, printerAdmin: 200, estimator: 403, shopAdmin: 403 },
+  },
+  {
+    name: 'GET /api/price-history',
+    send: () => request(app).get('/api/price-history'),
+    expect: { anonymous: 401, buyer: 200, purchasing: 200, printerAdmin: 200, estimator: 403, shopAdmin: 403 },
+  },
+  {
+    name: 'GET /api/estimate-aid',
+    send: () => request(app).get('/api/estimate-aid'),
+    expect: { anonymous: 401, buyer: 403, purchasing: 403, printerAdmin: 403, estimator: 200, shopAdmin: 200 },
+  },
+  {
+    name: 'POST /api/requests/:id/award (bids still sealed)',
+    send: (w) => request(app).post(`/api/requests/${openIds.get(w)}/award`).send({ bidId: 1 }),
+    expect: { anonymous: 401, buyer: 403, purchasing: 409, printerAdmin: 409, estimator: 403, shopAdmin: 403 },
+  },
   {
     name: 'POST /api/auth/logout',
     send: () => request(app).post('/api/auth/logout'),
@@ -77,11 +126,13 @@ const cases: RouteCase[] = [
 ];
 
 const pressIds = new WeakMap<World, number>();
+const openIds = new WeakMap<World, number>();
 let world: World;
 
 beforeAll(async () => {
   world = await createWorld();
   pressIds.set(world, (await createPress(world.printer)).id);
+  openIds.set(world, (await createOpenRequest(world)).id);
 });
 
 describe('role-by-route access', () => {

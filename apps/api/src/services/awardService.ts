@@ -11,14 +11,16 @@ import { ocdsRelease } from './documents/ocdsRelease';
 import { purchaseOrderPdf } from './documents/purchaseOrderPdf';
 import { notifyOrganisation } from './notificationService';
 import type { createLibraryService } from './libraryService';
+import type { createPriceHistoryService } from './priceHistoryService';
 import type { createRequestService } from './requestService';
-import { transitionRequest } from './requestStatus';
+import { checkTransition, transitionRequest } from './requestStatus';
 import { primaryFile } from './requestViews';
 
 export function createAwardService(
   deps: ServiceDeps,
   requests: ReturnType<typeof createRequestService>,
   library: ReturnType<typeof createLibraryService>,
+  priceHistory: ReturnType<typeof createPriceHistoryService>,
 ) {
   const { knex, config, storage, logger } = deps;
   const notify = (trx: Knex.Transaction, orgId: number, notice: Parameters<typeof notifyOrganisation>[3]) =>
@@ -70,6 +72,8 @@ export function createAwardService(
       const awardId = await knex.transaction(async (trx) => {
         await requests.findOwned(actor, requestId, trx);
         const request = await DieRequest.query(trx).findById(requestId).forUpdate().throwIfNotFound();
+        // Who may award at all comes before whether now is the time.
+        checkTransition(actor, { ...request, status: 'bidding_closed' } as DieRequest, 'award', null);
         if (request.status === 'awarded' || (await awardOf(trx, requestId))) throw conflict('This request has already been awarded.');
         if (request.status === 'open') {
           if (biddingOpen(request)) throw conflict('Close bidding before awarding: bids are still sealed.');
@@ -292,6 +296,7 @@ export function createAwardService(
           });
         }
         await library.addReceived(trx, requestId);
+        trx.executionPromise.then(() => priceHistory.forget(request.organisationId)).catch(() => undefined);
         await notify(trx, award.shopId, {
           kind: 'received',
           title: `Received: ${request.title}`,

@@ -21,7 +21,7 @@ export function createServices(deps: ServiceDeps, limiter: LoginLimiter) {
     requests,
     files: createFileService(deps, requests),
     bids: createBidService(deps, requests, priceHistory),
-    awards: createAwardService(deps, requests, library),
+    awards: createAwardService(deps, requests, library, priceHistory),
     dashboard: createDashboardService(deps),
     priceHistory,
     auth: createAuthService(deps, limiter),

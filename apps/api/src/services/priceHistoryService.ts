@@ -63,7 +63,26 @@ const toDto = (r: Record<string, unknown>): PriceRecordDto => ({
   source: r.source as 'award' | 'import',
 });
 
+/** Fits are kept this long per organisation and currency: the history changes slowly. */
+const FIT_CACHE_MS = 5 * 60_000;
+
 export function createPriceHistoryService({ knex }: ServiceDeps) {
+  // The unfiltered fit behind every fair-price band, cached so that a bid comparison does not
+  // refit the whole history; an import or a received die clears the organisation's entries.
+  const fits = new Map<string, { at: number; fit: ReturnType<typeof fitPrice> }>();
+  async function historyFit(organisationId: number, currency: string) {
+    const key = `${organisationId}:${currency}`;
+    const hit = fits.get(key);
+    if (hit && Date.now() - hit.at < FIT_CACHE_MS) return hit.fit;
+    const { rows } = await observations(organisationId, {}, currency);
+    const fit = fitPrice(rows.map((r) => r.observation));
+    fits.set(key, { at: Date.now(), fit });
+    return fit;
+  }
+  const forget = (organisationId: number) => {
+    for (const key of fits.keys()) if (key.startsWith(`${organisationId}:`)) fits.delete(key);
+  };
+
   /** The currency most of the filtered records are in, when the filters name none. */
   async function mainCurrency(organisationId: number, f: Partial<Filters>): Promise<string | null> {
     const row = await filteredRecords(knex, organisationId, f).groupBy('currency').select('currency').count('* as n').orderBy('n', 'desc').first();
@@ -92,6 +111,9 @@ export function createPriceHistoryService({ knex }: ServiceDeps) {
   }
 
   return {
+    /** Drops the cached fits of an organisation whose history just changed. */
+    forget,
+
     /** The fit, the band along rule length, price per inch by class and by quarter, and points to plot. */
     async fit(actor: AuthUser, f: Filters) {
       const currency = f.currency ?? (await mainCurrency(actor.organisationId, f));
@@ -127,8 +149,7 @@ export function createPriceHistoryService({ knex }: ServiceDeps) {
       if (!request) throw notFound('That die request');
       const metrics = primaryFile(request.files)?.metrics as DielineMetrics | null | undefined;
       if (!metrics) return { enough: false as const, reason: 'The request has no measured dieline yet.', needed: 0 };
-      const { rows } = await observations(actor.organisationId, {}, currency);
-      const fit = fitPrice(rows.map((r) => r.observation));
+      const fit = await historyFit(actor.organisationId, currency);
       if (!fit.enough) return fit;
       const die = { ruleLengthIn: metrics.length.total - metrics.length.other, features: metrics.bends + metrics.curves + metrics.joints + metrics.punches };
       if (!(die.ruleLengthIn > 0)) return { enough: false as const, reason: 'The dieline has no priced rule to price.', needed: 0 };
@@ -185,6 +206,7 @@ export function createPriceHistoryService({ knex }: ServiceDeps) {
         }
         await recordAudit(trx, { organisationId: actor.organisationId, actorUserId: actor.id, entity: 'price_history', entityId: actor.organisationId, action: 'imported', detail: { rows: records.length } });
       });
+      forget(actor.organisationId);
       return { imported: records.length };
     },
   };

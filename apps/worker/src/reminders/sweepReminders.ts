@@ -12,6 +12,7 @@ const ACTIVE = ['open', 'bidding_closed', 'awarded', 'in_production'];
 export async function sweepReminders(knex: Knex, queue: Queue<SendReminderJob>, now = new Date()): Promise<number> {
   const ids = (await knex('die_requests').whereIn('status', ACTIVE).select('id')).map((r: { id: number }) => r.id);
   let jobs = 0;
-  for (const id of ids) jobs += (await planRequestReminders(knex, queue, id, now)).length;
+  // Adding is enough here: a reminder that no longer applies checks the request and stays silent.
+  for (const id of ids) jobs += (await planRequestReminders(knex, queue, id, now, { prune: false })).length;
   return jobs;
 }
