@@ -95,7 +95,8 @@ export async function createWorld() {
 export async function waitForEmail(
   to: string,
   subject: string | RegExp = '',
-  timeoutMs = 15_000,
+  // Generous: the e-mail waits for the worker, which shares two cores with the whole suite.
+  timeoutMs = 30_000,
 ): Promise<{ subject: string; text: string; html: string | null }> {
   const until = Date.now() + timeoutMs;
   while (Date.now() < until) {

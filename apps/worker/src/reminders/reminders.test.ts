@@ -87,8 +87,10 @@ describe('reminders against PostgreSQL and Redis', () => {
     const lapse = await keyOf(r.id, 'validity_ending');
     // 09:00 Chicago on 18 Dec (two days before 20 Dec) = 15:00 UTC.
     expect((await sendReminder(knex, { ...APP, now: new Date('2026-12-18T15:00:00Z') }, r.id, lapse)).result).toBe('sent');
-    expect((await outboxTo(r.purchasing.email))[0].subject).toMatch(/^Best bid lapses soon/);
-    expect(await outboxTo(r.buyer.email)).toHaveLength(0);
+    // (The running worker may also have sent "bids ready" for this request: look at this rule's e-mails.)
+    const lapseMail = (email: string) => outboxTo(email).then((rows) => rows.filter((m) => /^Best bid lapses soon/.test(m.subject)));
+    expect(await lapseMail(r.purchasing.email)).toHaveLength(1);
+    expect(await lapseMail(r.buyer.email)).toHaveLength(0);
 
     const bid = await knex('bids').where({ request_id: r.id }).first('id');
     await knex('awards').insert({ request_id: r.id, bid_id: bid.id, shop_id: r.shop, revision: 1, total_cents: 50_000, die_cents: 45_000, currency: 'USD', lead_days: 5, promised_ship_date: '2027-02-20', awarded_at: new Date('2026-12-19T15:00:00Z'), po_number: `PO-T-${randomUUID().slice(0, 8)}` });
@@ -97,7 +99,7 @@ describe('reminders against PostgreSQL and Redis', () => {
     // Need-by 1 Mar 2027, 09:00 Chicago = 15:00 UTC; seven days before: 22 Feb 15:00 UTC.
     expect((await sendReminder(knex, { ...APP, now: new Date('2027-02-22T15:00:00Z') }, r.id, week)).result).toBe('sent');
     expect((await outboxTo(r.estimator.email)).map((m) => m.subject)).toContain(`Needed in 7 days: ${(await knex('die_requests').where({ id: r.id }).first('title')).title}`);
-    expect((await outboxTo(r.buyer.email))[0].subject).toMatch(/^Needed in 7 days/);
+    expect((await outboxTo(r.buyer.email)).filter((m) => /^Needed in 7 days/.test(m.subject))).toHaveLength(1);
   });
 
   it('checks the request again before sending: a shop that bid, or a cancelled request, gets nothing', async () => {
@@ -160,9 +162,12 @@ describe('reminders against PostgreSQL and Redis', () => {
     const key = await keyOf(r.id, 'late_shipment');
     // The day after 10 Nov, 09:00 in the shop's zone (Indianapolis, UTC−5): 11 Nov 14:00 UTC.
     expect((await sendReminder(knex, { ...APP, now: new Date('2026-11-11T13:59:00Z') }, r.id, key)).result).toBe('not-due');
-    expect((await sendReminder(knex, { ...APP, now: new Date('2026-11-11T14:00:00Z') }, r.id, key)).result).toBe('sent');
+    // The running worker's sweep works in real time, when this date is long past, and may send it
+    // first: either way the key is recorded once and the notices exist once.
+    expect(['sent', 'already-sent']).toContain((await sendReminder(knex, { ...APP, now: new Date('2026-11-11T14:00:00Z') }, r.id, key)).result);
+    expect(await knex('reminders_sent').where({ key })).toHaveLength(1);
     expect((await knex('die_requests').where({ id: r.id }).first()).late_flagged_at).toBeTruthy();
-    expect((await outboxTo(r.estimator.email))[0].subject).toMatch(/^Late:/);
-    expect((await outboxTo(r.purchasing.email))[0].subject).toMatch(/^Late:/);
+    expect((await outboxTo(r.estimator.email)).filter((m) => /^Late:/.test(m.subject))).toHaveLength(1);
+    expect((await outboxTo(r.purchasing.email)).filter((m) => /^Late:/.test(m.subject))).toHaveLength(1);
   });
 });
