@@ -1,4 +1,5 @@
 import type { Press as PressDto, PressCreate, PressUpdate } from '@kerfmark/contracts';
+import { toPressDto } from './requestViews';
 import { PressCreate as PressCreateSchema } from '@kerfmark/contracts';
 import { UniqueViolationError } from 'objection';
 import type { AuthUser } from '../auth/passport';
@@ -7,20 +8,6 @@ import { HttpError, notFound } from '../lib/httpError';
 import { Press } from '../models';
 import { recordAudit } from './auditService';
 import type { ServiceDeps } from './deps';
-
-function toDto(press: Press): PressDto {
-  return {
-    id: press.id,
-    name: press.name,
-    kind: press.kind,
-    maxSheetWidthIn: press.maxSheetWidthIn,
-    maxSheetLengthIn: press.maxSheetLengthIn,
-    typicalSpeedSph: press.typicalSpeedSph,
-    maxSpeedSph: press.maxSpeedSph,
-    active: press.active,
-    createdAt: press.createdAt.toISOString(),
-  };
-}
 
 const duplicateName = () =>
   new HttpError(409, 'conflict', 'This organisation already has a press with that name.', { name: 'Choose another name' });
@@ -34,7 +21,7 @@ export function createPressService({ knex }: ServiceDeps) {
         { column: 'active', order: 'desc' },
         { column: 'name' },
       ]);
-      return presses.map(toDto);
+      return presses.map(toPressDto);
     },
 
     async create(actor: AuthUser, input: PressCreate): Promise<PressDto> {
@@ -49,7 +36,7 @@ export function createPressService({ knex }: ServiceDeps) {
             action: 'created',
             detail: { ...input },
           });
-          return toDto(press);
+          return toPressDto(press);
         });
       } catch (error) {
         throw isUniqueViolation(error) ? duplicateName() : error;
@@ -62,7 +49,7 @@ export function createPressService({ knex }: ServiceDeps) {
           const press = await Press.query(trx).findOne({ id, organisationId: actor.organisationId }).forUpdate();
           if (!press) throw notFound('That press');
           // The speeds must still make sense together after a partial change.
-          parse(PressCreateSchema, { ...toDto(press), ...patch });
+          parse(PressCreateSchema, { ...toPressDto(press), ...patch });
           const updated = await press.$query(trx).patchAndFetch(patch);
           await recordAudit(trx, {
             organisationId: actor.organisationId,
@@ -72,7 +59,7 @@ export function createPressService({ knex }: ServiceDeps) {
             action: 'updated',
             detail: { ...patch },
           });
-          return toDto(updated);
+          return toPressDto(updated);
         });
       } catch (error) {
         throw isUniqueViolation(error) ? duplicateName() : error;
