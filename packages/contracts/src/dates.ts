@@ -2,8 +2,14 @@
  * An instant as people of an organisation read it: in its time zone, with the zone named,
  * e.g. "Dec 5, 2026, 14:30 CST". Dates are stored in UTC and shown this way.
  */
+// Building an Intl formatter costs far more than using one: keep one per zone and locale.
+const zoneFormats = new Map<string, Intl.DateTimeFormat>();
+
 export function formatInZone(instant: Date, timeZone: string, locale = 'en-US'): string {
-  return new Intl.DateTimeFormat(locale, {
+  const key = `${locale}|${timeZone}`;
+  const cached = zoneFormats.get(key);
+  if (cached) return cached.format(instant);
+  const format = new Intl.DateTimeFormat(locale, {
     day: 'numeric',
     month: 'short',
     year: 'numeric',
@@ -12,7 +18,9 @@ export function formatInZone(instant: Date, timeZone: string, locale = 'en-US'):
     hourCycle: 'h23',
     timeZone,
     timeZoneName: 'short',
-  }).format(instant);
+  });
+  zoneFormats.set(key, format);
+  return format.format(instant);
 }
 
 /** A calendar date (YYYY-MM-DD) for people: "Tue, Dec 8, 2026". A date has no zone to convert. */

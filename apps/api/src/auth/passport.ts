@@ -1,3 +1,4 @@
+import { createSecretKey } from 'node:crypto';
 import type { Knex } from 'knex';
 import passport from 'passport';
 import { ExtractJwt, Strategy as JwtStrategy } from 'passport-jwt';
@@ -32,7 +33,8 @@ export function createPassport(secret: string, knex: Knex): passport.PassportSta
     new JwtStrategy(
       {
         jwtFromRequest: ExtractJwt.fromAuthHeaderAsBearerToken(),
-        secretOrKey: secret,
+        // A key object made once: given the string, jsonwebtoken would build one on every verify.
+        secretOrKey: createSecretKey(Buffer.from(secret)) as unknown as string,
         algorithms: [JWT_ALGORITHM],
         issuer: JWT_ISSUER,
       },
