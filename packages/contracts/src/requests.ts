@@ -144,6 +144,31 @@ export const RequestListQuery = z.object({
 });
 export type RequestListQuery = z.input<typeof RequestListQuery>;
 
+/** The die shops' board of open requests: filters, sort and page, all applied by the server. */
+export const MarketplaceQuery = z.object({
+  q: z.string().trim().max(100).optional(),
+  minIn: z.coerce.number().min(0).max(1_000_000).optional(),
+  maxIn: z.coerce.number().min(0).max(1_000_000).optional(),
+  complexity: z.enum(['simple', 'complex']).optional(),
+  /** Bids due within this many days from now. */
+  withinDays: z.coerce.number().int().min(1).max(365).optional(),
+  /** Comma-separated: every one of these rule types must be on the request. */
+  ruleTypes: z
+    .string()
+    .max(100)
+    .transform((s) => s.split(',').map((t) => t.trim()).filter(Boolean))
+    .pipe(z.array(RuleType))
+    .optional(),
+  hideDeclined: z
+    .enum(['true', 'false'])
+    .transform((v) => v === 'true')
+    .default(true),
+  sort: z.enum(['bidDeadline', '-bidDeadline', 'needByDate', '-needByDate', 'ruleLength', '-ruleLength', 'distance', '-distance']).default('bidDeadline'),
+  page: z.coerce.number().int().min(1).max(10_000).default(1),
+  pageSize: z.coerce.number().int().min(1).max(100).default(25),
+});
+export type MarketplaceQuery = z.input<typeof MarketplaceQuery>;
+
 export const QuestionCreate = z.object({
   question: z.string({ error: 'Write your question' }).trim().min(3, 'Write your question').max(2000, 'At most 2,000 characters'),
 });

@@ -3,7 +3,6 @@ import type { Knex } from 'knex';
 import passport from 'passport';
 import { ExtractJwt, Strategy as JwtStrategy } from 'passport-jwt';
 import type { OrgKind, Role } from '@kerfmark/contracts';
-import { User } from '../models';
 import { JWT_ALGORITHM, JWT_ISSUER, type TokenClaims } from './tokens';
 
 /** The signed-in user as every route sees it. Role and organisation are read fresh each request. */
@@ -40,18 +39,30 @@ export function createPassport(secret: string, knex: Knex): passport.PassportSta
       },
       (claims: TokenClaims, done: (error: unknown, user?: AuthUser | false) => void) => {
         void (async () => {
-          const revoked = await knex('revoked_tokens').where({ jti: claims.jti }).first();
-          if (revoked) return done(null, false);
-          const user = await User.query().findById(Number(claims.sub)).withGraphJoined('organisation');
-          if (!user || user.status !== 'active' || !user.organisation) return done(null, false);
+          // One round trip per request: the user, the organisation and whether the token was revoked.
+          const user = await knex('users')
+            .join('organisations', 'organisations.id', 'users.organisationId')
+            .where('users.id', Number(claims.sub))
+            .first(
+              'users.id',
+              'users.email',
+              'users.name',
+              'users.role',
+              'users.status',
+              'users.organisationId',
+              'organisations.kind as orgKind',
+              'organisations.timeZone',
+              knex.raw('exists (select 1 from revoked_tokens where jti = ?) as revoked', [claims.jti]),
+            );
+          if (!user || user.revoked || user.status !== 'active') return done(null, false);
           done(null, {
             id: user.id,
             email: user.email,
             name: user.name,
             role: user.role,
             organisationId: user.organisationId,
-            orgKind: user.organisation.kind,
-            timeZone: user.organisation.timeZone,
+            orgKind: user.orgKind,
+            timeZone: user.timeZone,
             jti: claims.jti,
             tokenExpiresAt: new Date(claims.exp * 1000),
           });

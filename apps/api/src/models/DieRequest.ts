@@ -1,8 +1,11 @@
-import { Model } from 'objection';
+import { Model, type QueryBuilder } from 'objection';
 import type { Grain, RequestStatus, RuleType, Visibility } from '@kerfmark/contracts';
 import { DielineFile } from './DielineFile';
 import { Organisation } from './Organisation';
 import { Press } from './Press';
+import { RequestQuestion } from './RequestQuestion';
+// Award imports this model too; the cycle is safe because relationMappings is read lazily.
+import { Award } from './Award';
 
 export class DieRequest extends Model {
   static override tableName = 'die_requests';
@@ -54,6 +57,8 @@ export class DieRequest extends Model {
   press?: Press | null;
   files?: DielineFile[];
   invitedShops?: Organisation[];
+  award?: Award | null;
+  questions?: RequestQuestion[];
 
   static override get relationMappings() {
     return {
@@ -80,6 +85,17 @@ export class DieRequest extends Model {
           through: { from: 'request_invitations.requestId', to: 'request_invitations.shopId' },
           to: 'organisations.id',
         },
+      },
+      award: {
+        relation: Model.HasOneRelation,
+        modelClass: Award,
+        join: { from: 'die_requests.id', to: 'awards.requestId' },
+      },
+      questions: {
+        relation: Model.HasManyRelation,
+        modelClass: RequestQuestion,
+        join: { from: 'die_requests.id', to: 'request_questions.requestId' },
+        modify: (query: QueryBuilder<RequestQuestion>) => query.orderBy('askedAt'),
       },
     };
   }

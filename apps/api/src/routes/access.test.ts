@@ -1,9 +1,8 @@
 import request from 'supertest';
 import { beforeAll, describe, expect, it } from 'vitest';
-import { app, createOpenRequest, createPress, createWorld, unique } from '../test/harness';
+import { app, createOpenRequest, createPress, createWorld, unique, type World } from '../test/harness';
 
 type Actor = 'anonymous' | 'buyer' | 'purchasing' | 'printerAdmin' | 'estimator' | 'shopAdmin';
-type World = Awaited<ReturnType<typeof createWorld>>;
 
 interface RouteCase {
   name: string;

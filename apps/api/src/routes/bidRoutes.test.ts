@@ -2,7 +2,7 @@ import request from 'supertest';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { DieRequest } from '../models';
 import { errorsText, validateRelease } from '../test/ocdsValidator';
-import { app, createOpenRequest, createShop, createWorld, knex, waitForEmail } from '../test/harness';
+import { app, createOpenRequest, createShop, createWorld, knex, waitForEmail, type World } from '../test/harness';
 
 const bearer = (token: string) => ({ Authorization: `Bearer ${token}` });
 const inDays = (days: number) => new Date(Date.now() + days * 86_400_000).toISOString().slice(0, 10);
@@ -17,7 +17,6 @@ const bidBody = (dieCents: number, over: Record<string, unknown> = {}) => ({
   ...over,
 });
 
-type World = Awaited<ReturnType<typeof createWorld>>;
 let w: World;
 let second: Awaited<ReturnType<typeof createShop>>;
 
@@ -101,8 +100,8 @@ describe('the open-requests board', () => {
     const second2 = await createOpenRequest(w);
     const declined = await request(app).post(`/api/requests/${first.id}/decline`).set(bearer(w.tokens.estimator)).send({ reason: 'Too large for our laser' });
     expect(declined.status, JSON.stringify(declined.body)).toBe(204);
-    const board = await request(app).get('/api/marketplace/requests').set(bearer(w.tokens.estimator));
-    const row = (id: number) => board.body.find((r: { id: number }) => r.id === id);
+    const board = await request(app).get('/api/marketplace/requests').query({ q: w.printer.name, hideDeclined: 'false' }).set(bearer(w.tokens.estimator));
+    const row = (id: number) => board.body.items.find((r: { id: number }) => r.id === id);
     // Shop and delivery share the postcode 60614: no distance to speak of.
     expect(row(first.id)).toMatchObject({ declined: true, hasBid: false, distanceMiles: 0 });
     expect(row(second2.id)).toMatchObject({ declined: false });

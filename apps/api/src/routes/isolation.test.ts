@@ -1,9 +1,8 @@
 import request from 'supertest';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { Invitation } from '../models';
-import { app, createPress, createWorld } from '../test/harness';
+import { app, createPress, createWorld, type World } from '../test/harness';
 
-type World = Awaited<ReturnType<typeof createWorld>>;
 let a: World;
 let b: World;
 let pressOfA: number;

@@ -1,4 +1,6 @@
+import { MarketplaceQuery } from '@kerfmark/contracts';
 import { Router, type RequestHandler } from 'express';
+import { parse } from '../lib/parse';
 import { allow } from '../middleware/allow';
 import { Organisation } from '../models';
 import type { Services } from '../services';
@@ -7,7 +9,7 @@ import type { Services } from '../services';
 export function marketplaceRoutes(services: Services, requireAuth: RequestHandler): Router {
   const router = Router();
   router.get('/marketplace/requests', requireAuth, allow({ kind: 'die_shop' }), async (req, res) => {
-    res.json(await services.requests.marketplace(req.user!));
+    res.json(await services.requests.marketplace(req.user!, parse(MarketplaceQuery, req.query)));
   });
 
   router.get('/die-shops', requireAuth, allow({ kind: 'printer' }), async (_req, res) => {

@@ -2,10 +2,9 @@ import { createHash } from 'node:crypto';
 import request from 'supertest';
 import { describe, expect, it } from 'vitest';
 import { AuditEntry, DielineFile } from '../models';
-import { app, createPress, createWorld } from '../test/harness';
+import { app, createPress, createWorld, type World } from '../test/harness';
 import { pngBytes, rectangleDxf, rectangleSvg } from '../test/fixtures';
 
-type World = Awaited<ReturnType<typeof createWorld>>;
 const bearer = (token: string) => ({ Authorization: `Bearer ${token}` });
 const inDays = (days: number) => new Date(Date.now() + days * 86_400_000);
 const date = (d: Date) => d.toISOString().slice(0, 10);
@@ -77,8 +76,8 @@ describe('die requests', () => {
     const published = await request(app).post(`/api/requests/${draft.id}/publish`).set(bearer(w.tokens.buyer));
     expect(published.status, JSON.stringify(published.body)).toBe(200);
     expect(published.body.status).toBe('open');
-    const board = await request(app).get('/api/marketplace/requests').set(bearer(w.tokens.estimator));
-    expect(board.body.map((r: { id: number }) => r.id)).toContain(draft.id);
+    const board = await request(app).get('/api/marketplace/requests').query({ q: w.printer.name }).set(bearer(w.tokens.estimator));
+    expect(board.body.items.map((r: { id: number }) => r.id)).toContain(draft.id);
     const seen = await request(app).get(`/api/requests/${draft.id}`).set(bearer(w.tokens.estimator));
     expect(seen.status).toBe(200);
     expect(seen.body.isOwner).toBe(false);
@@ -138,8 +137,9 @@ describe('die requests', () => {
     expect((await request(app).post(`/api/requests/${draft.id}/publish`).set(bearer(w.tokens.buyer))).status).toBe(200);
     expect((await request(app).get(`/api/requests/${draft.id}`).set(bearer(w.tokens.estimator))).status).toBe(200);
     expect((await request(app).get(`/api/requests/${draft.id}`).set(bearer(outsider.tokens.estimator))).status).toBe(404);
-    const board = await request(app).get('/api/marketplace/requests').set(bearer(outsider.tokens.estimator));
-    expect(board.body.map((r: { id: number }) => r.id)).not.toContain(draft.id);
+    const board = await request(app).get('/api/marketplace/requests').query({ q: w.printer.name }).set(bearer(outsider.tokens.estimator));
+    expect(board.status).toBe(200);
+    expect(board.body.items.map((r: { id: number }) => r.id)).not.toContain(draft.id);
   });
 });
 

@@ -11,7 +11,7 @@ import type { BidInput as BidInputSchema } from '@kerfmark/contracts';
 import type { AuthUser } from '../auth/passport';
 import { badRequest, HttpError, notFound } from '../lib/httpError';
 import { todayIn } from '../lib/todayIn';
-import { Award, Bid, BidRevision, DieRequest } from '../models';
+import { Bid, BidRevision, DielineFile, DieRequest } from '../models';
 import { recordAudit } from './auditService';
 import type { ServiceDeps } from './deps';
 import type { createPriceHistoryService } from './priceHistoryService';
@@ -26,17 +26,15 @@ export function biddingOpen(request: DieRequest, now = new Date()): boolean {
 }
 
 /** Shops' on-time record: awarded jobs shipped by the promised ship date, over all shipped. */
-export async function shopRecords(knex: Knex, shopIds: number[]): Promise<Map<number, { pastJobs: number; onTimeRate: number | null }>> {
-  const rows = shopIds.length
-    ? await knex('awards')
-        .join('dieRequests', 'dieRequests.id', 'awards.requestId')
-        .whereIn('awards.shopId', shopIds)
-        .groupBy('awards.shopId')
-        .select('awards.shopId')
-        .count('* as jobs')
-        .select(knex.raw('count(die_requests.shipped_at) as shipped'))
-        .select(knex.raw('count(*) filter (where die_requests.shipped_at::date <= awards.promised_ship_date) as on_time'))
-    : [];
+export async function shopRecords(knex: Knex, shopIds: Knex.QueryBuilder): Promise<Map<number, { pastJobs: number; onTimeRate: number | null }>> {
+  const rows = await knex('awards')
+    .join('dieRequests', 'dieRequests.id', 'awards.requestId')
+    .whereIn('awards.shopId', shopIds)
+    .groupBy('awards.shopId')
+    .select('awards.shopId')
+    .count('* as jobs')
+    .select(knex.raw('count(die_requests.shipped_at) as shipped'))
+    .select(knex.raw('count(*) filter (where die_requests.shipped_at::date <= awards.promised_ship_date) as on_time'));
   const records = new Map<number, { pastJobs: number; onTimeRate: number | null }>();
   for (const row of rows as Array<{ shopId: number; jobs: number; shipped: number; onTime: number }>) {
     records.set(row.shopId, { pastJobs: Number(row.jobs), onTimeRate: Number(row.shipped) ? Number(row.onTime) / Number(row.shipped) : null });
@@ -205,21 +203,27 @@ export function createBidService(
 
     /** The sealed bids, opened: only the printer, and only once bidding has closed. */
     async compare(actor: AuthUser, requestId: number): Promise<BidComparisonDto> {
-      const request = await requests.findOwned(actor, requestId);
+      if (actor.orgKind !== 'printer') throw notFound('That die request');
+      const request = await DieRequest.query()
+        .findOne({ 'die_requests.id': requestId, 'die_requests.organisationId': actor.organisationId })
+        .withGraphJoined('award.shop');
+      if (!request) throw notFound('That die request');
       if (biddingOpen(request) || request.status === 'draft') {
         throw new HttpError(404, 'bids_sealed', 'Bids stay sealed until the bid deadline, unless purchasing closes bidding early.');
       }
-      await request.$fetchGraph('files(byUpload)');
-      const metrics = primaryFile(request.files)?.metrics as DielineMetrics | null | undefined;
+      const [bids, records, files] = await Promise.all([
+        Bid.query().where({ 'bids.requestId': requestId, 'bids.status': 'submitted' }).withGraphJoined('shop').orderBy('bids.totalCents'),
+        shopRecords(knex, knex('bids').where({ requestId, status: 'submitted' }).select('shopId')),
+        DielineFile.query().modify('byUpload').where({ requestId }),
+      ]);
+      const metrics = primaryFile(files)?.metrics as DielineMetrics | null | undefined;
       const ruleLengthIn = metrics ? metrics.length.total - metrics.length.other : null;
-      const bids = await Bid.query().where({ requestId, status: 'submitted' }).withGraphFetched('shop').orderBy('totalCents');
-      const records = await shopRecords(knex, bids.map((b) => b.shopId));
       const rows = compareBids(
         bids.map((b) => ({ ...b, bidId: b.id, onTimeRate: records.get(b.shopId)?.onTimeRate ?? null, model: b })),
         { ruleLengthIn, needByDate: request.needByDate, today: todayIn(actor.timeZone) },
       );
-      const award = await Award.query().findOne({ requestId }).withGraphFetched('shop');
-      const fair = await priceHistory.fairPrice(actor, requestId, bids[0]?.currency ?? 'USD');
+      const award = request.award ?? null;
+      const fair = await priceHistory.fairPriceFor(actor.organisationId, metrics, bids[0]?.currency ?? 'USD');
       return {
         requestId,
         needByDate: request.needByDate,

@@ -69,14 +69,16 @@ const FIT_CACHE_MS = 5 * 60_000;
 export function createPriceHistoryService({ knex }: ServiceDeps) {
   // The unfiltered fit behind every fair-price band, cached so that a bid comparison does not
   // refit the whole history; an import or a received die clears the organisation's entries.
-  const fits = new Map<string, { at: number; fit: ReturnType<typeof fitPrice> }>();
-  async function historyFit(organisationId: number, currency: string) {
+  // The promise is what is kept, so that many comparisons arriving together share one fit.
+  const fits = new Map<string, { at: number; fit: Promise<ReturnType<typeof fitPrice>> }>();
+  function historyFit(organisationId: number, currency: string) {
     const key = `${organisationId}:${currency}`;
     const hit = fits.get(key);
     if (hit && Date.now() - hit.at < FIT_CACHE_MS) return hit.fit;
-    const { rows } = await observations(organisationId, {}, currency);
-    const fit = fitPrice(rows.map((r) => r.observation));
+    const fit = observations(organisationId, {}, currency).then(({ rows }) => fitPrice(rows.map((r) => r.observation)));
     fits.set(key, { at: Date.now(), fit });
+    // A failed fit (the database was down, say) is not kept.
+    fit.catch(() => fits.get(key)?.fit === fit && fits.delete(key));
     return fit;
   }
   const forget = (organisationId: number) => {
@@ -108,6 +110,16 @@ export function createPriceHistoryService({ knex }: ServiceDeps) {
         shopName: String(r.shopName),
       })),
     };
+  }
+
+  /** The band for a die of these metrics, from the organisation's history, or why there is none. */
+  async function fairPriceFor(organisationId: number, metrics: DielineMetrics | null | undefined, currency: string) {
+    if (!metrics) return { enough: false as const, reason: 'The request has no measured dieline yet.', needed: 0 };
+    const fit = await historyFit(organisationId, currency);
+    if (!fit.enough) return fit;
+    const die = { ruleLengthIn: metrics.length.total - metrics.length.other, features: metrics.bends + metrics.curves + metrics.joints + metrics.punches };
+    if (!(die.ruleLengthIn > 0)) return { enough: false as const, reason: 'The dieline has no priced rule to price.', needed: 0 };
+    return { enough: true as const, band: fairPriceBand(fit, die), die, model: fit.model, n: fit.n, describe: fit.describe };
   }
 
   return {
@@ -147,14 +159,10 @@ export function createPriceHistoryService({ knex }: ServiceDeps) {
     async fairPrice(actor: AuthUser, requestId: number, currency = 'USD') {
       const request = await DieRequest.query().findOne({ id: requestId, organisationId: actor.organisationId }).withGraphFetched('files(byUpload)');
       if (!request) throw notFound('That die request');
-      const metrics = primaryFile(request.files)?.metrics as DielineMetrics | null | undefined;
-      if (!metrics) return { enough: false as const, reason: 'The request has no measured dieline yet.', needed: 0 };
-      const fit = await historyFit(actor.organisationId, currency);
-      if (!fit.enough) return fit;
-      const die = { ruleLengthIn: metrics.length.total - metrics.length.other, features: metrics.bends + metrics.curves + metrics.joints + metrics.punches };
-      if (!(die.ruleLengthIn > 0)) return { enough: false as const, reason: 'The dieline has no priced rule to price.', needed: 0 };
-      return { enough: true as const, band: fairPriceBand(fit, die), die, model: fit.model, n: fit.n, describe: fit.describe };
+      return fairPriceFor(actor.organisationId, primaryFile(request.files)?.metrics as DielineMetrics | null | undefined, currency);
     },
+
+    fairPriceFor,
 
     async list(actor: AuthUser, f: Filters): Promise<Page<PriceRecordDto>> {
       const [rows, [{ count }]] = await Promise.all([

@@ -6,6 +6,7 @@ import {
   type DieRequestSummary,
   type DieRequestUpdate,
   type Page,
+  MarketplaceQuery,
   RequestListQuery,
   type RequestQuestionDto,
   type BidDto,
@@ -16,7 +17,7 @@ import type { QueryBuilder } from 'objection';
 import type { AuthUser } from '../auth/passport';
 import { badRequest, conflict, forbidden, HttpError, notFound } from '../lib/httpError';
 import { parse } from '../lib/parse';
-import { Award, Bid, BidRevision, DieRequest, Organisation, Press, RequestQuestion } from '../models';
+import { Bid, BidRevision, DieRequest, Organisation, Press, RequestQuestion } from '../models';
 import { todayIn } from '../lib/todayIn';
 import { distanceMiles } from '../lib/distanceMiles';
 import { postcodeCentre } from '../lib/postcodeCentre';
@@ -24,14 +25,12 @@ import { biddingOpen } from './bidService';
 import { recordAudit } from './auditService';
 import type { ServiceDeps } from './deps';
 import { transitionRequest, allowedActions } from './requestStatus';
+import { boardCandidates } from './boardCandidates';
 import { primaryFile, toBidDto, toFileDto, toPressDto, toSummary } from './requestViews';
 
 /** Statuses a die shop may look at, when the request is open to it. */
 const SHOP_VISIBLE = ['open', 'bidding_closed'] as const;
 
-// knex's pluck() misses columns under the snake-case mappers, so select and map instead.
-const requestIdsOf = async (query: Knex.QueryBuilder): Promise<number[]> =>
-  (await query.select('requestId')).map((row: { requestId: number }) => row.requestId);
 const EDITABLE = ['draft', 'open'] as const;
 
 /** Narrows a query to requests this die shop may see: open to every shop, or it was invited. */
@@ -57,9 +56,13 @@ async function bidDto(bid: Bid): Promise<BidDto> {
 }
 
 export function createRequestService({ knex, reminders }: ServiceDeps) {
-  /** The request if this user may see it; anything else is the same 404. */
-  async function findVisible(actor: AuthUser, id: number, trx?: Knex.Transaction): Promise<DieRequest> {
+  /**
+   * The request if this user may see it; anything else is the same 404. `joined` names to-one
+   * relations to read in the same query.
+   */
+  async function findVisible(actor: AuthUser, id: number, trx?: Knex.Transaction, joined?: string): Promise<DieRequest> {
     const query = DieRequest.query(trx).findById(id);
+    if (joined) query.withGraphJoined(joined);
     if (actor.orgKind === 'printer') query.where('die_requests.organisationId', actor.organisationId);
     else visibleToShop(query, actor.organisationId);
     const request = await query;
@@ -112,14 +115,17 @@ export function createRequestService({ knex, reminders }: ServiceDeps) {
   }
 
   async function detail(actor: AuthUser, id: number): Promise<DieRequestDetail> {
-    const request = await findVisible(actor, id);
-    await request.$fetchGraph('[organisation, press, files(byUpload), invitedShops]');
+    // The to-one relations in one joined query, then the lists side by side.
+    const request = await findVisible(actor, id, undefined, '[organisation, press, award.shop]');
     const isOwner = actor.orgKind === 'printer';
-    const award = await Award.query().findOne({ requestId: id }).withGraphFetched('shop');
+    const [, ownBid] = await Promise.all([
+      request.$fetchGraph(isOwner ? '[files(byUpload), questions, invitedShops]' : '[files(byUpload), questions]'),
+      isOwner ? undefined : Bid.query().findOne({ requestId: id, shopId: actor.organisationId }),
+    ]);
+    const award = request.award ?? null;
+    const questions = request.questions ?? [];
     const won = !isOwner && award?.shopId === actor.organisationId;
-    const ownBid = isOwner ? undefined : await Bid.query().findOne({ requestId: id, shopId: actor.organisationId });
     const myBid = ownBid ? await bidDto(ownBid) : null;
-    const questions = await RequestQuestion.query().where({ requestId: id }).orderBy('askedAt');
     const file = primaryFile(request.files);
     const board = file?.analysisStatus === 'done' ? (file.metrics as { board?: { width: number; height: number } } | null)?.board : undefined;
     const press = request.press ?? null;
@@ -207,30 +213,56 @@ export function createRequestService({ knex, reminders }: ServiceDeps) {
       return { items: result.results.map(toSummary), total: result.total, page: q.page, pageSize: q.pageSize };
     },
 
-    /** Open requests a die shop may bid on, soonest deadline first. */
-    async marketplace(actor: AuthUser): Promise<DieRequestSummary[]> {
-      const requests = await visibleToShop(DieRequest.query(), actor.organisationId)
-        .where('die_requests.status', 'open')
-        .where('die_requests.bidDeadline', '>', new Date())
-        .withGraphFetched('[organisation, press, files(byUpload)]')
-        .orderBy('die_requests.bidDeadline')
-        .limit(500);
-      const ids = requests.map((r) => r.id);
-      const [shop, declined, bid] = await Promise.all([
-        Organisation.query().findById(actor.organisationId),
-        requestIdsOf(knex('requestDeclines').whereIn('requestId', ids).where({ shopId: actor.organisationId })),
-        requestIdsOf(knex('bids').whereIn('requestId', ids).where({ shopId: actor.organisationId })),
+    /**
+     * The board of open requests a die shop may bid on. One narrow query reads every candidate's
+     * sort and filter keys (distance is worked out here, from postcodes); the page's rows are
+     * then read in full.
+     */
+    async marketplace(actor: AuthUser, q: z.output<typeof MarketplaceQuery>): Promise<Page<DieRequestSummary>> {
+      const [candidates, shop] = await Promise.all([
+        boardCandidates(knex, actor.organisationId, q.q),
+        Organisation.query().findById(actor.organisationId).select('postcode'),
       ]);
       const from = postcodeCentre(shop?.postcode);
-      return requests.map((request) => {
-        const to = postcodeCentre(request.deliveryPostcode);
-        return {
-          ...toSummary(request),
-          distanceMiles: from && to ? Math.round(distanceMiles(from, to)) : null,
-          declined: declined.includes(request.id),
-          hasBid: bid.includes(request.id),
-        };
+      const withinMs = q.withinDays ? Date.now() + q.withinDays * 86_400_000 : null;
+      const rows = candidates
+        .filter(
+          (c) =>
+            (q.minIn === undefined || (c.ruleLengthIn !== null && c.ruleLengthIn >= q.minIn)) &&
+            (q.maxIn === undefined || (c.ruleLengthIn !== null && c.ruleLengthIn <= q.maxIn)) &&
+            (!q.complexity || c.complexity === q.complexity) &&
+            (withinMs === null || c.bidDeadline.getTime() <= withinMs) &&
+            (q.ruleTypes ?? []).every((t) => c.ruleTypes.includes(t)) &&
+            !(q.hideDeclined && c.declined),
+        )
+        .map((c) => {
+          const to = postcodeCentre(c.deliveryPostcode);
+          return { ...c, distanceMiles: from && to ? Math.round(distanceMiles(from, to)) : null };
+        });
+      const desc = q.sort.startsWith('-');
+      const key = q.sort.replace('-', '') as 'bidDeadline' | 'needByDate' | 'ruleLength' | 'distance';
+      const sortValue = (c: (typeof rows)[number]): number | null =>
+        key === 'bidDeadline' ? c.bidDeadline.getTime() : key === 'needByDate' ? (c.needByDate ? Date.parse(c.needByDate) : null) : key === 'ruleLength' ? c.ruleLengthIn : c.distanceMiles;
+      // Unknown values last either way; ties by the bid deadline, then id, so that pages are stable.
+      rows.sort((a, b) => {
+        const [x, y] = [sortValue(a), sortValue(b)];
+        if (x !== y) return x === null ? 1 : y === null ? -1 : desc ? y - x : x - y;
+        return a.bidDeadline.getTime() - b.bidDeadline.getTime() || a.id - b.id;
       });
+      const page = rows.slice((q.page - 1) * q.pageSize, q.page * q.pageSize);
+      const requests = await DieRequest.query()
+        .whereIn('id', page.map((c) => c.id))
+        .withGraphFetched('[organisation, press, files(byUpload)]');
+      const byId = new Map(requests.map((r) => [r.id, r]));
+      return {
+        items: page.flatMap((c) => {
+          const request = byId.get(c.id);
+          return request ? [{ ...toSummary(request), distanceMiles: c.distanceMiles, declined: c.declined, hasBid: c.hasBid }] : [];
+        }),
+        total: rows.length,
+        page: q.page,
+        pageSize: q.pageSize,
+      };
     },
 
     async create(actor: AuthUser, input: DieRequestCreate): Promise<DieRequestDetail> {

@@ -1,10 +1,9 @@
 import fc from 'fast-check';
 import request from 'supertest';
 import { beforeAll, describe, expect, it } from 'vitest';
-import { app, createOpenRequest, createWorld } from './harness';
+import { app, createOpenRequest, createWorld, type World } from './harness';
 
 // Property-based bad input (fast-check): whatever JSON arrives, no route answers 500.
-type World = Awaited<ReturnType<typeof createWorld>>;
 let w: World;
 let requestId: number;
 

@@ -90,6 +90,7 @@ export async function createWorld() {
   ) as Record<keyof typeof users, string>;
   return { printer, shop, users, tokens };
 }
+export type World = Awaited<ReturnType<typeof createWorld>>;
 
 /** Waits for an e-mail to arrive at the mail catcher and returns it. */
 export async function waitForEmail(

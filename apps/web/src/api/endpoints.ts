@@ -57,12 +57,17 @@ export const pressesApi = {
   update: (id: number, patch: PressUpdate) => api<Press>(`/presses/${id}`, { method: 'PATCH', body: patch }),
 };
 
+type Query = Record<string, string | number | boolean | undefined>;
+
+/** A query string of the values that are set. */
+function searchParams(query: Query): URLSearchParams {
+  const params = new URLSearchParams();
+  for (const [key, value] of Object.entries(query)) if (value !== undefined && value !== '') params.set(key, String(value));
+  return params;
+}
+
 export const requestsApi = {
-  list: (query: Record<string, string | number | undefined>) => {
-    const params = new URLSearchParams();
-    for (const [key, value] of Object.entries(query)) if (value !== undefined && value !== '') params.set(key, String(value));
-    return api<Page<DieRequestSummary>>(`/requests?${params}`);
-  },
+  list: (query: Query) => api<Page<DieRequestSummary>>(`/requests?${searchParams(query)}`),
   get: (id: number) => api<DieRequestDetail>(`/requests/${id}`),
   create: (input: DieRequestCreate) => api<DieRequestDetail>('/requests', { method: 'POST', body: input }),
   update: (id: number, patch: DieRequestUpdate) => api<DieRequestDetail>(`/requests/${id}`, { method: 'PATCH', body: patch }),
@@ -71,7 +76,7 @@ export const requestsApi = {
   ask: (id: number, question: string) => api<RequestQuestionDto>(`/requests/${id}/questions`, { method: 'POST', body: { question } }),
   answer: (id: number, questionId: number, answer: string) =>
     api<RequestQuestionDto>(`/requests/${id}/questions/${questionId}/answer`, { method: 'POST', body: { answer } }),
-  marketplace: () => api<DieRequestSummary[]>('/marketplace/requests'),
+  marketplace: (query: Query) => api<Page<DieRequestSummary>>(`/marketplace/requests?${searchParams(query)}`),
   dieShops: () => api<Array<{ id: number; name: string; postcode: string | null }>>('/die-shops'),
 };
 
@@ -128,16 +133,10 @@ export interface PriceFitView {
   rule: string;
 }
 
-const query = (q: Record<string, string | number | undefined>) => {
-  const params = new URLSearchParams();
-  for (const [key, value] of Object.entries(q)) if (value !== undefined && value !== '') params.set(key, String(value));
-  return params.toString();
-};
-
 export const priceHistoryApi = {
-  list: (q: Record<string, string | number | undefined>) => api<Page<PriceRecordDto>>(`/price-history?${query(q)}`),
-  fit: (q: Record<string, string | number | undefined>) => api<PriceFitView>(`/price-history/fit?${query(q)}`),
-  exportUrl: (q: Record<string, string | number | undefined>) => `/price-history/export.csv?${query(q)}`,
+  list: (q: Query) => api<Page<PriceRecordDto>>(`/price-history?${searchParams(q)}`),
+  fit: (q: Query) => api<PriceFitView>(`/price-history/fit?${searchParams(q)}`),
+  exportUrl: (q: Query) => `/price-history/export.csv?${searchParams(q)}`,
   fairPrice: (requestId: number) => api<{ enough: boolean; reason?: string; band?: { lowCents: number; typicalCents: number; highCents: number; currency: string; extrapolated: boolean } }>(`/requests/${requestId}/fair-price`),
 };
 
