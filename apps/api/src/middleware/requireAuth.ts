@@ -5,6 +5,8 @@ import { HttpError } from '../lib/httpError';
 /** Accepts a valid, unrevoked bearer token; anything else is a 401 asking to sign in again. */
 export function requireAuth(instance: passport.PassportStatic): RequestHandler {
   return (req, res, next) => {
+    // Routers mounted on overlapping paths each ask for auth: check the token once per request.
+    if (req.user) return next();
     instance.authenticate('jwt', { session: false }, (error: unknown, user: Express.User | false, info?: Error) => {
       if (error) return next(error);
       if (!user) {
