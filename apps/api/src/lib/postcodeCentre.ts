@@ -14,3 +14,8 @@ const CENTRES: Record<string, LatLon> = {
 export function postcodeCentre(postcode: string | null | undefined): LatLon | null {
   return postcode ? (CENTRES[postcode.trim().slice(0, 5)] ?? null) : null;
 }
+
+/** Every postcode with a known centre, for working out distances to all of them at once. */
+export function knownPostcodes(): Array<{ postcode: string; centre: LatLon }> {
+  return Object.entries(CENTRES).map(([postcode, centre]) => ({ postcode, centre }));
+}

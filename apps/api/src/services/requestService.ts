@@ -20,13 +20,14 @@ import { parse } from '../lib/parse';
 import { Bid, BidRevision, DieRequest, Organisation, Press, RequestQuestion } from '../models';
 import { todayIn } from '../lib/todayIn';
 import { distanceMiles } from '../lib/distanceMiles';
-import { postcodeCentre } from '../lib/postcodeCentre';
+import { knownPostcodes, postcodeCentre } from '../lib/postcodeCentre';
 import { biddingOpen } from './bidService';
 import { recordAudit } from './auditService';
 import type { ServiceDeps } from './deps';
 import { transitionRequest, allowedActions } from './requestStatus';
-import { boardCandidates } from './boardCandidates';
+import { boardPage } from './boardPage';
 import { primaryFile, toBidDto, toFileDto, toPressDto, toSummary } from './requestViews';
+import { containsPattern } from '../lib/containsPattern';
 
 /** Statuses a die shop may look at, when the request is open to it. */
 const SHOP_VISIBLE = ['open', 'bidding_closed'] as const;
@@ -201,7 +202,7 @@ export function createRequestService({ knex, reminders }: ServiceDeps) {
       if (q.needByFrom) base.where('die_requests.needByDate', '>=', q.needByFrom);
       if (q.needByTo) base.where('die_requests.needByDate', '<=', q.needByTo);
       if (q.q) {
-        const like = `%${q.q.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
+        const like = containsPattern(q.q);
         base.where((b) => b.whereILike('die_requests.title', like).orWhereILike('die_requests.jobReference', like));
       }
       const desc = q.sort.startsWith('-');
@@ -213,53 +214,22 @@ export function createRequestService({ knex, reminders }: ServiceDeps) {
       return { items: result.results.map(toSummary), total: result.total, page: q.page, pageSize: q.pageSize };
     },
 
-    /**
-     * The board of open requests a die shop may bid on. One narrow query reads every candidate's
-     * sort and filter keys (distance is worked out here, from postcodes); the page's rows are
-     * then read in full.
-     */
+    /** The board of open requests a die shop may bid on: filtered, sorted and paged by the database. */
     async marketplace(actor: AuthUser, q: z.output<typeof MarketplaceQuery>): Promise<Page<DieRequestSummary>> {
-      const [candidates, shop] = await Promise.all([
-        boardCandidates(knex, actor.organisationId, q.q),
-        Organisation.query().findById(actor.organisationId).select('postcode'),
-      ]);
+      const shop = await Organisation.query().findById(actor.organisationId).select('postcode');
       const from = postcodeCentre(shop?.postcode);
-      const withinMs = q.withinDays ? Date.now() + q.withinDays * 86_400_000 : null;
-      const rows = candidates
-        .filter(
-          (c) =>
-            (q.minIn === undefined || (c.ruleLengthIn !== null && c.ruleLengthIn >= q.minIn)) &&
-            (q.maxIn === undefined || (c.ruleLengthIn !== null && c.ruleLengthIn <= q.maxIn)) &&
-            (!q.complexity || c.complexity === q.complexity) &&
-            (withinMs === null || c.bidDeadline.getTime() <= withinMs) &&
-            (q.ruleTypes ?? []).every((t) => c.ruleTypes.includes(t)) &&
-            !(q.hideDeclined && c.declined),
-        )
-        .map((c) => {
-          const to = postcodeCentre(c.deliveryPostcode);
-          return { ...c, distanceMiles: from && to ? Math.round(distanceMiles(from, to)) : null };
-        });
-      const desc = q.sort.startsWith('-');
-      const key = q.sort.replace('-', '') as 'bidDeadline' | 'needByDate' | 'ruleLength' | 'distance';
-      const sortValue = (c: (typeof rows)[number]): number | null =>
-        key === 'bidDeadline' ? c.bidDeadline.getTime() : key === 'needByDate' ? (c.needByDate ? Date.parse(c.needByDate) : null) : key === 'ruleLength' ? c.ruleLengthIn : c.distanceMiles;
-      // Unknown values last either way; ties by the bid deadline, then id, so that pages are stable.
-      rows.sort((a, b) => {
-        const [x, y] = [sortValue(a), sortValue(b)];
-        if (x !== y) return x === null ? 1 : y === null ? -1 : desc ? y - x : x - y;
-        return a.bidDeadline.getTime() - b.bidDeadline.getTime() || a.id - b.id;
-      });
-      const page = rows.slice((q.page - 1) * q.pageSize, q.page * q.pageSize);
+      const miles = from ? knownPostcodes().map(({ postcode, centre }) => ({ postcode, miles: distanceMiles(from, centre) })) : [];
+      const { rows, total } = await boardPage(knex, actor.organisationId, q, miles);
       const requests = await DieRequest.query()
-        .whereIn('id', page.map((c) => c.id))
+        .whereIn('id', rows.map((r) => r.id))
         .withGraphFetched('[organisation, press, files(byUpload)]');
       const byId = new Map(requests.map((r) => [r.id, r]));
       return {
-        items: page.flatMap((c) => {
-          const request = byId.get(c.id);
-          return request ? [{ ...toSummary(request), distanceMiles: c.distanceMiles, declined: c.declined, hasBid: c.hasBid }] : [];
+        items: rows.flatMap((row) => {
+          const request = byId.get(row.id);
+          return request ? [{ ...toSummary(request), distanceMiles: row.distanceMiles, declined: row.declined, hasBid: row.hasBid }] : [];
         }),
-        total: rows.length,
+        total,
         page: q.page,
         pageSize: q.pageSize,
       };

@@ -1,0 +1,72 @@
+import type { MarketplaceQuery } from '@kerfmark/contracts';
+import type { Knex } from 'knex';
+import type { z } from 'zod';
+import { containsPattern } from '../lib/containsPattern';
+
+export interface BoardRow {
+  id: number;
+  distanceMiles: number | null;
+  declined: boolean;
+  hasBid: boolean;
+}
+
+const ORDER: Record<string, string> = {
+  bidDeadline: 'r.bid_deadline',
+  needByDate: 'r.need_by_date',
+  ruleLength: 'r.measured_rule_in',
+  distance: 'd.miles',
+};
+
+/**
+ * One page of the board of requests open to this die shop, filtered and sorted by the database,
+ * with the count of every match. The request rows carry their measured dieline's figures
+ * (migration 009); `miles` gives the distance from the shop to each delivery postcode it knows.
+ */
+export async function boardPage(
+  knex: Knex,
+  shopId: number,
+  q: z.output<typeof MarketplaceQuery>,
+  miles: Array<{ postcode: string; miles: number }>,
+): Promise<{ rows: BoardRow[]; total: number }> {
+  // The requests that match, as a fresh query each time it is needed.
+  const matching = () => {
+    const query = knex('dieRequests as r')
+      .where('r.status', 'open')
+      .where('r.bidDeadline', '>', knex.fn.now())
+      .where((visible) => visible.where('r.visibility', 'public').orWhereIn('r.id', knex('requestInvitations').where({ shopId }).select('requestId')));
+    if (q.minIn !== undefined) query.where('r.measuredRuleIn', '>=', q.minIn);
+    if (q.maxIn !== undefined) query.where('r.measuredRuleIn', '<=', q.maxIn);
+    if (q.complexity) query.where('r.measuredComplexity', q.complexity);
+    if (q.withinDays) query.where('r.bidDeadline', '<=', new Date(Date.now() + q.withinDays * 86_400_000));
+    if (q.ruleTypes?.length) query.whereRaw('r.rule_types @> ?::text[]', [q.ruleTypes]);
+    if (q.hideDeclined) query.whereNotIn('r.id', knex('requestDeclines').where({ shopId }).select('requestId'));
+    if (q.q) {
+      const like = containsPattern(q.q);
+      query.join('organisations as o', 'o.id', 'r.organisationId').where((b) => b.whereILike('r.title', like).orWhereILike('r.jobReference', like).orWhereILike('o.name', like));
+    }
+    return query;
+  };
+  const page = matching()
+    .select('r.id', 'd.miles as distanceMiles', knex.raw('count(*) over () as total'))
+    .select(knex.raw('r.id in (select request_id from request_declines where shop_id = ?) as declined', [shopId]))
+    .select(knex.raw('r.id in (select request_id from bids where shop_id = ?) as has_bid', [shopId]));
+  if (miles.length) {
+    const values = miles.map(() => '(?::text, ?::float8)').join(', ');
+    page.leftJoin(knex.raw(`(values ${values}) as d (postcode, miles)`, miles.flatMap((m) => [m.postcode, m.miles])), 'd.postcode', knex.raw('left(trim(r.delivery_postcode), 5)'));
+  } else {
+    page.crossJoin(knex.raw('(select null::float8 as miles) as d'));
+  }
+  const desc = q.sort.startsWith('-');
+  // Unknown values last either way; ties by the bid deadline, then id, so that pages are stable.
+  page
+    .orderByRaw(`${ORDER[q.sort.replace('-', '')]} ${desc ? 'desc' : 'asc'} nulls last, r.bid_deadline, r.id`)
+    .limit(q.pageSize)
+    .offset((q.page - 1) * q.pageSize);
+  const rows = (await page) as Array<BoardRow & { total: number }>;
+  // Past the last page no row carries the count: count on its own.
+  const total = rows.length ? Number(rows[0]!.total) : q.page > 1 ? Number((await matching().count('* as count'))[0]?.count ?? 0) : 0;
+  return {
+    rows: rows.map((r) => ({ id: r.id, distanceMiles: r.distanceMiles === null ? null : Math.round(r.distanceMiles), declined: r.declined, hasBid: r.hasBid })),
+    total,
+  };
+}
