@@ -1,7 +1,9 @@
+import { execFile } from 'node:child_process';
 import { chownSync, existsSync, mkdirSync, readdirSync } from 'node:fs';
 import { createHash } from 'node:crypto';
 import os from 'node:os';
 import path from 'node:path';
+import { promisify } from 'node:util';
 import pg from 'pg';
 import type { Profile } from './profile';
 import { repoRoot } from './profile';
@@ -9,6 +11,7 @@ import { asUser, ensureDebianPackage, isRoot, run, succeeds } from './system';
 
 const PG_ROOT = '/usr/lib/postgresql';
 const RUN_AS = isRoot ? 'postgres' : null;
+const execFileAsync = promisify(execFile);
 // A Unix socket path over about 107 bytes cannot be created.
 const MAX_SOCKET_DIR = 90;
 
@@ -40,14 +43,18 @@ function reachable(dir: string): boolean {
   return succeeds('runuser', ['-u', RUN_AS, '--', 'test', '-w', dir, '-a', '-x', dir]);
 }
 
-/** Where the cluster lives: under the checkout's ignored .data, or a temp folder when that is unreachable. */
-function clusterDirs(p: Profile): { data: string; run: string } {
-  const local = { data: path.join(p.dataDir, 'pg'), run: path.join(p.dataDir, 'pg-run') };
+/**
+ * Where a cluster lives: `pg` and `pg-run` under `baseDir` (an ignored folder of the checkout),
+ * or a temp folder named for the checkout and `name` when the postgres user cannot reach it.
+ */
+function clusterDirs(baseDir: string, name: string): { data: string; run: string } {
+  const local = { data: path.join(baseDir, 'pg'), run: path.join(baseDir, 'pg-run') };
   const key = createHash('sha256').update(repoRoot).digest('hex').slice(0, 10);
-  const temp = path.join(os.tmpdir(), `kerfmark-${key}-${p.name}`);
+  const temp = path.join(os.tmpdir(), `kerfmark-${key}-${name}`);
   const fallback = { data: path.join(temp, 'pg'), run: path.join(temp, 'run') };
   let dirs = local;
   try {
+    mkdirSync(baseDir, { recursive: true });
     ownedDir(local.data);
     if (!reachable(local.data)) dirs = fallback;
   } catch {
@@ -60,52 +67,78 @@ function clusterDirs(p: Profile): { data: string; run: string } {
 }
 
 export interface PostgresHandle {
-  stop(): void;
+  stop(): Promise<void>;
 }
 
-export async function startPostgres(p: Profile, opts: { fresh?: boolean } = {}): Promise<PostgresHandle> {
+/** One PostgreSQL server of our own: its own data folder and port, run as the postgres user when we are root. */
+export interface PostgresCluster extends PostgresHandle {
+  readonly port: number;
+  readonly dataDir: string;
+  /** Starts the server unless it is running, and waits until it accepts connections. */
+  start(): Promise<void>;
+  /** Stops the server at once if it runs (fast shutdown: open sessions are ended). */
+  stop(): Promise<void>;
+}
+
+/**
+ * Creates the cluster on first use (trust for loopback, superuser kerfmark) and returns its
+ * controls. `forTests` trades crash safety for speed: nothing in a test cluster must survive
+ * a crash of the machine. pg_ctl runs without blocking the event loop, so a process may stop
+ * and start its own cluster while it serves requests (the outage tests do).
+ */
+export function postgresCluster(opts: { baseDir: string; name: string; port: number; forTests: boolean }): PostgresCluster {
   const bin = binDir();
-  const dirs = clusterDirs(p);
-  const pgCtl = path.join(bin, 'pg_ctl');
-  const user = (args: string[], cmd = pgCtl) => asUser(RUN_AS, cmd, args);
+  const dirs = clusterDirs(opts.baseDir, opts.name);
+  const pgCtl = (args: string[]) => execFileAsync(...asUser(RUN_AS, path.join(bin, 'pg_ctl'), ['-D', dirs.data, ...args]));
+  const running = () => pgCtl(['status']).then(() => true, () => false);
 
   if (!existsSync(path.join(dirs.data, 'PG_VERSION'))) {
     console.log(`· creating the PostgreSQL cluster in ${dirs.data}`);
-    run(...user(['-D', dirs.data, '-A', 'trust', '-U', 'kerfmark', '-E', 'UTF8', '--no-locale'], path.join(bin, 'initdb')), {
+    run(...asUser(RUN_AS, path.join(bin, 'initdb'), ['-D', dirs.data, '-A', 'trust', '-U', 'kerfmark', '-E', 'UTF8', '--no-locale']), {
       quiet: true,
     });
   }
-
-  const running = succeeds(...user(['-D', dirs.data, 'status']));
-  if (!running) {
-    const options = [
-      `-p ${p.ports.postgres}`,
-      `-k ${dirs.run}`,
-      '-c listen_addresses=127.0.0.1',
-      ...(p.name === 'test' ? ['-c fsync=off', '-c synchronous_commit=off', '-c full_page_writes=off'] : []),
-    ].join(' ');
-    run(...user(['-D', dirs.data, '-l', path.join(dirs.run, 'postgres.log'), '-o', options, '-w', '-t', '30', 'start']), {
-      quiet: true,
-    });
-  }
-
-  await ensureDatabase(p, opts.fresh ?? false);
   return {
-    stop: () => {
-      if (succeeds(...user(['-D', dirs.data, 'status']))) {
-        run(...user(['-D', dirs.data, '-m', 'fast', '-w', 'stop']), { quiet: true });
-      }
+    port: opts.port,
+    dataDir: dirs.data,
+    async start() {
+      if (await running()) return;
+      const options = [
+        `-p ${opts.port}`,
+        `-k ${dirs.run}`,
+        '-c listen_addresses=127.0.0.1',
+        ...(opts.forTests ? ['-c fsync=off', '-c synchronous_commit=off', '-c full_page_writes=off'] : []),
+      ].join(' ');
+      await pgCtl(['-l', path.join(dirs.run, 'postgres.log'), '-o', options, '-w', '-t', '30', 'start']).catch(failed('start'));
+    },
+    async stop() {
+      if (await running()) await pgCtl(['-m', 'fast', '-w', 'stop']).catch(failed('stop'));
     },
   };
 }
 
-async function ensureDatabase(p: Profile, fresh: boolean): Promise<void> {
-  const client = new pg.Client({ host: '127.0.0.1', port: p.ports.postgres, user: 'kerfmark', database: 'postgres' });
+function failed(what: string) {
+  return (error: Error & { stdout?: string; stderr?: string }) => {
+    const output = `${error.stdout ?? ''}${error.stderr ?? ''}`.trim();
+    throw new Error(`pg_ctl ${what} failed${output ? `:\n${output}` : `: ${error.message}`}`);
+  };
+}
+
+export async function startPostgres(p: Profile, opts: { fresh?: boolean } = {}): Promise<PostgresHandle> {
+  const cluster = postgresCluster({ baseDir: p.dataDir, name: p.name, port: p.ports.postgres, forTests: p.name === 'test' });
+  await cluster.start();
+  await ensureDatabase(p.ports.postgres, p.database, opts.fresh ?? false);
+  return { stop: () => cluster.stop() };
+}
+
+/** Creates the database on the cluster at `port` unless it exists; `fresh` drops it first. */
+export async function ensureDatabase(port: number, database: string, fresh: boolean): Promise<void> {
+  const client = new pg.Client({ host: '127.0.0.1', port, user: 'kerfmark', database: 'postgres' });
   await client.connect();
   try {
-    const name = client.escapeIdentifier(p.database);
+    const name = client.escapeIdentifier(database);
     if (fresh) await client.query(`DROP DATABASE IF EXISTS ${name} WITH (FORCE)`);
-    const found = await client.query('SELECT 1 FROM pg_database WHERE datname = $1', [p.database]);
+    const found = await client.query('SELECT 1 FROM pg_database WHERE datname = $1', [database]);
     if (found.rowCount === 0) await client.query(`CREATE DATABASE ${name}`);
   } finally {
     await client.end();

@@ -1,12 +1,22 @@
 import { existsSync, mkdirSync, readFileSync } from 'node:fs';
 import path from 'node:path';
+import { setTimeout as sleep } from 'node:timers/promises';
 import type { Profile } from './profile';
 import { ensureDebianPackage, run } from './system';
 
 const REDIS = '/usr/bin/redis-server';
 
 export interface RedisHandle {
-  stop(): void;
+  stop(): Promise<void>;
+}
+
+/** One redis-server of our own, on its own port and folder. */
+export interface RedisServer extends RedisHandle {
+  readonly port: number;
+  /** Starts the server unless it is running (it answers PING a moment later). */
+  start(): void;
+  /** Stops the server and waits (up to 10 s) until it has exited. */
+  stop(): Promise<void>;
 }
 
 function pidAlive(pidFile: string): number | null {
@@ -21,27 +31,36 @@ function pidAlive(pidFile: string): number | null {
 }
 
 /** Debian's redis-server on loopback, nothing saved: PostgreSQL is the source of truth. */
-export function startRedis(p: Profile): RedisHandle {
+export function redisServer(opts: { port: number; dir: string }): RedisServer {
   ensureDebianPackage(REDIS, 'redis-server', 'The job queue (BullMQ on Redis)');
-  const dir = path.join(p.dataDir, 'redis');
-  mkdirSync(dir, { recursive: true });
-  const pidFile = path.join(dir, 'redis.pid');
-  if (!pidAlive(pidFile)) {
-    run(REDIS, [
-      '--port', String(p.ports.redis),
-      '--bind', '127.0.0.1',
-      '--save', '',
-      '--appendonly', 'no',
-      '--daemonize', 'yes',
-      '--pidfile', pidFile,
-      '--dir', dir,
-      '--logfile', path.join(dir, 'redis.log'),
-    ]);
-  }
+  mkdirSync(opts.dir, { recursive: true });
+  const pidFile = path.join(opts.dir, 'redis.pid');
   return {
-    stop: () => {
+    port: opts.port,
+    start() {
+      if (pidAlive(pidFile)) return;
+      run(REDIS, [
+        '--port', String(opts.port),
+        '--bind', '127.0.0.1',
+        '--save', '',
+        '--appendonly', 'no',
+        '--daemonize', 'yes',
+        '--pidfile', pidFile,
+        '--dir', opts.dir,
+        '--logfile', path.join(opts.dir, 'redis.log'),
+      ]);
+    },
+    async stop() {
       const pid = pidAlive(pidFile);
-      if (pid) process.kill(pid, 'SIGTERM');
+      if (!pid) return;
+      process.kill(pid, 'SIGTERM');
+      for (let waited = 0; waited < 10_000 && pidAlive(pidFile) === pid; waited += 50) await sleep(50);
     },
   };
+}
+
+export function startRedis(p: Profile): RedisHandle {
+  const server = redisServer({ port: p.ports.redis, dir: path.join(p.dataDir, 'redis') });
+  server.start();
+  return server;
 }

@@ -14,6 +14,8 @@ export function loadConfig() {
     reminderSweepMs: Number(process.env.REMINDER_SWEEP_MS ?? 300_000),
     appUrl: process.env.APP_URL ?? 'http://127.0.0.1:4100',
     analysisSweepMs: Number(process.env.ANALYSIS_SWEEP_MS ?? 30_000),
+    // How often the worker checks that its sweeps are still scheduled in Redis.
+    scheduleCheckMs: Number(process.env.SCHEDULE_CHECK_MS ?? 30_000),
   };
 }
 export type WorkerConfig = ReturnType<typeof loadConfig>;

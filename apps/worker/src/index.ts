@@ -15,6 +15,7 @@ import { loadConfig } from './config';
 import { deliverEmail } from './jobs/deliverEmail';
 import { sweepOutbox } from './jobs/sweepOutbox';
 import { createKnex } from './db';
+import { keepJobSchedulers } from './keepJobSchedulers';
 import { createMailer } from './mailer';
 import { planRequestReminders } from './reminders/planRequestReminders';
 import { sendReminder } from './reminders/sendReminder';
@@ -30,7 +31,6 @@ const redisUrl = new URL(config.redisUrl);
 const connection = { host: redisUrl.hostname, port: Number(redisUrl.port || 6379), maxRetriesPerRequest: null };
 
 const emailQueue = new Queue(queueNames.email, { connection });
-await emailQueue.upsertJobScheduler('email-outbox-sweep', { every: config.outboxSweepMs }, { name: jobNames.sweepOutbox });
 
 const emailWorker = new Worker<DeliverEmailJob>(
   queueNames.email,
@@ -50,7 +50,6 @@ const emailWorker = new Worker<DeliverEmailJob>(
   { connection, concurrency: 4 },
 );
 const dielineQueue = new Queue(queueNames.dieline, { connection });
-await dielineQueue.upsertJobScheduler('dieline-analysis-sweep', { every: config.analysisSweepMs }, { name: jobNames.sweepAnalyses });
 
 const dielineWorker = new Worker<AnalyseDielineJob>(
   queueNames.dieline,
@@ -80,7 +79,6 @@ function dispatchEmails(outboxIds: number[]) {
 }
 
 const reminderQueue = new Queue<SendReminderJob>(queueNames.reminders, { connection });
-await reminderQueue.upsertJobScheduler('reminder-sweep', { every: config.reminderSweepMs }, { name: jobNames.sweepReminders });
 const reminderWorker = new Worker<SendReminderJob | PlanRemindersJob>(
   queueNames.reminders,
   async (job) => {
@@ -98,6 +96,16 @@ const reminderWorker = new Worker<SendReminderJob | PlanRemindersJob>(
   { connection, concurrency: 2 },
 );
 
+// The sweeps are what catch up after Redis lost its data, and their schedules are in Redis too.
+const stopKeepingSchedules = await keepJobSchedulers(
+  [
+    { queue: emailQueue, id: 'email-outbox-sweep', name: jobNames.sweepOutbox, every: config.outboxSweepMs },
+    { queue: dielineQueue, id: 'dieline-analysis-sweep', name: jobNames.sweepAnalyses, every: config.analysisSweepMs },
+    { queue: reminderQueue, id: 'reminder-sweep', name: jobNames.sweepReminders, every: config.reminderSweepMs },
+  ],
+  { checkMs: config.scheduleCheckMs, onRestored: (id) => logger.warn({ sweep: id }, 'sweep schedule was lost with Redis: scheduled again') },
+);
+
 for (const worker of [emailWorker, dielineWorker, reminderWorker]) {
   worker.on('failed', (job, error) => logger.warn({ queue: worker.name, job: job?.id, err: error.message }, 'job failed'));
   worker.on('error', (error) => logger.warn({ queue: worker.name, err: error.message }, 'worker error'));
@@ -105,6 +113,7 @@ for (const worker of [emailWorker, dielineWorker, reminderWorker]) {
 logger.info('worker running: e-mail delivery, dieline analysis, deadline reminders and their sweeps');
 
 async function shutdown() {
+  stopKeepingSchedules();
   await Promise.allSettled([emailWorker.close(), dielineWorker.close(), reminderWorker.close(), emailQueue.close(), dielineQueue.close(), reminderQueue.close()]);
   await knex.destroy();
   mailer.close();

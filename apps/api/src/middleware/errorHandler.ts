@@ -16,11 +16,19 @@ const UNAVAILABLE_CODES = new Set([
   '08006',
 ]);
 
-function isUnavailable(error: unknown): boolean {
-  const e = error as { code?: string; message?: string; name?: string };
+// "is not queryable": pg refuses a client whose connection broke; knex reports it from the
+// ROLLBACK it tries after a query failed mid-transaction (the server has rolled back already).
+const UNAVAILABLE_MESSAGE = /Connection terminated|connection is closed|Timeout acquiring a connection|is not queryable/i;
+
+function isUnavailable(error: unknown, depth = 0): boolean {
+  if (!error || typeof error !== 'object' || depth > 3) return false;
+  const e = error as { code?: string; message?: string; name?: string; nativeError?: unknown; cause?: unknown };
   if (e.code && UNAVAILABLE_CODES.has(e.code)) return true;
   if (e.name === 'KnexTimeoutError') return true;
-  return /Connection terminated|connection is closed|Timeout acquiring a connection/i.test(e.message ?? '');
+  if (UNAVAILABLE_MESSAGE.test(e.message ?? '')) return true;
+  // Objection wraps PostgreSQL's errors in a DBError that keeps the code on its nativeError only
+  // (a server shutting down, 57P01, would otherwise be a 500); other errors may carry a cause.
+  return isUnavailable(e.nativeError, depth + 1) || isUnavailable(e.cause, depth + 1);
 }
 
 export function errorHandler(logger: Logger): ErrorRequestHandler {
