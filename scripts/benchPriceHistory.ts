@@ -3,6 +3,7 @@
 import path from 'node:path';
 import { performance } from 'node:perf_hooks';
 import knexFactory from 'knex';
+import { recordResults } from './lib/benchResults';
 import { profile } from './lib/profile';
 import { bringUp } from './lib/stack';
 import { Supervisor } from './lib/supervisor';
@@ -56,6 +57,10 @@ try {
   console.log(`  GET /api/price-history    ${list.toFixed(1)} ms   (ratio ${(list / bare).toFixed(1)})`);
   console.log(`  … with filters            ${filtered.toFixed(1)} ms   (ratio ${(filtered / bare).toFixed(1)})`);
   console.log(`  GET /api/price-history/fit ${fit.toFixed(1)} ms   (ratio ${(fit / bare).toFixed(1)}; the fit runs on a 5,000-record sample)`);
+  recordResults([
+    { figure: 'GET /api/price-history (50 of 100,000)', value: `${list.toFixed(1)} ms`, baseline: `count ${bare.toFixed(1)} ms`, ratio: list / bare },
+    { figure: 'GET /api/price-history/fit', value: `${fit.toFixed(1)} ms`, baseline: `count ${bare.toFixed(1)} ms`, ratio: fit / bare },
+  ]);
   await knex.destroy();
   await supervisor.stopAll(0);
 } catch (error) {

@@ -23,7 +23,7 @@ function redisAnswers(port: number): Promise<boolean> {
  * Brings up a whole local Kerfmark for one profile: PostgreSQL, Redis, the S3 fake, the mail
  * catcher, migrations and demo data, the web build, the API and the worker.
  */
-export async function bringUp(p: Profile, supervisor: Supervisor, opts: { fresh: boolean }): Promise<Record<string, string>> {
+export async function bringUp(p: Profile, supervisor: Supervisor, opts: { fresh: boolean; productionSweeps?: boolean }): Promise<Record<string, string>> {
   const env = serviceEnv(p);
   const prefix = p.name === 'dev' ? 'KERFMARK_' : 'KERFMARK_TEST_';
   await assertPortFree(p.ports.app, 'the app', `${prefix}PORT`);
@@ -61,8 +61,10 @@ export async function bringUp(p: Profile, supervisor: Supervisor, opts: { fresh:
 
   step('API and worker');
   supervisor.start('api', 'apps/api/src/server.ts', env);
-  const sweepMs = p.name === 'test' ? '2000' : '30000';
-  supervisor.start('worker', 'apps/worker/src/index.ts', { ...env, OUTBOX_SWEEP_MS: sweepMs, ANALYSIS_SWEEP_MS: sweepMs, REMINDER_SWEEP_MS: p.name === 'test' ? '3000' : '300000' });
+  // Tests sweep every few seconds so that they need not wait; the benchmark keeps production's pace.
+  const fast = p.name === 'test' && !opts.productionSweeps;
+  const sweepMs = fast ? '2000' : '30000';
+  supervisor.start('worker', 'apps/worker/src/index.ts', { ...env, OUTBOX_SWEEP_MS: sweepMs, ANALYSIS_SWEEP_MS: sweepMs, REMINDER_SWEEP_MS: fast ? '3000' : '300000' });
   await waitFor('the API', () => httpOk(`${env.APP_URL}/api/health`), 60_000);
   return env;
 }

@@ -61,3 +61,5 @@ console.log(`  analyseDieline        ${a.toFixed(0)} ms (parse included)`);
 console.log(`  ratio analyse/parse   ${(a / p).toFixed(2)}`);
 console.log(`  heap used ${(mem.heapUsed / 1048576).toFixed(0)} MB, peak RSS ${maxRssMb.toFixed(0)} MB`);
 console.log(`  check: ${metrics.punches} punches, ${metrics.joints} joints, ${metrics.bends} bends, ${metrics.length.total.toFixed(1)} in of rule`);
+// For the summary table of `npm run bench` (see scripts/lib/benchResults.ts).
+console.log(`@result ${JSON.stringify({ figure: `dieline analysis, ${ENTITIES.toLocaleString('en-US')} entities`, value: `${a.toFixed(0)} ms`, baseline: `parse ${p.toFixed(0)} ms`, ratio: a / p })}`);

@@ -7,10 +7,12 @@ const n = Number(process.argv[2] ?? 100_000);
 if (!Number.isSafeInteger(n) || n < 8) throw new RangeError(`Give a whole number of records of at least 8 (got ${process.argv[2]})`);
 
 const mib = (bytes: number) => `${(bytes / 2 ** 20).toFixed(1)} MiB`;
+const took: Record<string, number> = {};
 function time<T>(label: string, run: () => T): T {
   const start = process.hrtime.bigint();
   const result = run();
   const ms = Number(process.hrtime.bigint() - start) / 1e6;
+  took[label] = ms;
   console.log(`${label.padEnd(28)} ${ms.toFixed(1).padStart(9)} ms   heap used ${mib(process.memoryUsage().heapUsed)}`);
   return result;
 }
@@ -27,3 +29,5 @@ time('priceTrend', () => priceTrend(records));
 console.log(`model ${fit.model}, n ${fit.n}, residual standard error ${fit.residualStandardErrorCents} cents`);
 // maxRSS is the peak resident set size of the whole process (kibibytes on Linux), generation included.
 console.log(`peak resident memory ${mib(process.resourceUsage().maxRSS * 1024)}`);
+// For the summary table of `npm run bench` (see scripts/lib/benchResults.ts).
+console.log(`@result ${JSON.stringify({ figure: `price fit in memory, ${n.toLocaleString('en-US')} records`, value: `${took['fitPrice (both models)']!.toFixed(0)} ms` })}`);
