@@ -1,5 +1,6 @@
 import { existsSync } from 'node:fs';
 import path from 'node:path';
+import compression from 'compression';
 import express, { type Express } from 'express';
 import helmet from 'helmet';
 import type { Redis } from 'ioredis';
@@ -71,6 +72,9 @@ export function createApp(deps: AppDeps): Express {
   // The built web app, with every other path answered by its index page (client-side routes).
   if (config.webDist && existsSync(path.join(config.webDist, 'index.html'))) {
     const dist = config.webDist;
+    // The web app's files go out gzipped (a third of their size); the API's JSON is left to the
+    // load balancer, so that the API spends its CPU on answers.
+    app.use(compression());
     app.use(express.static(dist, { index: false, maxAge: '1h' }));
     app.use((req, res, next) => {
       if (req.method !== 'GET' && req.method !== 'HEAD') return next();
