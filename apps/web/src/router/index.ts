@@ -89,6 +89,11 @@ router.beforeEach(async (to) => {
   const auth = useAuthStore();
   if (to.meta.public) return true;
   if (!auth.signedIn) return { name: 'sign-in', query: to.fullPath !== '/' ? { next: to.fullPath } : {} };
+  // Fetch the route's lazy views while the user is checked, not after: the browser caches the
+  // modules, so the router's own import later finds them loaded.
+  for (const record of to.matched) {
+    for (const view of Object.values(record.components ?? {})) if (typeof view === 'function') void (view as () => Promise<unknown>)().catch(() => undefined);
+  }
   try {
     const me = await auth.loadMe();
     if (!me) return { name: 'sign-in' };
