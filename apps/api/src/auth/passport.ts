@@ -14,6 +14,7 @@ export interface AuthUser {
   organisationId: number;
   orgKind: OrgKind;
   timeZone: string;
+  orgPostcode: string | null;
   jti: string;
   tokenExpiresAt: Date;
 }
@@ -35,11 +36,12 @@ interface SignedInRow {
   organisationId: number;
   orgKind: OrgKind;
   timeZone: string;
+  orgPostcode: string | null;
   revoked: boolean;
 }
 // Raw results skip the snake-case mappers, hence the quoted camelCase names.
 const SIGNED_IN_SQL = `
-  select u.id, u.email, u.name, u.role, u.status, u.organisation_id as "organisationId", o.kind as "orgKind", o.time_zone as "timeZone",
+  select u.id, u.email, u.name, u.role, u.status, u.organisation_id as "organisationId", o.kind as "orgKind", o.time_zone as "timeZone", o.postcode as "orgPostcode",
     exists (select 1 from revoked_tokens where jti = ?) as revoked
   from users u join organisations o on o.id = u.organisation_id
   where u.id = ?`;
@@ -70,6 +72,7 @@ export function createPassport(secret: string, knex: Knex): passport.PassportSta
             organisationId: user.organisationId,
             orgKind: user.orgKind,
             timeZone: user.timeZone,
+            orgPostcode: user.orgPostcode,
             jti: claims.jti,
             tokenExpiresAt: new Date(claims.exp * 1000),
           });

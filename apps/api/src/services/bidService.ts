@@ -11,11 +11,13 @@ import type { BidInput as BidInputSchema } from '@kerfmark/contracts';
 import type { AuthUser } from '../auth/passport';
 import { badRequest, HttpError, notFound } from '../lib/httpError';
 import { todayIn } from '../lib/todayIn';
-import { Bid, BidRevision, DielineFile, DieRequest } from '../models';
+import { Bid, BidRevision, DieRequest } from '../models';
 import { recordAudit } from './auditService';
 import type { ServiceDeps } from './deps';
 import type { createPriceHistoryService } from './priceHistoryService';
 import type { createRequestService } from './requestService';
+import { readRequestGraph } from './requestGraph';
+import { submittedBids } from './submittedBids';
 import { primaryFile, toBidDto } from './requestViews';
 
 type ParsedBid = z.output<typeof BidInputSchema>;
@@ -23,23 +25,6 @@ type ParsedBid = z.output<typeof BidInputSchema>;
 /** Bidding is open while the request is open and its deadline has not passed. */
 export function biddingOpen(request: DieRequest, now = new Date()): boolean {
   return request.status === 'open' && (!request.bidDeadline || request.bidDeadline.getTime() > now.getTime());
-}
-
-/** Shops' on-time record: awarded jobs shipped by the promised ship date, over all shipped. */
-export async function shopRecords(knex: Knex, shopIds: Knex.QueryBuilder): Promise<Map<number, { pastJobs: number; onTimeRate: number | null }>> {
-  const rows = await knex('awards')
-    .join('dieRequests', 'dieRequests.id', 'awards.requestId')
-    .whereIn('awards.shopId', shopIds)
-    .groupBy('awards.shopId')
-    .select('awards.shopId')
-    .count('* as jobs')
-    .select(knex.raw('count(die_requests.shipped_at) as shipped'))
-    .select(knex.raw('count(*) filter (where die_requests.shipped_at::date <= awards.promised_ship_date) as on_time'));
-  const records = new Map<number, { pastJobs: number; onTimeRate: number | null }>();
-  for (const row of rows as Array<{ shopId: number; jobs: number; shipped: number; onTime: number }>) {
-    records.set(row.shopId, { pastJobs: Number(row.jobs), onTimeRate: Number(row.shipped) ? Number(row.onTime) / Number(row.shipped) : null });
-  }
-  return records;
 }
 
 export function createBidService(
@@ -204,22 +189,18 @@ export function createBidService(
     /** The sealed bids, opened: only the printer, and only once bidding has closed. */
     async compare(actor: AuthUser, requestId: number): Promise<BidComparisonDto> {
       if (actor.orgKind !== 'printer') throw notFound('That die request');
-      const request = await DieRequest.query()
-        .findOne({ 'die_requests.id': requestId, 'die_requests.organisationId': actor.organisationId })
-        .withGraphJoined('award.shop');
+      const [request, bids] = await Promise.all([
+        readRequestGraph(knex, DieRequest.query().findById(requestId).where('die_requests.organisationId', actor.organisationId), ['award', 'files']),
+        submittedBids(knex, requestId),
+      ]);
       if (!request) throw notFound('That die request');
       if (biddingOpen(request) || request.status === 'draft') {
         throw new HttpError(404, 'bids_sealed', 'Bids stay sealed until the bid deadline, unless purchasing closes bidding early.');
       }
-      const [bids, records, files] = await Promise.all([
-        Bid.query().where({ 'bids.requestId': requestId, 'bids.status': 'submitted' }).withGraphJoined('shop').orderBy('bids.totalCents'),
-        shopRecords(knex, knex('bids').where({ requestId, status: 'submitted' }).select('shopId')),
-        DielineFile.query().modify('byUpload').where({ requestId }),
-      ]);
-      const metrics = primaryFile(files)?.metrics as DielineMetrics | null | undefined;
+      const metrics = primaryFile(request.files)?.metrics as DielineMetrics | null | undefined;
       const ruleLengthIn = metrics ? metrics.length.total - metrics.length.other : null;
       const rows = compareBids(
-        bids.map((b) => ({ ...b, bidId: b.id, onTimeRate: records.get(b.shopId)?.onTimeRate ?? null, model: b })),
+        bids.map((b) => ({ ...b, bidId: b.id })),
         { ruleLengthIn, needByDate: request.needByDate, today: todayIn(actor.timeZone) },
       );
       const award = request.award ?? null;
@@ -235,7 +216,7 @@ export function createBidService(
         bids: rows.map((row) => ({
           bidId: row.bid.id,
           shopId: row.bid.shopId,
-          shopName: row.bid.model.shop?.name ?? '',
+          shopName: row.bid.shopName,
           lines: row.bid.lines,
           currency: row.bid.currency,
           totalCents: row.bid.totalCents,
@@ -248,7 +229,7 @@ export function createBidService(
           validUntil: row.bid.validUntil,
           expired: row.expired,
           onTimeRate: row.bid.onTimeRate,
-          pastJobs: records.get(row.bid.shopId)?.pastJobs ?? 0,
+          pastJobs: row.bid.pastJobs,
           revision: row.bid.revision,
           best: row.best,
         })),

@@ -26,6 +26,7 @@ import { recordAudit } from './auditService';
 import type { ServiceDeps } from './deps';
 import { transitionRequest, allowedActions } from './requestStatus';
 import { boardPage } from './boardPage';
+import { readRequestGraph } from './requestGraph';
 import { primaryFile, toBidDto, toFileDto, toPressDto, toSummary } from './requestViews';
 import { containsPattern } from '../lib/containsPattern';
 
@@ -61,12 +62,17 @@ export function createRequestService({ knex, reminders }: ServiceDeps) {
    * The request if this user may see it; anything else is the same 404. `joined` names to-one
    * relations to read in the same query.
    */
-  async function findVisible(actor: AuthUser, id: number, trx?: Knex.Transaction, joined?: string): Promise<DieRequest> {
+  /** The query for a request this user may see. */
+  function visibleQuery(actor: AuthUser, id: number, trx?: Knex.Transaction) {
     const query = DieRequest.query(trx).findById(id);
-    if (joined) query.withGraphJoined(joined);
     if (actor.orgKind === 'printer') query.where('die_requests.organisationId', actor.organisationId);
     else visibleToShop(query, actor.organisationId);
-    const request = await query;
+    return query;
+  }
+
+  /** The request if this user may see it; anything else is the same 404. */
+  async function findVisible(actor: AuthUser, id: number, trx?: Knex.Transaction): Promise<DieRequest> {
+    const request = await visibleQuery(actor, id, trx);
     if (!request) throw notFound('That die request');
     return request;
   }
@@ -116,13 +122,12 @@ export function createRequestService({ knex, reminders }: ServiceDeps) {
   }
 
   async function detail(actor: AuthUser, id: number): Promise<DieRequestDetail> {
-    // The to-one relations in one joined query, then the lists side by side.
-    const request = await findVisible(actor, id, undefined, '[organisation, press, award.shop]');
     const isOwner = actor.orgKind === 'printer';
-    const [, ownBid] = await Promise.all([
-      request.$fetchGraph(isOwner ? '[files(byUpload), questions, invitedShops]' : '[files(byUpload), questions]'),
+    const [request, ownBid] = await Promise.all([
+      readRequestGraph(knex, visibleQuery(actor, id), ['organisation', 'press', 'award', 'files', 'questions', ...(isOwner ? (['invitedShops'] as const) : [])]),
       isOwner ? undefined : Bid.query().findOne({ requestId: id, shopId: actor.organisationId }),
     ]);
+    if (!request) throw notFound('That die request');
     const award = request.award ?? null;
     const questions = request.questions ?? [];
     const won = !isOwner && award?.shopId === actor.organisationId;
@@ -216,13 +221,14 @@ export function createRequestService({ knex, reminders }: ServiceDeps) {
 
     /** The board of open requests a die shop may bid on: filtered, sorted and paged by the database. */
     async marketplace(actor: AuthUser, q: z.output<typeof MarketplaceQuery>): Promise<Page<DieRequestSummary>> {
-      const shop = await Organisation.query().findById(actor.organisationId).select('postcode');
-      const from = postcodeCentre(shop?.postcode);
+      const from = postcodeCentre(actor.orgPostcode);
       const miles = from ? knownPostcodes().map(({ postcode, centre }) => ({ postcode, miles: distanceMiles(from, centre) })) : [];
       const { rows, total } = await boardPage(knex, actor.organisationId, q, miles);
-      const requests = await DieRequest.query()
-        .whereIn('id', rows.map((r) => r.id))
-        .withGraphFetched('[organisation, press, files(byUpload)]');
+      const requests = await readRequestGraph(
+        knex,
+        DieRequest.query().whereIn('die_requests.id', rows.map((r) => r.id)),
+        ['organisation', 'press', 'files'],
+      );
       const byId = new Map(requests.map((r) => [r.id, r]));
       return {
         items: rows.flatMap((row) => {

@@ -5,7 +5,7 @@ import type { DieRequest } from '../models';
 import { allowedActions, checkTransition } from './requestStatus';
 
 const user = (orgKind: 'printer' | 'die_shop', role: AuthUser['role'], organisationId: number): AuthUser => ({
-  id: 1, email: 'x@y.example', name: 'X', role, organisationId, orgKind, timeZone: 'UTC', jti: 'j', tokenExpiresAt: new Date(),
+  id: 1, email: 'x@y.example', name: 'X', role, organisationId, orgKind, timeZone: 'UTC', orgPostcode: null, jti: 'j', tokenExpiresAt: new Date(),
 });
 const request = (status: RequestStatus) => ({ status, organisationId: 10 }) as DieRequest;
 const buyer = user('printer', 'buyer', 10);

@@ -1,0 +1,61 @@
+import type { Knex } from 'knex';
+import type { QueryBuilder } from 'objection';
+import { DielineFile, type Award, type DieRequest, type Organisation, type Press, type RequestQuestion } from '../models';
+
+export type RequestPart = 'organisation' | 'press' | 'award' | 'files' | 'questions' | 'invitedShops';
+
+const camel = (key: string) => key.replace(/_([a-z0-9])/g, (_, c: string) => c.toUpperCase());
+
+/** A row the database sent as JSON, as the model reads it: camelCase keys, and instants (every *_at column) as Dates. */
+function fromJson<M>(json: Record<string, unknown>): M {
+  const out: Record<string, unknown> = {};
+  for (const [key, value] of Object.entries(json)) out[camel(key)] = key.endsWith('_at') && typeof value === 'string' ? new Date(value) : value;
+  return out as M;
+}
+
+// Each part as a subquery of the request row, built by PostgreSQL as JSON.
+const PARTS: Record<RequestPart, string> = {
+  organisation: '(select to_jsonb(o) from organisations o where o.id = die_requests.organisation_id)',
+  press: '(select to_jsonb(p) from presses p where p.id = die_requests.press_id)',
+  award: `(select to_jsonb(a) || jsonb_build_object('shop', to_jsonb(s)) from awards a join organisations s on s.id = a.shop_id where a.request_id = die_requests.id)`,
+  // The preview geometry is large and read on its own, so the files leave it out.
+  files: `(select coalesce(jsonb_agg(jsonb_build_object(${DielineFile.listColumns.map((c) => `'${c}', f.${c}`).join(', ')}) order by f.uploaded_at, f.id), '[]')
+    from dieline_files f where f.request_id = die_requests.id)`,
+  questions: `(select coalesce(jsonb_agg(to_jsonb(q) order by q.asked_at, q.id), '[]') from request_questions q where q.request_id = die_requests.id)`,
+  invitedShops: `(select coalesce(jsonb_agg(jsonb_build_object('id', o.id, 'name', o.name) order by o.name), '[]')
+    from request_invitations i join organisations o on o.id = i.shop_id where i.request_id = die_requests.id)`,
+};
+
+/** Turns the parts the database sent as JSON into the request's relations, as plain objects in the models' shape. */
+function adoptParts(request: DieRequest, parts: RequestPart[]): DieRequest {
+  const row = request as unknown as Record<string, unknown>;
+  for (const part of parts) {
+    const key = `part${part[0]!.toUpperCase()}${part.slice(1)}`;
+    const one = row[key] as (Record<string, unknown> & { shop?: Record<string, unknown> }) | null;
+    const many = (row[key] ?? []) as Array<Record<string, unknown>>;
+    delete row[key];
+    if (part === 'organisation') request.organisation = one ? fromJson<Organisation>(one) : undefined;
+    if (part === 'press') request.press = one ? fromJson<Press>(one) : null;
+    if (part === 'award') request.award = one ? ({ ...fromJson<Award>(one), shop: fromJson<Organisation>(one.shop!) } as Award) : null;
+    if (part === 'files') request.files = many.map((f) => fromJson<DielineFile>(f));
+    if (part === 'questions') request.questions = many.map((q) => fromJson<RequestQuestion>(q));
+    if (part === 'invitedShops') request.invitedShops = many.map((o) => fromJson<Organisation>(o));
+  }
+  return request;
+}
+
+/**
+ * Reads requests with the parts named, in one query: the views read most (the board, a
+ * request's page, the bid comparison) would otherwise spend a query and a model graph on each
+ * part. `query` is already narrowed to what the user may see; the views only read the parts.
+ */
+export async function readRequestGraph<Q extends QueryBuilder<DieRequest, DieRequest | undefined> | QueryBuilder<DieRequest, DieRequest[]>>(
+  knex: Knex,
+  query: Q,
+  parts: RequestPart[],
+): Promise<Q extends QueryBuilder<DieRequest, DieRequest[]> ? DieRequest[] : DieRequest | undefined> {
+  const builder = query as QueryBuilder<DieRequest, DieRequest[]>;
+  const result = (await builder.select('die_requests.*', ...parts.map((part) => knex.raw(`${PARTS[part]} as ??`, [`part_${part}`])))) as DieRequest | DieRequest[] | undefined;
+  const adopted = Array.isArray(result) ? result.map((r) => adoptParts(r, parts)) : result && adoptParts(result, parts);
+  return adopted as never;
+}
