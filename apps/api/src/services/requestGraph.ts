@@ -4,7 +4,13 @@ import { DielineFile, type Award, type DieRequest, type Organisation, type Press
 
 export type RequestPart = 'organisation' | 'press' | 'award' | 'files' | 'questions' | 'invitedShops';
 
-const camel = (key: string) => key.replace(/_([a-z0-9])/g, (_, c: string) => c.toUpperCase());
+// Remembered, as every row of every part asks for the same few names.
+const camelNames = new Map<string, string>();
+const camel = (key: string) => {
+  let name = camelNames.get(key);
+  if (name === undefined) camelNames.set(key, (name = key.replace(/_([a-z0-9])/g, (_, c: string) => c.toUpperCase())));
+  return name;
+};
 
 /** A row the database sent as JSON, as the model reads it: camelCase keys, and instants (every *_at column) as Dates. */
 function fromJson<M>(json: Record<string, unknown>): M {
