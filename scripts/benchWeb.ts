@@ -103,7 +103,7 @@ export interface BoardRender {
   domContentLoadedMs: number;
   /** The board's API answer fully received (median, ms). */
   boardApiMs: number;
-  /** Bytes over the wire before the first row (median; the app serves its assets uncompressed). */
+  /** Bytes over the wire before the first row (median). */
   transferBytes: number;
   samples: Array<{ firstRowMs: number; fcpMs: number; domContentLoadedMs: number; boardApiMs: number; transferBytes: number }>;
 }
@@ -201,7 +201,7 @@ export function formatWebRows(entry: EntryChunk, board?: BoardRender): string[] 
       row('board: first-contentful-paint', ms(board.fcpMs), note),
       row('board: DOMContentLoaded', ms(board.domContentLoadedMs), note),
       row('board: API answer received', ms(board.boardApiMs), note),
-      row('board: bytes before first row', kb(board.transferBytes), 'over the wire, uncompressed'),
+      row('board: bytes before first row', kb(board.transferBytes), 'over the wire (assets gzipped)'),
     );
   }
   return rows;
