@@ -12,6 +12,7 @@ import { createStorage, storageConfigFromEnv } from '@kerfmark/storage';
 import { createJobQueues } from '../lib/jobQueues';
 import { createRedis } from '../lib/redis';
 import { Organisation, Press, User } from '../models';
+import { insertOpenRequest } from './insertOpenRequest';
 
 // Integration tests run against the real PostgreSQL, Redis and mail catcher that `npm test` starts.
 if (!process.env.DATABASE_URL) {
@@ -115,42 +116,7 @@ export async function waitForEmail(
  * 4 in of creasing rule), made straight in the database so marketplace tests need no worker.
  */
 export async function createOpenRequest(world: { printer: Organisation; users: { buyer: User } }, opts: { deadline?: Date; needByDate?: string } = {}) {
-  const { analyseDieline } = await import('@kerfmark/dieline');
-  const { rectangleDxf } = await import('./fixtures');
-  const { DieRequest, DielineFile } = await import('../models');
-  const { metrics, preview } = analyseDieline(rectangleDxf);
-  const request = await DieRequest.query().insertAndFetch({
-    organisationId: world.printer.id,
-    createdBy: world.users.buyer.id,
-    title: `Carton ${unique()}`,
-    status: 'open',
-    quantity: 1,
-    ups: 2,
-    stockName: '18 pt SBS',
-    caliperIn: 0.018,
-    ruleTypes: ['cut', 'crease'],
-    needByDate: opts.needByDate ?? new Date(Date.now() + 40 * 86_400_000).toISOString().slice(0, 10),
-    bidDeadline: opts.deadline ?? new Date(Date.now() + 7 * 86_400_000),
-    deliveryAddress: '1 Test Street',
-    deliveryPostcode: '60614',
-    visibility: 'public',
-    publishedAt: new Date(),
-  } as Partial<InstanceType<typeof DieRequest>>);
-  await DielineFile.query().insert({
-    requestId: request.id,
-    fileName: 'carton.dxf',
-    format: 'dxf',
-    contentType: 'application/dxf',
-    byteSize: rectangleDxf.length,
-    sha256: 'test',
-    s3Key: `test/${unique()}.dxf`,
-    isPrimary: true,
-    analysisStatus: 'done',
-    metrics: metrics as unknown as Record<string, unknown>,
-    preview,
-    layerMap: {},
-  });
-  return request;
+  return insertOpenRequest(world.printer.id, world.users.buyer.id, opts);
 }
 
 /** Another die shop with an estimator, signed in. */

@@ -9,7 +9,6 @@ import { Queue } from 'bullmq';
 import { pino } from 'pino';
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { jobNames, queueNames, reminderJobId } from '@kerfmark/contracts';
-import { analyseDieline } from '@kerfmark/dieline';
 import { createStorage } from '@kerfmark/storage';
 import { assertPortFree } from '../../../../scripts/lib/net';
 import { ensureDatabase, postgresCluster, type PostgresCluster } from '../../../../scripts/lib/postgres';
@@ -27,8 +26,8 @@ import type { Config } from '../config';
 import { bindModels, createKnex } from '../db/knex';
 import { createJobQueues } from '../lib/jobQueues';
 import { createRedis } from '../lib/redis';
-import { DieRequest, DielineFile, Organisation, User } from '../models';
-import { rectangleDxf } from './fixtures';
+import { Organisation, User } from '../models';
+import { insertOpenRequest } from './insertOpenRequest';
 
 /*
  * Real outages: this file starts a PostgreSQL cluster and a redis-server of its own, on ports of
@@ -191,42 +190,6 @@ async function signIn(user: User): Promise<string> {
   return res.body!.token as string;
 }
 
-/** An open, public request with a measured dieline, as the printer's buyer posted it. */
-async function openRequest(printer: Organisation, buyer: User) {
-  const { metrics, preview } = analyseDieline(rectangleDxf);
-  const request = await DieRequest.query().insertAndFetch({
-    organisationId: printer.id,
-    createdBy: buyer.id,
-    title: `Carton ${unique()}`,
-    status: 'open',
-    quantity: 1,
-    ups: 2,
-    stockName: '18 pt SBS',
-    caliperIn: 0.018,
-    ruleTypes: ['cut', 'crease'],
-    needByDate: inDays(40),
-    bidDeadline: new Date(Date.now() + 7 * 86_400_000),
-    deliveryAddress: '1 Test Street',
-    deliveryPostcode: '60614',
-    visibility: 'public',
-    publishedAt: new Date(),
-  } as Partial<DieRequest>);
-  await DielineFile.query().insert({
-    requestId: request.id,
-    fileName: 'carton.dxf',
-    format: 'dxf',
-    contentType: 'application/dxf',
-    byteSize: rectangleDxf.length,
-    sha256: 'test',
-    s3Key: `test/${unique()}.dxf`,
-    isPrimary: true,
-    analysisStatus: 'done',
-    metrics: metrics as unknown as Record<string, unknown>,
-    preview,
-    layerMap: {},
-  });
-  return request;
-}
 
 async function waitUntil(what: string, check: () => boolean | Promise<boolean>, timeoutMs: number): Promise<void> {
   const until = Date.now() + timeoutMs;
@@ -258,9 +221,9 @@ describe('PostgreSQL and Redis really going away under a running API', () => {
 
       // A: every shop has bid and keeps revising. C: fresh requests to submit on mid-stream.
       // B: bidding closed on each, one bid per shop, awarded to the lowest one by one.
-      const a = await openRequest(printer, buyer);
-      const cs = await Promise.all(Array.from({ length: 12 }, () => openRequest(printer, buyer)));
-      const bs = await Promise.all(Array.from({ length: 10 }, () => openRequest(printer, buyer)));
+      const a = await insertOpenRequest(printer.id, buyer.id);
+      const cs = await Promise.all(Array.from({ length: 12 }, () => insertOpenRequest(printer.id, buyer.id)));
+      const bs = await Promise.all(Array.from({ length: 10 }, () => insertOpenRequest(printer.id, buyer.id)));
       const bidOnA: number[] = [];
       for (const [i, token] of tokens.shops.entries()) {
         const res = await call('set-up', 'submit', 'POST', `/api/requests/${a.id}/bids`, token, bidBody(80_000 + i * 1_000));
@@ -463,7 +426,7 @@ describe('PostgreSQL and Redis really going away under a running API', () => {
       const buyer = await userIn(printer, 'buyer');
       const shop = await org('die_shop');
       const estimator = await userIn(shop, 'estimator');
-      const request = await openRequest(printer, buyer);
+      const request = await insertOpenRequest(printer.id, buyer.id);
 
       // The worker's side: the reminders queue on this file's Redis, with the sweep kept scheduled.
       const connection = { host: '127.0.0.1', port: REDIS_PORT, maxRetriesPerRequest: null };
