@@ -2,9 +2,10 @@ import type { MarketplaceQuery } from '@kerfmark/contracts';
 import type { Knex } from 'knex';
 import type { z } from 'zod';
 import { containsPattern } from '../lib/containsPattern';
+import { DieRequest } from '../models';
+import { readRequestGraph } from './requestGraph';
 
 export interface BoardRow {
-  id: number;
   distanceMiles: number | null;
   declined: boolean;
   hasBid: boolean;
@@ -19,7 +20,7 @@ const ORDER: Record<string, string> = {
 
 /**
  * One page of the board of requests open to this die shop, filtered and sorted by the database,
- * with the count of every match. The request rows carry their measured dieline's figures
+ * read in full with the count of every match, in one query. The request rows carry their measured dieline's figures
  * (migration 009); `miles` gives the distance from the shop to each delivery postcode it knows.
  */
 export async function boardPage(
@@ -27,7 +28,7 @@ export async function boardPage(
   shopId: number,
   q: z.output<typeof MarketplaceQuery>,
   miles: Array<{ postcode: string; miles: number }>,
-): Promise<{ rows: BoardRow[]; total: number }> {
+): Promise<{ rows: Array<BoardRow & { request: DieRequest }>; total: number }> {
   // The requests that match, as a fresh query each time it is needed.
   const matching = () => {
     const query = knex('dieRequests as r')
@@ -58,15 +59,26 @@ export async function boardPage(
   }
   const desc = q.sort.startsWith('-');
   // Unknown values last either way; ties by the bid deadline, then id, so that pages are stable.
+  const order = `${ORDER[q.sort.replace('-', '')]} ${desc ? 'desc' : 'asc'} nulls last, r.bid_deadline, r.id`;
   page
-    .orderByRaw(`${ORDER[q.sort.replace('-', '')]} ${desc ? 'desc' : 'asc'} nulls last, r.bid_deadline, r.id`)
+    .select(knex.raw(`row_number() over (order by ${order}) as position`))
+    .orderByRaw(order)
     .limit(q.pageSize)
     .offset((q.page - 1) * q.pageSize);
-  const rows = (await page) as Array<BoardRow & { total: number }>;
+  // The page's requests in full, read in the same query.
+  const requests = (await readRequestGraph(
+    knex,
+    DieRequest.query().join(page.as('page'), 'page.id', 'die_requests.id').select('page.distanceMiles', 'page.declined', 'page.hasBid', 'page.total').orderBy('page.position'),
+    ['organisation', 'press', 'files'],
+  )) as Array<DieRequest & BoardRow & { total: number }>;
   // Past the last page no row carries the count: count on its own.
-  const total = rows.length ? Number(rows[0]!.total) : q.page > 1 ? Number((await matching().count('* as count'))[0]?.count ?? 0) : 0;
+  const total = requests.length ? Number(requests[0]!.total) : q.page > 1 ? Number((await matching().count('* as count'))[0]?.count ?? 0) : 0;
   return {
-    rows: rows.map((r) => ({ id: r.id, distanceMiles: r.distanceMiles === null ? null : Math.round(r.distanceMiles), declined: r.declined, hasBid: r.hasBid })),
+    rows: requests.map((request) => {
+      const { distanceMiles, declined, hasBid } = request;
+      for (const key of ['distanceMiles', 'declined', 'hasBid', 'total'] as const) delete (request as Partial<typeof request>)[key];
+      return { request, distanceMiles: distanceMiles === null ? null : Math.round(distanceMiles), declined, hasBid };
+    }),
     total,
   };
 }

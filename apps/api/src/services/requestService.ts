@@ -224,17 +224,8 @@ export function createRequestService({ knex, reminders }: ServiceDeps) {
       const from = postcodeCentre(actor.orgPostcode);
       const miles = from ? knownPostcodes().map(({ postcode, centre }) => ({ postcode, miles: distanceMiles(from, centre) })) : [];
       const { rows, total } = await boardPage(knex, actor.organisationId, q, miles);
-      const requests = await readRequestGraph(
-        knex,
-        DieRequest.query().whereIn('die_requests.id', rows.map((r) => r.id)),
-        ['organisation', 'press', 'files'],
-      );
-      const byId = new Map(requests.map((r) => [r.id, r]));
       return {
-        items: rows.flatMap((row) => {
-          const request = byId.get(row.id);
-          return request ? [{ ...toSummary(request), distanceMiles: row.distanceMiles, declined: row.declined, hasBid: row.hasBid }] : [];
-        }),
+        items: rows.map(({ request, ...row }) => ({ ...toSummary(request), ...row })),
         total,
         page: q.page,
         pageSize: q.pageSize,
