@@ -83,24 +83,21 @@ try {
   const shopId = (await knex('organisations').where({ name: 'Brightline Rule & Die' }).first()).id;
   const base = express();
   base.get('/board', async (_req, res) => {
-    // The board's two reads: the page of matching requests with the count of all, then its rows in full.
-    const keys = await pool.query(
-      `SELECT r.id, count(*) OVER () AS total,
-         r.id IN (SELECT request_id FROM request_declines WHERE shop_id = $1) AS declined,
-         r.id IN (SELECT request_id FROM bids WHERE shop_id = $1) AS has_bid
-       FROM die_requests r
-       WHERE r.status = 'open' AND r.bid_deadline > now() AND r.visibility = 'public'
-         AND r.id NOT IN (SELECT request_id FROM request_declines WHERE shop_id = $1)
-       ORDER BY r.bid_deadline, r.id LIMIT 25`,
-      [shopId],
-    );
-    const page = await pool.query(
-      `SELECT r.*, o.name AS org, p.name AS press, f.id AS file_id, f.file_name, f.metrics, f.analysis_status FROM die_requests r
-       JOIN organisations o ON o.id = r.organisation_id LEFT JOIN presses p ON p.id = r.press_id
-       LEFT JOIN dieline_files f ON f.request_id = r.id WHERE r.id = ANY($1)`,
-      [keys.rows.map((r) => r.id)],
-    );
-    res.json({ items: page.rows, total: keys.rows[0]?.total ?? 0 });
+    // The board's reads: the page of matching requests in full, and the count of all matches.
+    const matching = `FROM die_requests r WHERE r.status = 'open' AND r.bid_deadline > now() AND r.visibility = 'public'
+       AND r.id NOT IN (SELECT request_id FROM request_declines WHERE shop_id = $1)`;
+    const [page, count] = await Promise.all([
+      pool.query(
+        `SELECT r.*, o.name AS org, p.name AS press, f.id AS file_id, f.file_name, f.metrics, f.analysis_status,
+           r.id IN (SELECT request_id FROM bids WHERE shop_id = $1) AS has_bid
+         FROM (SELECT r.id ${matching} ORDER BY r.bid_deadline, r.id LIMIT 25) AS pg
+         JOIN die_requests r ON r.id = pg.id JOIN organisations o ON o.id = r.organisation_id
+         LEFT JOIN presses p ON p.id = r.press_id LEFT JOIN dieline_files f ON f.request_id = r.id`,
+        [shopId],
+      ),
+      pool.query(`SELECT count(*) AS total ${matching}`, [shopId]),
+    ]);
+    res.json({ items: page.rows, total: count.rows[0].total });
   });
   base.get('/detail', async (_req, res) => {
     const r = await pool.query(

@@ -19,8 +19,8 @@ const ORDER: Record<string, string> = {
 };
 
 /**
- * One page of the board of requests open to this die shop, filtered and sorted by the database,
- * read in full with the count of every match, in one query. The request rows carry their measured dieline's figures
+ * One page of the board of requests open to this die shop, filtered and sorted by the database
+ * and read in full, with the count of every match. The request rows carry their measured dieline's figures
  * (migration 009); `miles` gives the distance from the shop to each delivery postcode it knows.
  */
 export async function boardPage(
@@ -48,7 +48,7 @@ export async function boardPage(
     return query;
   };
   const page = matching()
-    .select('r.id', 'd.miles as distanceMiles', knex.raw('count(*) over () as total'))
+    .select('r.id', 'd.miles as distanceMiles')
     .select(knex.raw('r.id in (select request_id from request_declines where shop_id = ?) as declined', [shopId]))
     .select(knex.raw('r.id in (select request_id from bids where shop_id = ?) as has_bid', [shopId]));
   if (miles.length) {
@@ -65,18 +65,21 @@ export async function boardPage(
     .orderByRaw(order)
     .limit(q.pageSize)
     .offset((q.page - 1) * q.pageSize);
-  // The page's requests in full, read in the same query.
-  const requests = (await readRequestGraph(
-    knex,
-    DieRequest.query().join(page.as('page'), 'page.id', 'die_requests.id').select('page.distanceMiles', 'page.declined', 'page.hasBid', 'page.total').orderBy('page.position'),
-    ['organisation', 'press', 'files'],
-  )) as Array<DieRequest & BoardRow & { total: number }>;
-  // Past the last page no row carries the count: count on its own.
-  const total = requests.length ? Number(requests[0]!.total) : q.page > 1 ? Number((await matching().count('* as count'))[0]?.count ?? 0) : 0;
+  // The page's requests in full in one query and, beside it, the count of every match (a count
+  // in the page's query would sort every match to number 25 of them).
+  const [requests, counted] = await Promise.all([
+    readRequestGraph(
+      knex,
+      DieRequest.query().join(page.as('page'), 'page.id', 'die_requests.id').select('page.distanceMiles', 'page.declined', 'page.hasBid').orderBy('page.position'),
+      ['organisation', 'press', 'files'],
+    ) as Promise<Array<DieRequest & BoardRow>>,
+    matching().count('* as count') as Promise<Array<{ count: number }>>,
+  ]);
+  const total = Number(counted[0]?.count ?? 0);
   return {
     rows: requests.map((request) => {
       const { distanceMiles, declined, hasBid } = request;
-      for (const key of ['distanceMiles', 'declined', 'hasBid', 'total'] as const) delete (request as Partial<typeof request>)[key];
+      for (const key of ['distanceMiles', 'declined', 'hasBid'] as const) delete (request as Partial<typeof request>)[key];
       return { request, distanceMiles: distanceMiles === null ? null : Math.round(distanceMiles), declined, hasBid };
     }),
     total,
