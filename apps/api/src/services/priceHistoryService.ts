@@ -21,7 +21,7 @@ import { DieRequest } from '../models';
 import { notFound } from '../lib/httpError';
 import { primaryFile } from './requestViews';
 
-/** The fit works on at most this many records (a random sample past it): enough for stable estimates. */
+/** The fit works on at most this many records (a pseudo-random sample past it): enough for stable estimates. */
 export const FIT_SAMPLE = 5000;
 const CHART_POINTS = 1500;
 
@@ -94,7 +94,9 @@ export function createPriceHistoryService({ knex }: ServiceDeps) {
   async function observations(organisationId: number, f: Partial<Filters>, currency: string) {
     const [{ count }] = await filteredRecords(knex, organisationId, { ...f, currency }).count('* as count');
     const q = filteredRecords(knex, organisationId, { ...f, currency }).select('dieCents', 'currency', 'ruleLengthIn', 'bends', 'curves', 'joints', 'punches', 'complexity', 'pricedOn', 'shopName');
-    if (Number(count) > FIT_SAMPLE) q.orderByRaw('random()').limit(FIT_SAMPLE);
+    // A sample in a fixed pseudo-random order (by a hash of the id), not random(): every API
+    // instance, and every refit, then shows the same band for the same history.
+    if (Number(count) > FIT_SAMPLE) q.orderByRaw('hashint8(price_records.id)').limit(FIT_SAMPLE);
     const rows = (await q) as Array<Record<string, unknown>>;
     return {
       total: Number(count),
