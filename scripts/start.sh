@@ -9,4 +9,6 @@ if [ ! -x node_modules/.bin/tsx ] || [ package-lock.json -nt node_modules/.packa
   npm ci --no-audit --no-fund --loglevel=error
 fi
 export TURBO_TELEMETRY_DISABLED=1
-exec node node_modules/tsx/dist/cli.mjs "scripts/$script.ts" "$@"
+# Node runs the script itself with the tsx loader (no tsx parent process in between), so that
+# Ctrl-C reaches the one process that stops the services, and nothing exits before it is done.
+exec node --import tsx "scripts/$script.ts" "$@"
