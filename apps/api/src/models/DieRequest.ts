@@ -1,11 +1,10 @@
-import { Model, type QueryBuilder } from 'objection';
+import { Model } from 'objection';
 import type { Grain, RequestStatus, RuleType, Visibility } from '@kerfmark/contracts';
 import { DielineFile } from './DielineFile';
 import { Organisation } from './Organisation';
 import { Press } from './Press';
-import { RequestQuestion } from './RequestQuestion';
-// Award imports this model too; the cycle is safe because relationMappings is read lazily.
-import { Award } from './Award';
+import type { RequestQuestion } from './RequestQuestion';
+import type { Award } from './Award';
 
 export class DieRequest extends Model {
   static override tableName = 'die_requests';
@@ -57,6 +56,7 @@ export class DieRequest extends Model {
   press?: Press | null;
   files?: DielineFile[];
   invitedShops?: Organisation[];
+  /** Read with the request by readRequestGraph. */
   award?: Award | null;
   questions?: RequestQuestion[];
 
@@ -85,17 +85,6 @@ export class DieRequest extends Model {
           through: { from: 'request_invitations.requestId', to: 'request_invitations.shopId' },
           to: 'organisations.id',
         },
-      },
-      award: {
-        relation: Model.HasOneRelation,
-        modelClass: Award,
-        join: { from: 'die_requests.id', to: 'awards.requestId' },
-      },
-      questions: {
-        relation: Model.HasManyRelation,
-        modelClass: RequestQuestion,
-        join: { from: 'die_requests.id', to: 'request_questions.requestId' },
-        modify: (query: QueryBuilder<RequestQuestion>) => query.orderBy('askedAt'),
       },
     };
   }

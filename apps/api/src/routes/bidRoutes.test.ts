@@ -3,19 +3,9 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { DieRequest } from '../models';
 import { errorsText, validateRelease } from '../test/ocdsValidator';
 import { app, createOpenRequest, createShop, createWorld, knex, waitForEmail, type World } from '../test/harness';
+import { inDays, bidBody } from '../test/fixtures';
 
 const bearer = (token: string) => ({ Authorization: `Bearer ${token}` });
-const inDays = (days: number) => new Date(Date.now() + days * 86_400_000).toISOString().slice(0, 10);
-const bidBody = (dieCents: number, over: Record<string, unknown> = {}) => ({
-  lines: [
-    { kind: 'die', description: 'Steel-rule die, 3/4 in plywood', amountCents: dieCents },
-    { kind: 'shipping', description: 'Ground', amountCents: 3_500 },
-  ],
-  currency: 'USD',
-  leadDays: 5,
-  validUntil: inDays(30),
-  ...over,
-});
 
 let w: World;
 let second: Awaited<ReturnType<typeof createShop>>;

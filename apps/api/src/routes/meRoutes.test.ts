@@ -1,9 +1,9 @@
 import request from 'supertest';
 import { describe, expect, it } from 'vitest';
 import { app, createOpenRequest, createWorld } from '../test/harness';
+import { inDays } from '../test/fixtures';
 
 const bearer = (token: string) => ({ Authorization: `Bearer ${token}` });
-const inDays = (days: number) => new Date(Date.now() + days * 86_400_000).toISOString().slice(0, 10);
 
 describe('notification preferences', () => {
   it('starts with every e-mail on, and keeps what the user turns off', async () => {

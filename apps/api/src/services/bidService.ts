@@ -190,7 +190,8 @@ export function createBidService(
     async compare(actor: AuthUser, requestId: number): Promise<BidComparisonDto> {
       if (actor.orgKind !== 'printer') throw notFound('That die request');
       const [request, bids] = await Promise.all([
-        readRequestGraph(knex, DieRequest.query().findById(requestId).where('die_requests.organisationId', actor.organisationId), ['award', 'files']),
+        // For a printer, the requests it may see are its own.
+        readRequestGraph(knex, requests.visibleQuery(actor, requestId), ['award', 'files']),
         submittedBids(knex, requestId),
       ]);
       if (!request) throw notFound('That die request');

@@ -20,8 +20,9 @@ const ORDER: Record<string, string> = {
 
 /**
  * One page of the board of requests open to this die shop, filtered and sorted by the database
- * and read in full, with the count of every match. The request rows carry their measured dieline's figures
- * (migration 009); `miles` gives the distance from the shop to each delivery postcode it knows.
+ * and read in full, with the count of every match. The request rows carry their measured
+ * dieline's figures (migration 009); `miles` gives the distance from the shop to each delivery
+ * postcode it knows.
  */
 export async function boardPage(
   knex: Knex,

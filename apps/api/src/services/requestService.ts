@@ -58,10 +58,6 @@ async function bidDto(bid: Bid): Promise<BidDto> {
 }
 
 export function createRequestService({ knex, reminders }: ServiceDeps) {
-  /**
-   * The request if this user may see it; anything else is the same 404. `joined` names to-one
-   * relations to read in the same query.
-   */
   /** The query for a request this user may see. */
   function visibleQuery(actor: AuthUser, id: number, trx?: Knex.Transaction) {
     const query = DieRequest.query(trx).findById(id);
@@ -196,6 +192,7 @@ export function createRequestService({ knex, reminders }: ServiceDeps) {
   }
 
   return {
+    visibleQuery,
     findVisible,
     findOwned,
     detail,

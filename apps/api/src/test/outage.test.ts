@@ -28,6 +28,7 @@ import { createJobQueues } from '../lib/jobQueues';
 import { createRedis } from '../lib/redis';
 import { Organisation, User } from '../models';
 import { insertOpenRequest } from './insertOpenRequest';
+import { bidBody } from './fixtures';
 
 /*
  * Real outages: this file starts a PostgreSQL cluster and a redis-server of its own, on ports of
@@ -158,16 +159,6 @@ async function call(client: string, what: string, method: string, url: string, t
 }
 
 const unique = () => randomUUID().slice(0, 8);
-const inDays = (days: number) => new Date(Date.now() + days * 86_400_000).toISOString().slice(0, 10);
-const bidBody = (dieCents: number) => ({
-  lines: [
-    { kind: 'die', description: 'Steel-rule die, 3/4 in plywood', amountCents: dieCents },
-    { kind: 'shipping', description: 'Ground', amountCents: 3_500 },
-  ],
-  currency: 'USD',
-  leadDays: 5,
-  validUntil: inDays(30),
-});
 
 async function org(kind: 'printer' | 'die_shop') {
   return Organisation.query().insertAndFetch({ name: `${kind} ${unique()}`, kind, timeZone: 'America/Chicago', postcode: '60614', country: 'US' });
