@@ -1,3 +1,4 @@
+import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { addWorkingDays, checkArrival, checkNeedBy, isWorkingDay, runHours, workingDaysBetween } from './schedule';
 
@@ -23,6 +24,26 @@ describe('working days', () => {
     expect(workingDaysBetween('2026-12-04', '2026-12-07')).toBe(1);
     expect(workingDaysBetween('2026-12-07', '2026-12-04')).toBe(-1);
     expect(workingDaysBetween('2026-12-07', '2026-12-07')).toBe(0);
+  });
+
+  // Gregorian calendar: 2027 is a common year of 365 days that begins on a Friday, so it has
+  // 52 whole weeks (260 weekdays) and one day over, Friday 31 December: 261 weekdays.
+  it('counts a whole year in one step', () => {
+    expect(workingDaysBetween('2026-12-31', '2027-12-31')).toBe(261);
+    expect(workingDaysBetween('2027-12-31', '2026-12-31')).toBe(-261);
+    // 1 January 2027 and 25 December 2027 (a Saturday: no working day lost) as holidays.
+    expect(workingDaysBetween('2026-12-31', '2027-12-31', new Set(['2027-01-01', '2027-12-25', 'not a date']))).toBe(260);
+  });
+
+  it('counts back exactly what adding working days stepped over, day by day', () => {
+    const day = fc.integer({ min: 0, max: 3000 }).map((n) => new Date(Date.UTC(2025, 0, 1) + n * 86_400_000).toISOString().slice(0, 10));
+    fc.assert(
+      fc.property(day, fc.integer({ min: -400, max: 400 }), fc.uniqueArray(day, { maxLength: 12 }), (start, n, holidays) => {
+        const set = new Set(holidays);
+        expect(workingDaysBetween(start, addWorkingDays(start, n, set), set)).toBe(n);
+      }),
+      { seed: 2026, numRuns: 500 },
+    );
   });
 
   it('refuses what is not a date', () => {

@@ -10,7 +10,34 @@ function toUtc(date: string): number {
 }
 
 const fromUtc = (ms: number) => new Date(ms).toISOString().slice(0, 10);
-const isWeekend = (ms: number) => [0, 6].includes(new Date(ms).getUTCDay());
+/** Day of the week of a UTC midnight, 0 Sunday to 6 Saturday (1970-01-01 was a Thursday). */
+const weekday = (ms: number) => (Math.floor(ms / DAY_MS) + 4) % 7;
+const isWeekend = (ms: number) => {
+  const d = weekday(ms);
+  return d === 0 || d === 6;
+};
+
+/**
+ * Monday-to-Friday days after `a` up to and including `b` (UTC midnights, a <= b): five for every
+ * whole week, then the few days left one by one. Constant time, where a comparison of many bids
+ * over months of dates would otherwise step through every day.
+ */
+function weekdaysAfter(a: number, b: number): number {
+  const days = Math.round((b - a) / DAY_MS);
+  let count = Math.floor(days / 7) * 5;
+  for (let i = 1, d = weekday(a); i <= days % 7; i++) if ((d + i) % 7 !== 0 && (d + i) % 7 !== 6) count++;
+  return count;
+}
+
+/** Holidays on a weekday after `a` up to and including `b`; a holiday that is not a date never counts. */
+function holidaysAfter(a: number, b: number, holidays: ReadonlySet<string>): number {
+  let count = 0;
+  for (const holiday of holidays) {
+    const ms = Date.parse(`${holiday}T00:00:00Z`);
+    if (ms > a && ms <= b && !isWeekend(ms)) count++;
+  }
+  return count;
+}
 
 export function isWorkingDay(date: string, holidays: ReadonlySet<string> = new Set()): boolean {
   return !isWeekend(toUtc(date)) && !holidays.has(date);
@@ -23,7 +50,7 @@ export function addWorkingDays(start: string, days: number, holidays: ReadonlySe
   let left = Math.abs(days);
   while (left > 0) {
     ms += step;
-    if (!isWeekend(ms) && !holidays.has(fromUtc(ms))) left--;
+    if (!isWeekend(ms) && (holidays.size === 0 || !holidays.has(fromUtc(ms)))) left--;
   }
   return fromUtc(ms);
 }
@@ -32,12 +59,9 @@ export function addWorkingDays(start: string, days: number, holidays: ReadonlySe
 export function workingDaysBetween(from: string, to: string, holidays: ReadonlySet<string> = new Set()): number {
   const a = toUtc(from);
   const b = toUtc(to);
-  const sign = b >= a ? 1 : -1;
-  let count = 0;
-  for (let ms = a + sign * DAY_MS; sign > 0 ? ms <= b : ms >= b; ms += sign * DAY_MS) {
-    if (!isWeekend(ms) && !holidays.has(fromUtc(ms))) count++;
-  }
-  return sign * count;
+  // Going back, the days counted are `to` up to the day before `from`.
+  const [after, upTo, sign] = b >= a ? [a, b, 1] : [b - DAY_MS, a - DAY_MS, -1];
+  return sign * (weekdaysAfter(after, upTo) - holidaysAfter(after, upTo, holidays)) || 0;
 }
 
 /** Hours to run `sheets` on a press at `sheetsPerHour` (its typical speed). */
