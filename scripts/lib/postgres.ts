@@ -107,6 +107,9 @@ export function postgresCluster(opts: { baseDir: string; name: string; port: num
         `-p ${opts.port}`,
         `-k ${dirs.run}`,
         '-c listen_addresses=127.0.0.1',
+        // Random reads cost about what sequential ones do on SSD or a cache-resident data set; the
+        // default (4, for spinning disks) has the planner scan a whole table rather than fetch 25 rows by key.
+        '-c random_page_cost=1.1',
         ...(opts.forTests ? ['-c fsync=off', '-c synchronous_commit=off', '-c full_page_writes=off'] : []),
       ].join(' ');
       await pgCtl(['-l', path.join(dirs.run, 'postgres.log'), '-o', options, '-w', '-t', '30', 'start']).catch(failed('start'));

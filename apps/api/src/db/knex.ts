@@ -1,6 +1,7 @@
 import knexFactory, { type Knex } from 'knex';
 import { knexSnakeCaseMappers, Model } from 'objection';
 import pg from 'pg';
+import { PreparingPgClient } from './PreparingPgClient';
 
 // Return BIGINT counts and NUMERIC as JavaScript numbers: ids and counts stay far below 2^53,
 // and money is integer cents in BIGINT columns.
@@ -11,7 +12,7 @@ pg.types.setTypeParser(pg.types.builtins.DATE, (v) => v);
 
 export function createKnex(databaseUrl: string): Knex {
   return knexFactory({
-    client: 'pg',
+    client: PreparingPgClient,
     connection: databaseUrl,
     pool: { min: 0, max: 10 },
     acquireConnectionTimeout: 5000,

@@ -74,7 +74,7 @@ export async function boardPage(
       DieRequest.query().join(page.as('page'), 'page.id', 'die_requests.id').select('page.distanceMiles', 'page.declined', 'page.hasBid').orderBy('page.position'),
       ['organisation', 'press', 'files'],
     ) as Promise<Array<DieRequest & BoardRow>>,
-    matching().count('* as count') as Promise<Array<{ count: number }>>,
+    matching().count('* as count').options({ prepare: true }) as unknown as Promise<Array<{ count: number }>>,
   ]);
   const total = Number(counted[0]?.count ?? 0);
   return {

@@ -63,7 +63,10 @@ export async function readRequestGraph<Q extends QueryBuilder<DieRequest, DieReq
   parts: RequestPart[],
 ): Promise<Q extends QueryBuilder<DieRequest, DieRequest[]> ? DieRequest[] : DieRequest | undefined> {
   const builder = query as QueryBuilder<DieRequest, DieRequest[]>;
-  const result = (await builder.select('die_requests.*', ...parts.map((part) => knex.raw(`${PARTS[part]} as ??`, [`part_${part}`])))) as DieRequest | DieRequest[] | undefined;
+  // Prepared: the text depends only on the parts and the narrowing, so it is one of a few.
+  const result = (await builder
+    .select('die_requests.*', ...parts.map((part) => knex.raw(`${PARTS[part]} as ??`, [`part_${part}`])))
+    .onBuildKnex((knexQuery) => knexQuery.options({ prepare: true }))) as DieRequest | DieRequest[] | undefined;
   const adopted = Array.isArray(result) ? result.map((r) => adoptParts(r, parts)) : result && adoptParts(result, parts);
   return adopted as never;
 }

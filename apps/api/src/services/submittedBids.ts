@@ -29,7 +29,8 @@ export async function submittedBids(knex: Knex, requestId: number): Promise<Subm
     )
     .where({ 'b.requestId': requestId, 'b.status': 'submitted' })
     .orderBy([{ column: 'b.totalCents' }, { column: 'b.id' }])
-    .select('b.id', 'b.shopId', 's.name as shopName', 'b.revision', 'b.lines', 'b.currency', 'b.totalCents', 'b.dieCents', 'b.leadDays', 'b.promisedShipDate', 'b.validUntil', 'record.jobs', 'record.shipped', 'record.onTime');
+    .select('b.id', 'b.shopId', 's.name as shopName', 'b.revision', 'b.lines', 'b.currency', 'b.totalCents', 'b.dieCents', 'b.leadDays', 'b.promisedShipDate', 'b.validUntil', 'record.jobs', 'record.shipped', 'record.onTime')
+    .options({ prepare: true });
   return (rows as Array<Omit<SubmittedBid, 'pastJobs' | 'onTimeRate'> & { jobs: number; shipped: number; onTime: number }>).map(({ jobs, shipped, onTime, ...bid }) => ({
     ...bid,
     pastJobs: Number(jobs),
