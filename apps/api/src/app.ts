@@ -33,6 +33,9 @@ export function createApp(deps: AppDeps): Express {
   const { config, knex, redis, logger } = deps;
   const app = express();
   app.disable('x-powered-by');
+  // No ETag on the API's answers: hashing every JSON body cost CPU on each request, and the web
+  // app refetches through its own query cache rather than the browser's.
+  app.set('etag', false);
   app.set('trust proxy', process.env.TRUST_PROXY ?? 'loopback');
   app.use(
     helmet({

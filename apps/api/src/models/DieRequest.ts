@@ -5,6 +5,7 @@ import { Organisation } from './Organisation';
 import { Press } from './Press';
 import type { RequestQuestion } from './RequestQuestion';
 import type { Award } from './Award';
+import type { SubmittedBid } from '../services/submittedBids';
 
 export class DieRequest extends Model {
   static override tableName = 'die_requests';
@@ -59,6 +60,7 @@ export class DieRequest extends Model {
   /** Read with the request by readRequestGraph. */
   award?: Award | null;
   questions?: RequestQuestion[];
+  submittedBids?: SubmittedBid[];
 
   static override get relationMappings() {
     return {

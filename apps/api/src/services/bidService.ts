@@ -17,7 +17,6 @@ import type { ServiceDeps } from './deps';
 import type { createPriceHistoryService } from './priceHistoryService';
 import type { createRequestService } from './requestService';
 import { readRequestGraph } from './requestGraph';
-import { submittedBids } from './submittedBids';
 import { primaryFile, toBidDto } from './requestViews';
 
 type ParsedBid = z.output<typeof BidInputSchema>;
@@ -189,12 +188,10 @@ export function createBidService(
     /** The sealed bids, opened: only the printer, and only once bidding has closed. */
     async compare(actor: AuthUser, requestId: number): Promise<BidComparisonDto> {
       if (actor.orgKind !== 'printer') throw notFound('That die request');
-      const [request, bids] = await Promise.all([
-        // For a printer, the requests it may see are its own.
-        readRequestGraph(knex, requests.visibleQuery(actor, requestId), ['award', 'files']),
-        submittedBids(knex, requestId),
-      ]);
+      // For a printer, the requests it may see are its own.
+      const request = await readRequestGraph(knex, requests.visibleQuery(actor, requestId), ['award', 'fileSummaries', 'submittedBids']);
       if (!request) throw notFound('That die request');
+      const bids = request.submittedBids ?? [];
       if (biddingOpen(request) || request.status === 'draft') {
         throw new HttpError(404, 'bids_sealed', 'Bids stay sealed until the bid deadline, unless purchasing closes bidding early.');
       }

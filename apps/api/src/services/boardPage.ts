@@ -4,6 +4,7 @@ import type { z } from 'zod';
 import { containsPattern } from '../lib/containsPattern';
 import { DieRequest } from '../models';
 import { readRequestGraph } from './requestGraph';
+import { SUMMARY_COLUMNS } from './requestViews';
 
 export interface BoardRow {
   distanceMiles: number | null;
@@ -66,21 +67,24 @@ export async function boardPage(
     .orderByRaw(order)
     .limit(q.pageSize)
     .offset((q.page - 1) * q.pageSize);
-  // The page's requests in full in one query and, beside it, the count of every match (a count
-  // in the page's query would sort every match to number 25 of them).
-  const [requests, counted] = await Promise.all([
-    readRequestGraph(
-      knex,
-      DieRequest.query().join(page.as('page'), 'page.id', 'die_requests.id').select('page.distanceMiles', 'page.declined', 'page.hasBid').orderBy('page.position'),
-      ['organisation', 'press', 'files'],
-    ) as Promise<Array<DieRequest & BoardRow>>,
-    matching().count('* as count').options({ prepare: true }) as unknown as Promise<Array<{ count: number }>>,
-  ]);
-  const total = Number(counted[0]?.count ?? 0);
+  // The page's requests in full and the count of every match, in one query: the count is a
+  // subquery of its own, which PostgreSQL works out once (a window count over the page's query
+  // would sort every match to number 25 of them). Only a page past the end asks for it alone.
+  const count = () => matching().count('*');
+  const requests = (await readRequestGraph(
+    knex,
+    DieRequest.query()
+      .join(page.as('page'), 'page.id', 'die_requests.id')
+      .select('page.distanceMiles', 'page.declined', 'page.hasBid', count().as('totalMatches'))
+      .orderBy('page.position'),
+    ['organisation', 'press', 'fileSummaries'],
+    SUMMARY_COLUMNS,
+  )) as Array<DieRequest & BoardRow & { totalMatches: number }>;
+  const total = requests[0]?.totalMatches ?? Number(((await count().options({ prepare: true })) as Array<{ count: number }>)[0]?.count ?? 0);
   return {
     rows: requests.map((request) => {
       const { distanceMiles, declined, hasBid } = request;
-      for (const key of ['distanceMiles', 'declined', 'hasBid'] as const) delete (request as Partial<typeof request>)[key];
+      for (const key of ['distanceMiles', 'declined', 'hasBid', 'totalMatches'] as const) delete (request as Partial<typeof request>)[key];
       return { request, distanceMiles: distanceMiles === null ? null : Math.round(distanceMiles), declined, hasBid };
     }),
     total,
