@@ -6,8 +6,9 @@ interface QueryObject {
   options?: Record<string, unknown> & { prepare?: boolean };
 }
 
+/** The pg client knex hands over; pg remembers there which statements it has prepared. */
 interface PgConnection {
-  parsedStatements?: Record<string, string>;
+  connection: { parsedStatements: Record<string, string> };
   query(text: string): Promise<unknown>;
 }
 
@@ -40,8 +41,9 @@ export class PreparingPgClient extends PgClient {
     return super._query(connection, obj).catch(async (error: { code?: string }) => {
       // After a migration changes a table's columns, PostgreSQL refuses the old statement once;
       // forget it on this connection, so that the next run prepares it anew.
-      if (error.code === CACHED_PLAN_CHANGED && connection.parsedStatements?.[name]) {
-        delete connection.parsedStatements[name];
+      const statements = connection.connection.parsedStatements;
+      if (error.code === CACHED_PLAN_CHANGED && statements[name] !== undefined) {
+        delete statements[name];
         await connection.query(`DEALLOCATE "${name}"`).catch(() => undefined);
       }
       throw error;
