@@ -1,16 +1,27 @@
 import request from 'supertest';
 import { beforeAll, describe, expect, it } from 'vitest';
-import { app, createOpenRequest, createPress, createWorld, unique, type World } from '../test/harness';
+import { newToken } from '../lib/hashToken';
+import { DielineFile, Invitation, Notification, type Organisation, type User } from '../models';
+import { bidBody, inDays, rectangleSvg } from '../test/fixtures';
+import { app, createOpenRequest, createPress, createWorld, knex, PASSWORD, unique, type World } from '../test/harness';
+import { addDieline, callAs, createReadyDraft, createRequestAt, type StagedRequest } from '../test/requestStages';
 
 type Actor = 'anonymous' | 'buyer' | 'purchasing' | 'printerAdmin' | 'estimator' | 'shopAdmin';
+type ForEach<T> = Record<Actor, T>;
+
+const actors: Actor[] = ['anonymous', 'buyer', 'purchasing', 'printerAdmin', 'estimator', 'shopAdmin'];
+const printerSide: Actor[] = ['buyer', 'purchasing', 'printerAdmin'];
+const shopSide: Actor[] = ['estimator', 'shopAdmin'];
 
 interface RouteCase {
   name: string;
   send: (world: World, actor: Actor) => request.Test;
-  expect: Record<Actor, number>;
+  expect: ForEach<number>;
+  /** The route spends the caller's token, so each actor calls it from a world of its own. */
+  ownWorld?: boolean;
 }
 
-const everyone = (status: number, anonymous = 401): Record<Actor, number> => ({
+const everyone = (status: number, anonymous = 401): ForEach<number> => ({
   anonymous,
   buyer: status,
   purchasing: status,
@@ -18,10 +29,77 @@ const everyone = (status: number, anonymous = 401): Record<Actor, number> => ({
   estimator: status,
   shopAdmin: status,
 });
+/** A printers' route: every printer role gets `status` unless `except` says otherwise; die shops get 403. */
+const printers = (status: number, except: Partial<ForEach<number>> = {}): ForEach<number> => ({
+  ...everyone(status),
+  estimator: 403,
+  shopAdmin: 403,
+  ...except,
+});
+/** A die shops' route: both shop roles get `status`; printers get 403. */
+const shops = (status: number): ForEach<number> => ({ ...everyone(status), buyer: 403, purchasing: 403, printerAdmin: 403 });
+/** An admins' route, in either kind of organisation. */
+const admins = (status: number): ForEach<number> => ({ ...everyone(403), printerAdmin: status, shopAdmin: status });
+
+/** The world's user behind an actor; where a case needs someone's account or record, anonymous uses the buyer's. */
+const member = (actor: Actor) => (actor === 'anonymous' ? 'buyer' : actor);
+
+// Two invented past dies, in the columns `priceMapping` names.
+const priceCsv = 'Date,Supplier,Die price,Rule length (in)\n2026-03-16,Shop A,612.50,88\n2026-05-04,Shop B,455.00,61\n';
+const priceMapping = { pricedOn: 'Date', shopName: 'Supplier', diePrice: 'Die price', ruleLengthIn: 'Rule length (in)' };
+
+/** What the cases act on, made for each world in `setUp`. */
+interface Fixtures {
+  press: number;
+  /** An open request every die shop may see, with its measured dieline and a question from the world's shop. */
+  open: number;
+  openFile: number;
+  question: number;
+  /** A draft of the printer's, with an uploaded SVG dieline: die shops cannot see it. */
+  draft: number;
+  draftFile: number;
+  /** An open request the world's shop bid on. */
+  bid: StagedRequest;
+  /** An awarded request: bids opened, the purchase order issued. */
+  awarded: StagedRequest;
+  /** A stock die the world's shop listed (every organisation sees it), and one of the printer's own. */
+  stockDie: number;
+  printerDie: number;
+  /** A live invitation's link token. */
+  previewToken: string;
+  /** For each actor, one in its own organisation (anonymous: the printer's), or its own. */
+  ownDie: ForEach<number>;
+  notice: ForEach<number>;
+  toResend: ForEach<number>;
+  toRevoke: ForEach<number>;
+  acceptToken: ForEach<string>;
+  /** For routes that change their target, one each: see `oneEach`. */
+  toDelete: ForEach<number>;
+  toPublish: ForEach<number>;
+  toCancel: ForEach<number>;
+  toClose: ForEach<number>;
+  toBidOn: ForEach<number>;
+  toWithdraw: ForEach<number>;
+  toAward: ForEach<StagedRequest>;
+  toStart: ForEach<number>;
+  toShip: ForEach<number>;
+  toReceive: ForEach<number>;
+}
+const fixtures = new WeakMap<World, Fixtures>();
+const fx = (w: World): Fixtures => {
+  const found = fixtures.get(w);
+  if (!found) throw new Error('no fixtures for this world');
+  return found;
+};
 
 // Each role's access to each route: role and organisation kind, enforced by the API.
 const cases: RouteCase[] = [
   { name: 'GET /api/health', send: () => request(app).get('/api/health'), expect: everyone(200, 200) },
+  {
+    name: 'POST /api/auth/login',
+    send: (w, actor) => request(app).post('/api/auth/login').send({ email: w.users[member(actor)].email, password: PASSWORD }),
+    expect: everyone(200, 200),
+  },
   { name: 'GET /api/me', send: () => request(app).get('/api/me'), expect: everyone(200) },
   { name: 'GET /api/users', send: () => request(app).get('/api/users'), expect: everyone(200) },
   {
@@ -30,7 +108,7 @@ const cases: RouteCase[] = [
       request(app)
         .post('/api/users')
         .send({ email: `new-${unique()}@test.example`, name: 'New Person', role: actor === 'shopAdmin' ? 'estimator' : 'buyer' }),
-    expect: { anonymous: 401, buyer: 403, purchasing: 403, printerAdmin: 201, estimator: 403, shopAdmin: 201 },
+    expect: admins(201),
   },
   {
     name: 'PATCH /api/users/:id',
@@ -38,18 +116,33 @@ const cases: RouteCase[] = [
       request(app)
         .patch(`/api/users/${actor === 'shopAdmin' || actor === 'estimator' ? w.users.estimator.id : w.users.purchasing.id}`)
         .send({ role: actor === 'shopAdmin' || actor === 'estimator' ? 'estimator' : 'purchasing' }),
-    expect: { anonymous: 401, buyer: 403, purchasing: 403, printerAdmin: 200, estimator: 403, shopAdmin: 200 },
+    expect: admins(200),
+  },
+
+  // Invitations: the link's token is the invitee's only credential, so preview and accept are public.
+  { name: 'GET /api/invitations', send: () => request(app).get('/api/invitations'), expect: admins(200) },
+  {
+    name: 'GET /api/invitations/preview',
+    send: (w) => request(app).get('/api/invitations/preview').query({ token: fx(w).previewToken }),
+    expect: everyone(200, 200),
   },
   {
-    name: 'GET /api/invitations',
-    send: () => request(app).get('/api/invitations'),
-    expect: { anonymous: 401, buyer: 403, purchasing: 403, printerAdmin: 200, estimator: 403, shopAdmin: 200 },
+    name: 'POST /api/invitations/accept',
+    send: (w, actor) => request(app).post('/api/invitations/accept').send({ token: fx(w).acceptToken[actor], password: 'a long enough password' }),
+    expect: everyone(201, 201),
   },
   {
-    name: 'GET /api/presses',
-    send: () => request(app).get('/api/presses'),
-    expect: { anonymous: 401, buyer: 200, purchasing: 200, printerAdmin: 200, estimator: 403, shopAdmin: 403 },
+    name: 'POST /api/invitations/:id/resend (an invitation of the caller’s organisation)',
+    send: (w, actor) => request(app).post(`/api/invitations/${fx(w).toResend[actor]}/resend`),
+    expect: admins(200),
   },
+  {
+    name: 'POST /api/invitations/:id/revoke (an invitation of the caller’s organisation)',
+    send: (w, actor) => request(app).post(`/api/invitations/${fx(w).toRevoke[actor]}/revoke`),
+    expect: admins(200),
+  },
+
+  { name: 'GET /api/presses', send: () => request(app).get('/api/presses'), expect: printers(200) },
   {
     name: 'POST /api/presses',
     send: () =>
@@ -61,86 +154,281 @@ const cases: RouteCase[] = [
         typicalSpeedSph: 4000,
         maxSpeedSph: 5000,
       }),
-    expect: { anonymous: 401, buyer: 403, purchasing: 403, printerAdmin: 201, estimator: 403, shopAdmin: 403 },
+    expect: printers(201, { buyer: 403, purchasing: 403 }),
   },
   {
     name: 'PATCH /api/presses/:id',
-    send: (w) => request(app).patch(`/api/presses/${pressIds.get(w)}`).send({ typicalSpeedSph: 3500 }),
-    expect: { anonymous: 401, buyer: 403, purchasing: 403, printerAdmin: 200, estimator: 403, shopAdmin: 403 },
+    send: (w) => request(app).patch(`/api/presses/${fx(w).press}`).send({ typicalSpeedSph: 3500 }),
+    expect: printers(200, { buyer: 403, purchasing: 403 }),
   },
+
   { name: 'GET /api/me/dashboard', send: () => request(app).get('/api/me/dashboard'), expect: everyone(200) },
   { name: 'GET /api/me/preferences', send: () => request(app).get('/api/me/preferences'), expect: everyone(200) },
+  { name: 'PUT /api/me/preferences', send: () => request(app).put('/api/me/preferences').send({ email: { bids_ready: false } }), expect: everyone(200) },
   { name: 'GET /api/notifications', send: () => request(app).get('/api/notifications'), expect: everyone(200) },
+  {
+    name: 'POST /api/notifications/:id/read (the caller’s own notice)',
+    send: (w, actor) => request(app).post(`/api/notifications/${fx(w).notice[actor]}/read`),
+    expect: everyone(204),
+  },
+  { name: 'POST /api/notifications/read-all', send: () => request(app).post('/api/notifications/read-all'), expect: everyone(204) },
+
+  // The die library.
   { name: 'GET /api/library', send: () => request(app).get('/api/library'), expect: everyone(200) },
   {
-    name: 'GET /api/requests',
-    send: () => request(app).get('/api/requests'),
-    expect: { anonymous: 401, buyer: 200, purchasing: 200, printerAdmin: 200, estimator: 403, shopAdmin: 403 },
-  },
-  {
-    name: 'POST /api/requests',
-    send: () => request(app).post('/api/requests').send({ title: `Access ${unique()}`, quantity: 1, ups: 1, ruleTypes: ['cut'] }),
-    expect: { anonymous: 401, buyer: 201, purchasing: 201, printerAdmin: 201, estimator: 403, shopAdmin: 403 },
-  },
-  {
-    name: 'GET /api/requests/:id',
-    send: (w) => request(app).get(`/api/requests/${openIds.get(w)}`),
+    name: 'GET /api/library/:id (a die shop’s listed stock die)',
+    send: (w) => request(app).get(`/api/library/${fx(w).stockDie}`),
     expect: everyone(200),
   },
   {
+    name: 'GET /api/library/:id (a printer’s own die: another organisation’s record)',
+    send: (w) => request(app).get(`/api/library/${fx(w).printerDie}`),
+    expect: printers(200, { estimator: 404, shopAdmin: 404 }),
+  },
+  {
+    name: 'PATCH /api/library/:id (a die of the caller’s organisation)',
+    send: (w, actor) => request(app).patch(`/api/library/${fx(w).ownDie[actor]}`).send({ storageLocation: 'Rack B4' }),
+    expect: everyone(200),
+  },
+  {
+    name: 'POST /api/library/:id/runs',
+    send: (w) => request(app).post(`/api/library/${fx(w).printerDie}/runs`).send({ runOn: inDays(-1), impressions: 1_200 }),
+    expect: printers(201),
+  },
+
+  // Die requests.
+  { name: 'GET /api/requests', send: () => request(app).get('/api/requests'), expect: printers(200) },
+  {
+    name: 'POST /api/requests',
+    send: () => request(app).post('/api/requests').send({ title: `Access ${unique()}`, quantity: 1, ups: 1, ruleTypes: ['cut'] }),
+    expect: printers(201),
+  },
+  {
+    name: 'GET /api/requests/:id',
+    send: (w) => request(app).get(`/api/requests/${fx(w).open}`),
+    expect: everyone(200),
+  },
+  {
+    name: 'PATCH /api/requests/:id',
+    send: (w) => request(app).patch(`/api/requests/${fx(w).draft}`).send({ notes: 'Nicks on the long sides only.' }),
+    expect: printers(200),
+  },
+  { name: 'POST /api/requests/:id/publish', send: (w, actor) => request(app).post(`/api/requests/${fx(w).toPublish[actor]}/publish`), expect: printers(200) },
+  {
+    name: 'POST /api/requests/:id/cancel',
+    send: (w, actor) => request(app).post(`/api/requests/${fx(w).toCancel[actor]}/cancel`).send({ reason: 'The job moved to next quarter.' }),
+    expect: printers(200),
+  },
+  {
+    name: 'POST /api/requests/:id/files',
+    send: (w) => request(app).post(`/api/requests/${fx(w).draft}/files`).attach('file', Buffer.from(rectangleSvg), 'label.svg'),
+    expect: printers(201),
+  },
+  { name: 'GET /api/requests/:id/fair-price', send: (w) => request(app).get(`/api/requests/${fx(w).open}/fair-price`), expect: printers(200) },
+  { name: 'GET /api/requests/:id/library-matches', send: (w) => request(app).get(`/api/requests/${fx(w).open}/library-matches`), expect: printers(200) },
+  {
+    name: 'POST /api/requests/:id/questions',
+    send: (w) => request(app).post(`/api/requests/${fx(w).open}/questions`).send({ question: 'Does the grain run across the tuck flap?' }),
+    expect: shops(201),
+  },
+  {
+    name: 'POST /api/requests/:id/questions/:questionId/answer',
+    send: (w) => request(app).post(`/api/requests/${fx(w).open}/questions/${fx(w).question}/answer`).send({ answer: 'Yes, across the flap.' }),
+    expect: printers(200),
+  },
+
+  // Dieline files.
+  { name: 'GET /api/files/:id (on an open request)', send: (w) => request(app).get(`/api/files/${fx(w).openFile}`), expect: everyone(200) },
+  {
+    name: 'GET /api/files/:id (on a draft: another organisation’s record)',
+    send: (w) => request(app).get(`/api/files/${fx(w).draftFile}`),
+    expect: printers(200, { estimator: 404, shopAdmin: 404 }),
+  },
+  { name: 'GET /api/files/:id/preview', send: (w) => request(app).get(`/api/files/${fx(w).openFile}/preview`), expect: everyone(200) },
+  { name: 'GET /api/files/:id/download', send: (w) => request(app).get(`/api/files/${fx(w).openFile}/download`), expect: everyone(200) },
+  { name: 'POST /api/files/:id/primary', send: (w) => request(app).post(`/api/files/${fx(w).draftFile}/primary`), expect: printers(200) },
+  {
+    name: 'PUT /api/files/:id/layers',
+    send: (w) => request(app).put(`/api/files/${fx(w).draftFile}/layers`).send({ layerMap: { cut: 'cut' } }),
+    expect: printers(200),
+  },
+  { name: 'DELETE /api/files/:id', send: (w, actor) => request(app).delete(`/api/files/${fx(w).toDelete[actor]}`), expect: printers(204) },
+
+  // The die shops' board, bids, the award and the die's way back.
+  { name: 'GET /api/marketplace/requests', send: () => request(app).get('/api/marketplace/requests'), expect: shops(200) },
+  { name: 'GET /api/die-shops', send: () => request(app).get('/api/die-shops'), expect: printers(200) },
+  { name: 'GET /api/estimate-aid', send: () => request(app).get('/api/estimate-aid'), expect: shops(200) },
+  {
+    name: 'POST /api/requests/:id/bids',
+    send: (w, actor) => request(app).post(`/api/requests/${fx(w).toBidOn[actor]}/bids`).send(bidBody(75_000)),
+    expect: shops(201),
+  },
+  { name: 'GET /api/requests/:id/my-bid', send: (w) => request(app).get(`/api/requests/${fx(w).bid.id}/my-bid`), expect: shops(200) },
+  {
+    name: 'POST /api/requests/:id/decline',
+    send: (w) => request(app).post(`/api/requests/${fx(w).open}/decline`).send({ reason: 'No laser time this month.' }),
+    expect: shops(204),
+  },
+  { name: 'PATCH /api/bids/:id', send: (w) => request(app).patch(`/api/bids/${fx(w).bid.bidId}`).send(bidBody(78_000)), expect: shops(200) },
+  { name: 'POST /api/bids/:id/withdraw', send: (w, actor) => request(app).post(`/api/bids/${fx(w).toWithdraw[actor]}/withdraw`), expect: shops(200) },
+  {
     name: 'GET /api/requests/:id/bids (sealed until the deadline)',
-    send: (w) => request(app).get(`/api/requests/${openIds.get(w)}/bids`),
-    expect: { anonymous: 401, buyer: 404, purchasing: 404, printerAdmin: 404, estimator: 403, shopAdmin: 403 },
+    send: (w) => request(app).get(`/api/requests/${fx(w).open}/bids`),
+    expect: printers(404),
   },
+  { name: 'GET /api/requests/:id/bids (opened once bidding closed)', send: (w) => request(app).get(`/api/requests/${fx(w).awarded.id}/bids`), expect: printers(200) },
   {
-    name: 'GET /api/marketplace/requests',
-    send: () => request(app).get('/api/marketplace/requests'),
-    expect: { anonymous: 401, buyer: 403, purchasing: 403, printerAdmin: 403, estimator: 200, shopAdmin: 200 },
-  },
-  {
-    name: 'GET /api/die-shops',
-    send: () => request(app).get('/api/die-shops'),
-    expect: { anonymous: 401, buyer: 200, purchasing: 200, printerAdmin: 200, estimator: 403, shopAdmin: 403 },
-  },
-  {
-    name: 'GET /api/price-history',
-    send: () => request(app).get('/api/price-history'),
-    expect: { anonymous: 401, buyer: 200, purchasing: 200, printerAdmin: 200, estimator: 403, shopAdmin: 403 },
-  },
-  {
-    name: 'GET /api/estimate-aid',
-    send: () => request(app).get('/api/estimate-aid'),
-    expect: { anonymous: 401, buyer: 403, purchasing: 403, printerAdmin: 403, estimator: 200, shopAdmin: 200 },
+    name: 'POST /api/requests/:id/close-bidding',
+    send: (w, actor) => request(app).post(`/api/requests/${fx(w).toClose[actor]}/close-bidding`),
+    expect: printers(200, { buyer: 403 }),
   },
   {
     name: 'POST /api/requests/:id/award (bids still sealed)',
-    send: (w) => request(app).post(`/api/requests/${openIds.get(w)}/award`).send({ bidId: 1 }),
-    expect: { anonymous: 401, buyer: 403, purchasing: 409, printerAdmin: 409, estimator: 403, shopAdmin: 403 },
+    send: (w) => request(app).post(`/api/requests/${fx(w).open}/award`).send({ bidId: 1 }),
+    expect: printers(409, { buyer: 403 }),
   },
   {
-    name: 'POST /api/auth/logout',
-    send: () => request(app).post('/api/auth/logout'),
-    expect: everyone(204),
+    name: 'POST /api/requests/:id/award (bidding closed)',
+    send: (w, actor) => request(app).post(`/api/requests/${fx(w).toAward[actor].id}/award`).send({ bidId: fx(w).toAward[actor].bidId }),
+    expect: printers(200, { buyer: 403 }),
   },
+  { name: 'GET /api/requests/:id/ocds', send: (w) => request(app).get(`/api/requests/${fx(w).awarded.id}/ocds`), expect: printers(200) },
+  {
+    name: 'GET /api/purchase-orders/:id/pdf (the issuing printer and the awarded shop)',
+    send: (w) => request(app).get(`/api/purchase-orders/${fx(w).awarded.awardId}/pdf`),
+    expect: everyone(200),
+  },
+  {
+    name: 'POST /api/requests/:id/start-production',
+    send: (w, actor) => request(app).post(`/api/requests/${fx(w).toStart[actor]}/start-production`),
+    expect: shops(200),
+  },
+  {
+    name: 'POST /api/requests/:id/ship',
+    send: (w, actor) => request(app).post(`/api/requests/${fx(w).toShip[actor]}/ship`).send({ trackingNote: 'Ground parcel, tracking 1Z-TEST-0002' }),
+    expect: shops(200),
+  },
+  {
+    name: 'POST /api/requests/:id/receive',
+    send: (w, actor) => request(app).post(`/api/requests/${fx(w).toReceive[actor]}/receive`).send({ condition: 'good' }),
+    expect: printers(200),
+  },
+
+  // The printer's price history: every printer role reads it; purchasing and admins import.
+  { name: 'GET /api/price-history', send: () => request(app).get('/api/price-history'), expect: printers(200) },
+  { name: 'GET /api/price-history/export.csv', send: () => request(app).get('/api/price-history/export.csv'), expect: printers(200) },
+  { name: 'GET /api/price-history/fit', send: () => request(app).get('/api/price-history/fit'), expect: printers(200) },
+  {
+    name: 'POST /api/price-history/import/preview',
+    send: () => request(app).post('/api/price-history/import/preview').attach('file', Buffer.from(priceCsv), 'history.csv'),
+    expect: printers(200, { buyer: 403 }),
+  },
+  {
+    name: 'POST /api/price-history/import',
+    send: () =>
+      request(app).post('/api/price-history/import').attach('file', Buffer.from(priceCsv), 'history.csv').field('mapping', JSON.stringify(priceMapping)),
+    expect: printers(201, { buyer: 403 }),
+  },
+
+  { name: 'POST /api/auth/logout', send: () => request(app).post('/api/auth/logout'), expect: everyone(204), ownWorld: true },
 ];
 
-const pressIds = new WeakMap<World, number>();
-const openIds = new WeakMap<World, number>();
+/**
+ * A target of its own for each actor in `who`, for a route that changes what it acts on, so that
+ * one actor's success is not what the next one finds; the other actors, whom the route refuses
+ * before it reads the target, share one more.
+ */
+async function oneEach<T>(who: Actor[], make: () => Promise<T>): Promise<ForEach<T>> {
+  const [rest, ...own] = await Promise.all([make(), ...who.map(() => make())]);
+  return Object.fromEntries(actors.map((actor) => [actor, who.includes(actor) ? own[who.indexOf(actor)] : rest])) as ForEach<T>;
+}
+
+/** One of `make`'s for each actor. */
+async function perActor<T>(make: (actor: Actor) => Promise<T>): Promise<ForEach<T>> {
+  return Object.fromEntries(await Promise.all(actors.map(async (actor) => [actor, await make(actor)]))) as ForEach<T>;
+}
+
+/** The printer's thing for the printer's people (and anonymous), the shop's for the shop's. */
+const bySide = <T>(printer: T, shop: T): ForEach<T> =>
+  Object.fromEntries(actors.map((actor) => [actor, shopSide.includes(actor) ? shop : printer])) as ForEach<T>;
+
+/** An invitation from the organisation's admin, made in the database so that the test holds its link's token. */
+async function invite(org: Organisation, admin: User) {
+  const { token, hash } = newToken();
+  const row = await Invitation.query().insertAndFetch({
+    organisationId: org.id,
+    email: `invitee-${unique()}@test.example`,
+    name: 'Invited Person',
+    role: org.kind === 'printer' ? 'buyer' : 'estimator',
+    tokenHash: hash,
+    invitedBy: admin.id,
+    expiresAt: new Date(Date.now() + 86_400_000),
+  });
+  return { id: row.id, token };
+}
+
+async function libraryDie(org: Organisation, listed = false): Promise<number> {
+  const [row] = await knex('libraryDies').insert({ organisationId: org.id, name: `Die ${unique()}`, ups: 1, ruleTypes: ['cut'], listed }).returning('id');
+  return row.id;
+}
+
+async function notice(user: User): Promise<number> {
+  return (await Notification.query().insertAndFetch({ userId: user.id, kind: 'bids_ready', title: 'Bids ready to compare', body: 'A test notice.', link: null })).id;
+}
+
+async function setUp(w: World): Promise<Fixtures> {
+  const { printer, shop, users } = w;
+  const open = (await createOpenRequest(w)).id;
+  const openFile = (await DielineFile.query().findOne({ requestId: open }).throwIfNotFound()).id;
+  const question = (await callAs(w, 'estimator', 'post', `/api/requests/${open}/questions`, { question: 'Are the nicks marked?' }, 201)).id;
+  const draft = (await callAs(w, 'buyer', 'post', '/api/requests', { title: `Draft ${unique()}`, quantity: 1, ups: 1, ruleTypes: ['cut'] }, 201)).id;
+  const draftFile = await addDieline(w, draft);
+  const printerDie = await libraryDie(printer);
+  const shopDie = await libraryDie(shop, true);
+  const preview = await invite(printer, users.printerAdmin);
+  const invitationEachSide = async () => bySide((await invite(printer, users.printerAdmin)).id, (await invite(shop, users.shopAdmin)).id);
+  return {
+    press: (await createPress(printer)).id,
+    open,
+    openFile,
+    question,
+    draft,
+    draftFile,
+    bid: await createRequestAt(w, 'bid'),
+    awarded: await createRequestAt(w, 'awarded'),
+    stockDie: shopDie,
+    printerDie,
+    ownDie: bySide(printerDie, shopDie),
+    notice: await perActor((actor) => notice(users[member(actor)])),
+    toResend: await invitationEachSide(),
+    toRevoke: await invitationEachSide(),
+    previewToken: preview.token,
+    acceptToken: await perActor(async () => (await invite(printer, users.printerAdmin)).token),
+    toDelete: await oneEach(printerSide, () => addDieline(w, draft)),
+    toPublish: await oneEach(printerSide, () => createReadyDraft(w)),
+    toCancel: await oneEach(printerSide, async () => (await createOpenRequest(w)).id),
+    toClose: await oneEach(printerSide, async () => (await createOpenRequest(w)).id),
+    toBidOn: await oneEach(shopSide, async () => (await createOpenRequest(w)).id),
+    toWithdraw: await oneEach(shopSide, async () => (await createRequestAt(w, 'bid')).bidId),
+    toAward: await oneEach(printerSide, () => createRequestAt(w, 'bidding_closed')),
+    toStart: await oneEach(shopSide, async () => (await createRequestAt(w, 'awarded')).id),
+    toShip: await oneEach(shopSide, async () => (await createRequestAt(w, 'in_production')).id),
+    toReceive: await oneEach(printerSide, async () => (await createRequestAt(w, 'shipped')).id),
+  };
+}
+
 let world: World;
 
 beforeAll(async () => {
   world = await createWorld();
-  pressIds.set(world, (await createPress(world.printer)).id);
-  openIds.set(world, (await createOpenRequest(world)).id);
+  fixtures.set(world, await setUp(world));
 });
 
 describe('role-by-route access', () => {
-  const actors: Actor[] = ['anonymous', 'buyer', 'purchasing', 'printerAdmin', 'estimator', 'shopAdmin'];
   for (const route of cases) {
     for (const actor of actors) {
       it(`${route.name} as ${actor} → ${route.expect[actor]}`, async () => {
-        // Sign-out revokes the token, so that case gets a fresh world of its own.
-        const w = route.name.includes('logout') ? await createWorld() : world;
+        const w = route.ownWorld ? await createWorld() : world;
         let req = route.send(w, actor);
         if (actor !== 'anonymous') req = req.set('Authorization', `Bearer ${w.tokens[actor]}`);
         const res = await req;
