@@ -5,6 +5,7 @@ import { DielineFile, Invitation, Notification, type Organisation, type User } f
 import { bidBody, inDays, rectangleSvg } from '../test/fixtures';
 import { app, createOpenRequest, createPress, createWorld, knex, PASSWORD, unique, type World } from '../test/harness';
 import { addDieline, callAs, createReadyDraft, createRequestAt, type StagedRequest } from '../test/requestStages';
+import { routeList } from '../test/routeList';
 
 type Actor = 'anonymous' | 'buyer' | 'purchasing' | 'printerAdmin' | 'estimator' | 'shopAdmin';
 type ForEach<T> = Record<Actor, T>;
@@ -437,4 +438,19 @@ describe('role-by-route access', () => {
       });
     }
   }
+});
+
+describe('the matrix itself', () => {
+  // A case covers a route when its name is the route, alone or followed by a space and a note.
+  const covers = (name: string, route: string) => name === route || name.startsWith(`${route} `);
+
+  it('has a case for every route the app answers', () => {
+    const uncovered = routeList(app).filter((route) => !cases.some((c) => covers(c.name, route)));
+    expect(uncovered, 'routes without a case').toEqual([]);
+  });
+
+  it('names only routes the app answers', () => {
+    const routes = routeList(app);
+    expect(cases.map((c) => c.name).filter((name) => !routes.some((route) => covers(name, route))), 'cases naming no route').toEqual([]);
+  });
 });
