@@ -202,19 +202,36 @@ describe('award', () => {
     expect(await knex('awards').where({ requestId: open.id }).count('* as n')).toEqual([{ n: 1 }]);
   });
 
-  it('loses and duplicates nothing when many shops bid at once', async () => {
+  it('loses and duplicates nothing when 50 shops bid and revise at once', async () => {
     const open = await createOpenRequest(w);
-    const shops = await Promise.all(Array.from({ length: 12 }, () => createShop()));
-    const results = await Promise.all(
-      shops.flatMap((s, i) => [
-        request(app).post(`/api/requests/${open.id}/bids`).set(bearer(s.token)).send(bidBody(60_000 + i)),
-        request(app).post(`/api/requests/${open.id}/bids`).set(bearer(s.token)).send(bidBody(61_000 + i)),
+    const shops = await Promise.all(Array.from({ length: 50 }, () => createShop()));
+    // Half the shops have bid already and revise; the other half send their first bid twice at once.
+    const [revising, newcomers] = [shops.slice(0, 25), shops.slice(25)];
+    const first = await Promise.all(revising.map((s, i) => request(app).post(`/api/requests/${open.id}/bids`).set(bearer(s.token)).send(bidBody(60_000 + i))));
+    expect(first.map((r) => r.status)).toEqual(Array(25).fill(201));
+    const results = await Promise.all([
+      ...revising.map((s, i) => request(app).patch(`/api/bids/${first[i]!.body.id}`).set(bearer(s.token)).send(bidBody(50_000 + i))),
+      ...newcomers.flatMap((s, i) => [
+        request(app).post(`/api/requests/${open.id}/bids`).set(bearer(s.token)).send(bidBody(70_000 + i)),
+        request(app).post(`/api/requests/${open.id}/bids`).set(bearer(s.token)).send(bidBody(71_000 + i)),
       ]),
-    );
-    expect(results.filter((r) => r.status === 201)).toHaveLength(12);
-    expect(results.filter((r) => r.status === 409)).toHaveLength(12);
+    ]);
+    expect(results.slice(0, 25).map((r) => r.status)).toEqual(Array(25).fill(200));
+    const sent = results.slice(25);
+    expect(sent.filter((r) => r.status === 201)).toHaveLength(25);
+    expect(sent.filter((r) => r.status === 409)).toHaveLength(25);
+
+    // One bid per shop; each revision saved as the bid and kept in its history (bidBody adds 3,500 cents).
     const rows = await knex('bids').where({ requestId: open.id });
-    expect(new Set(rows.map((r) => r.shopId)).size).toBe(12);
+    expect(rows).toHaveLength(50);
+    expect(new Set(rows.map((r) => r.shopId)).size).toBe(50);
+    const byShop = new Map(rows.map((r) => [r.shopId, r]));
+    revising.forEach((s, i) => expect(byShop.get(s.shop.id)).toMatchObject({ revision: 2, totalCents: 53_500 + i }));
+    // A newcomer's one bid is whichever of its two arrived first.
+    newcomers.forEach((s, i) => expect([73_500 + i, 74_500 + i]).toContain(byShop.get(s.shop.id)!.totalCents));
+    const history = await knex('bidRevisions').whereIn('bidId', rows.map((r) => r.id)).select('bidId').count('* as n').groupBy('bidId');
+    const counts = new Map(history.map((h) => [h.bidId as number, Number(h.n)]));
+    for (const row of rows) expect(counts.get(row.id)).toBe(row.revision);
   });
 });
 
