@@ -188,6 +188,24 @@ describe('readDxf bad input', () => {
     );
   });
 
+  // A file of a few kilobytes can stand for millions of entities through blocks inserted in
+  // blocks: 1,000 tiny lines in a block, inserted 1,000 times in a block, inserted 1,000 times
+  // (a thousand million lines). The count is kept while expanding, so the default limit stops it
+  // at once instead of after building them all (were it not, this test would run out of time).
+  it('refuses millions of tiny entities hidden in nested blocks, at the default limit', () => {
+    const inserts = (block: string) => Array.from({ length: 1000 }, (_, i) => d.insert('0', block, i * 0.001, 0));
+    const file = d.dxf([d.insert('CUT', 'BIG', 0, 0)], {
+      insunits: 1,
+      blocks: [
+        { name: 'DUST', entities: Array.from({ length: 1000 }, (_, i) => d.line('0', i * 0.001, 0, i * 0.001 + 0.0005, 0)) },
+        { name: 'MID', entities: inserts('DUST') },
+        { name: 'BIG', entities: inserts('MID') },
+      ],
+    });
+    expect(file.length).toBeLessThan(200_000);
+    expect(fail(file)).toMatch(/^TOO_MANY_ENTITIES: The drawing has more than 200000 entities \(after expanding blocks\)/);
+  });
+
   it('skips a broken entity with a warning and keeps the rest', () => {
     const file = d.dxf([d.line('CUT', 0, 0, 1, 0), d.spline('CUT', 3, [0, 1], [[0, 0], [1, 1], [2, 0], [3, 1]])], { insunits: 1 });
     const m = analyseDieline(file).metrics;
