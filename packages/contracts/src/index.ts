@@ -11,3 +11,4 @@ export * from './bids';
 export * from './notifications';
 export * from './priceHistory';
 export * from './library';
+export * from './pricedLength';

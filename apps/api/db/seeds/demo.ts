@@ -3,6 +3,7 @@ import { createHash } from 'node:crypto';
 import type { Knex } from 'knex';
 import bcrypt from 'bcryptjs';
 import { analyseDieline } from '@kerfmark/dieline';
+import { pricedLength } from '@kerfmark/contracts';
 import { addWorkingDays } from '@kerfmark/pricing';
 import type { Storage } from '@kerfmark/storage';
 import { doorHanger, labelSheet, tuckEndCarton } from './demoDielines';
@@ -263,7 +264,7 @@ async function seedHistory(knex: Knex): Promise<void> {
     });
     await knex('priceRecords').insert({
       organisationId: org.id, requestId, awardId, shopId: shop.id, shopName: shop.name, totalCents: total, dieCents: past.dieCents, currency: 'USD', pricedOn: day(awardedAt),
-      ruleLengthIn: metrics.length.total - metrics.length.other, cutIn: metrics.length.cut, creaseIn: metrics.length.crease, perfIn: metrics.length.perf, kissIn: metrics.length.kiss,
+      ruleLengthIn: pricedLength(metrics.length), cutIn: metrics.length.cut, creaseIn: metrics.length.crease, perfIn: metrics.length.perf, kissIn: metrics.length.kiss,
       bends: metrics.bends, curves: metrics.curves, joints: metrics.joints, punches: metrics.punches, boardAreaSqIn: metrics.board.width * metrics.board.height, complexity: metrics.complexity,
     });
   }

@@ -1,5 +1,5 @@
 import { formatMoney } from '@kerfmark/pricing';
-import type { DielineMetrics } from '@kerfmark/contracts';
+import { pricedLength, type DielineMetrics } from '@kerfmark/contracts';
 import type { Knex } from 'knex';
 import type { AuthUser } from '../auth/passport';
 import { badRequest, conflict, HttpError, notFound } from '../lib/httpError';
@@ -172,7 +172,7 @@ export function createAwardService(
         },
         supplier: { organisation: shop.name, postcode: shop.postcode },
         request: { id: request.id, title: request.title, jobReference: request.jobReference, needByDate: request.needByDate, quantity: request.quantity, ups: request.ups },
-        dieline: file && metrics ? { fileName: file.fileName, totalRuleIn: metrics.length.total - metrics.length.other, complexity: metrics.complexity } : null,
+        dieline: file && metrics ? { fileName: file.fileName, totalRuleIn: pricedLength(metrics.length), complexity: metrics.complexity } : null,
         lines: (bid?.lines ?? []).map((l) => ({ kind: l.kind, description: l.description, amountCents: l.amountCents })),
         totalCents: award.totalCents,
         currency: award.currency,
@@ -282,7 +282,7 @@ export function createAwardService(
             dieCents: award.dieCents,
             currency: award.currency,
             pricedOn: todayIn(actor.timeZone, award.awardedAt),
-            ruleLengthIn: metrics.length.total - metrics.length.other,
+            ruleLengthIn: pricedLength(metrics.length),
             cutIn: metrics.length.cut,
             creaseIn: metrics.length.crease,
             perfIn: metrics.length.perf,

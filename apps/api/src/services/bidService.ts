@@ -1,5 +1,6 @@
 import {
   formatInZone,
+  pricedLength,
   type BidComparisonDto,
   type BidDto,
   type DielineMetrics,
@@ -196,7 +197,7 @@ export function createBidService(
         throw new HttpError(404, 'bids_sealed', 'Bids stay sealed until the bid deadline, unless purchasing closes bidding early.');
       }
       const metrics = primaryFile(request.files)?.metrics as DielineMetrics | null | undefined;
-      const ruleLengthIn = metrics ? metrics.length.total - metrics.length.other : null;
+      const ruleLengthIn = metrics ? pricedLength(metrics.length) : null;
       const rows = compareBids(
         bids.map((b) => ({ ...b, bidId: b.id })),
         { ruleLengthIn, needByDate: request.needByDate, today: todayIn(actor.timeZone) },

@@ -16,7 +16,7 @@ import {
   priceTrend,
   type PriceObservation,
 } from '@kerfmark/pricing';
-import type { DielineMetrics } from '@kerfmark/contracts';
+import { pricedLength, type DielineMetrics } from '@kerfmark/contracts';
 import { DieRequest } from '../models';
 import { notFound } from '../lib/httpError';
 import { primaryFile } from './requestViews';
@@ -119,7 +119,7 @@ export function createPriceHistoryService({ knex }: ServiceDeps) {
     if (!metrics) return { enough: false as const, reason: 'The request has no measured dieline yet.', needed: 0 };
     const fit = await historyFit(organisationId, currency);
     if (!fit.enough) return fit;
-    const die = { ruleLengthIn: metrics.length.total - metrics.length.other, features: metrics.bends + metrics.curves + metrics.joints + metrics.punches };
+    const die = { ruleLengthIn: pricedLength(metrics.length), features: metrics.bends + metrics.curves + metrics.joints + metrics.punches };
     if (!(die.ruleLengthIn > 0)) return { enough: false as const, reason: 'The dieline has no priced rule to price.', needed: 0 };
     return { enough: true as const, band: fairPriceBand(fit, die), die, model: fit.model, n: fit.n, describe: fit.describe };
   }
