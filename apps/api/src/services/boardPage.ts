@@ -3,6 +3,7 @@ import type { Knex } from 'knex';
 import type { z } from 'zod';
 import { containsPattern } from '../lib/containsPattern';
 import { DieRequest } from '../models';
+import { openToShop } from './openToShop';
 import { readRequestGraph } from './requestGraph';
 import { SUMMARY_COLUMNS } from './requestViews';
 
@@ -36,7 +37,7 @@ export async function boardPage(
     const query = knex('dieRequests as r')
       .where('r.status', 'open')
       .where('r.bidDeadline', '>', knex.fn.now())
-      .where((visible) => visible.where('r.visibility', 'public').orWhereIn('r.id', knex('requestInvitations').where({ shopId }).select('requestId')));
+      .where(openToShop(knex, shopId, 'r'));
     if (q.minIn !== undefined) query.where('r.measuredRuleIn', '>=', q.minIn);
     if (q.maxIn !== undefined) query.where('r.measuredRuleIn', '<=', q.maxIn);
     if (q.complexity) query.where('r.measuredComplexity', q.complexity);

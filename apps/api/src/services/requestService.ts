@@ -26,6 +26,7 @@ import { recordAudit } from './auditService';
 import type { ServiceDeps } from './deps';
 import { transitionRequest, allowedActions } from './requestStatus';
 import { boardPage } from './boardPage';
+import { openToShop } from './openToShop';
 import { readRequestGraph } from './requestGraph';
 import { primaryFile, toBidDto, toFileDto, toPressDto, toSummary } from './requestViews';
 import { containsPattern } from '../lib/containsPattern';
@@ -43,9 +44,7 @@ export function visibleToShop<Q extends QueryBuilder<DieRequest, any>>(query: Q,
       .where((open) =>
         open
           .whereIn('die_requests.status', [...SHOP_VISIBLE])
-          .where((q) =>
-            q.where('die_requests.visibility', 'public').orWhereExists(DieRequest.relatedQuery('invitedShops').where('invitedShops.id', shopId)),
-          ),
+          .where(openToShop(DieRequest.knex(), shopId)),
       )
       // A shop that bid keeps seeing the request, to learn the outcome.
       .orWhereExists(Bid.query().whereColumn('bids.requestId', 'die_requests.id').where('bids.shopId', shopId)),

@@ -1,0 +1,16 @@
+import type { Knex } from 'knex';
+
+/** Any query builder, Knex's or Objection's, as far as the condition below needs it. */
+interface Conditions {
+  where(column: string, value: unknown): Conditions;
+  orWhereIn(column: string, values: Knex.QueryBuilder): Conditions;
+}
+
+/**
+ * The condition that a request is open to this die shop: posted to every shop, or the shop was
+ * invited. For `.where(...)`; `table` names the requests' table or its alias in the query.
+ */
+export function openToShop(knex: Knex, shopId: number, table = 'die_requests') {
+  return (q: Conditions) =>
+    q.where(`${table}.visibility`, 'public').orWhereIn(`${table}.id`, knex('request_invitations').where('shop_id', shopId).select('request_id'));
+}
