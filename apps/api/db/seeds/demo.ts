@@ -155,6 +155,32 @@ const demoRequests: DemoRequest[] = [
 
 const atDays = (days: number) => new Date(Date.now() + days * 86_400_000);
 
+/** A demo dieline stored in S3 and recorded as the request's measured primary file. */
+async function storeDemoDieline(
+  knex: Knex,
+  storage: Storage,
+  file: { requestId: number; uploadedBy: number; fileName: string; content: string; metrics: unknown; preview: unknown; uploadedAt?: Date },
+): Promise<void> {
+  const s3Key = `requests/${file.requestId}/demo/${file.fileName}`;
+  await storage.put(s3Key, new TextEncoder().encode(file.content), 'application/dxf');
+  await knex('dielineFiles').insert({
+    requestId: file.requestId,
+    uploadedBy: file.uploadedBy,
+    fileName: file.fileName,
+    format: 'dxf',
+    contentType: 'application/dxf',
+    byteSize: Buffer.byteLength(file.content),
+    sha256: createHash('sha256').update(file.content).digest('hex'),
+    s3Key,
+    isPrimary: true,
+    analysisStatus: 'done',
+    metrics: JSON.stringify(file.metrics),
+    preview: JSON.stringify(file.preview),
+    analysedAt: file.uploadedAt ?? new Date(),
+    uploadedAt: file.uploadedAt ?? new Date(),
+  });
+}
+
 /** Demo requests with their dielines stored in S3 and measured, unless they are there already. */
 async function seedRequests(knex: Knex, storage: Storage): Promise<void> {
   for (const demo of demoRequests) {
@@ -186,23 +212,7 @@ async function seedRequests(knex: Knex, storage: Storage): Promise<void> {
       const shop = await knex('organisations').where({ name: shopName }).first();
       await knex('requestInvitations').insert({ requestId: id, shopId: shop.id });
     }
-    const s3Key = `requests/${id}/demo/${demo.dieline.name}`;
-    await storage.put(s3Key, new TextEncoder().encode(content), 'application/dxf');
-    await knex('dielineFiles').insert({
-      requestId: id,
-      uploadedBy: buyer.id,
-      fileName: demo.dieline.name,
-      format: 'dxf',
-      contentType: 'application/dxf',
-      byteSize: Buffer.byteLength(content),
-      sha256: createHash('sha256').update(content).digest('hex'),
-      s3Key,
-      isPrimary: true,
-      analysisStatus: 'done',
-      metrics: JSON.stringify(metrics),
-      preview: JSON.stringify(preview),
-      analysedAt: new Date(),
-    });
+    await storeDemoDieline(knex, storage, { requestId: id, uploadedBy: buyer.id, fileName: demo.dieline.name, content, metrics, preview });
     await knex('auditLog').insert({ organisationId: org.id, actorUserId: buyer.id, entity: 'die_request', entityId: id, action: 'created', detail: JSON.stringify({ demo: true }) });
   }
 }
@@ -224,7 +234,7 @@ const demoBids = [
   { jobReference: 'LPC-24117', shop: 'Cedar Bend Die Works', dieCents: 104_500, leadDays: 8 },
 ];
 
-async function seedHistory(knex: Knex): Promise<void> {
+async function seedHistory(knex: Knex, storage: Storage): Promise<void> {
   const org = await knex('organisations').where({ name: 'Larkspur Press & Carton' }).first();
   if (await knex('priceRecords').where({ organisationId: org.id }).first()) return;
   const purchasing = await knex('users').where({ organisationId: org.id, role: 'purchasing' }).first();
@@ -233,7 +243,8 @@ async function seedHistory(knex: Knex): Promise<void> {
   for (const [i, past] of pastDies.entries()) {
     const shop = await knex('organisations').where({ name: past.shop }).first();
     const estimator = await knex('users').where({ organisationId: shop.id, role: 'estimator' }).first();
-    const { metrics } = analyseDieline(past.dieline());
+    const content = past.dieline();
+    const { metrics, preview } = analyseDieline(content);
     const awardedAt = atDays(-past.monthsAgo * 30);
     const promised = atDays(-past.monthsAgo * 30 + 7);
     const total = past.dieCents + past.extrasCents;
@@ -247,6 +258,8 @@ async function seedHistory(knex: Knex): Promise<void> {
         createdAt: atDays(-past.monthsAgo * 30 - 12),
       })
       .returning('id');
+    const uploadedAt = atDays(-past.monthsAgo * 30 - 12);
+    await storeDemoDieline(knex, storage, { requestId, uploadedBy: purchasing.id, fileName: `${past.dieline.name.replace(/[A-Z]/g, (c) => `-${c.toLowerCase()}`)}.dxf`, content, metrics, preview, uploadedAt });
     const lines = [{ kind: 'die', description: 'Steel-rule die', amountCents: past.dieCents }, { kind: 'shipping', description: 'Ground', amountCents: past.extrasCents }];
     const [{ id: bidId }] = await knex('bids')
       .insert({ requestId, shopId: shop.id, status: 'submitted', revision: 1, lines: JSON.stringify(lines), currency: 'USD', totalCents: total, dieCents: past.dieCents, leadDays: 5, promisedShipDate: day(promised), validUntil: day(atDays(-past.monthsAgo * 30 + 30)), submittedAt: atDays(-past.monthsAgo * 30 - 5) })
@@ -260,7 +273,7 @@ async function seedHistory(knex: Knex): Promise<void> {
     await knex('libraryDies').insert({
       organisationId: org.id, name: `${past.title} (LPC-2${3100 + i})`, requestId, ups: 1, ruleTypes: ['cut', 'crease'], pressId: press.id,
       storageLocation: `Rack ${String.fromCharCode(65 + (i % 3))}-${10 + i}`, impressions: [182_000, 64_500, 12_000, 240_000, 31_000, 8_000][i] ?? 0,
-      impressionLimit: 250_000, lastUsedOn: day(atDays(-past.monthsAgo * 10)), metrics: JSON.stringify(metrics), preview: JSON.stringify(analyseDieline(past.dieline()).preview),
+      impressionLimit: 250_000, lastUsedOn: day(atDays(-past.monthsAgo * 10)), metrics: JSON.stringify(metrics), preview: JSON.stringify(preview),
     });
     await knex('priceRecords').insert({
       organisationId: org.id, requestId, awardId, shopId: shop.id, shopName: shop.name, totalCents: total, dieCents: past.dieCents, currency: 'USD', pricedOn: day(awardedAt),
@@ -330,6 +343,6 @@ export async function seedDemo(knex: Knex, opts: { storage?: Storage; bcryptRoun
   });
   if (opts.storage) {
     await seedRequests(knex, opts.storage);
-    await seedHistory(knex);
+    await seedHistory(knex, opts.storage);
   }
 }
