@@ -4,6 +4,7 @@ import { DieRequest } from '../models';
 import { errorsText, validateRelease } from '../test/ocdsValidator';
 import { app, createOpenRequest, createShop, createWorld, knex, waitForEmail, type World } from '../test/harness';
 import { inDays, bidBody } from '../test/fixtures';
+import { addDieline, createRequestAt } from '../test/requestStages';
 
 const bearer = (token: string) => ({ Authorization: `Bearer ${token}` });
 
@@ -244,5 +245,25 @@ describe('shop holidays', () => {
     await knex('shopHolidays').insert({ shopId: shop.shop.id, date: plain.body.promisedShipDate, name: 'Shop closed' });
     const revised = await request(app).patch(`/api/bids/${plain.body.id}`).set(bearer(shop.token)).send(bidBody(1000, { leadDays: 1 }));
     expect(revised.body.promisedShipDate > plain.body.promisedShipDate).toBe(true);
+  });
+});
+
+describe('what the award rests on', () => {
+  it('keeps the primary dieline once bidding has closed', async () => {
+    const staged = await createRequestAt(w, 'awarded');
+    const second = await addDieline(w, staged.id).catch((e: Error) => e.message);
+    // No file can be added after the award either, so the one already there is tried.
+    expect(second).toMatch(/409/);
+    const file = await knex('dielineFiles').where({ requestId: staged.id }).first();
+    const res = await request(app).post(`/api/files/${file.id}/primary`).set(bearer(w.tokens.buyer));
+    expect(res.status).toBe(409);
+    expect(res.body.error.message).toMatch(/primary file can be changed on a draft or an open request only/);
+  });
+
+  it('answers a shop asking for its bid on a request it may not see with a 404, not an empty answer', async () => {
+    const draft = await createOpenRequest(w);
+    await DieRequest.query().patch({ status: 'draft' }).findById(draft.id);
+    const res = await request(app).get(`/api/requests/${draft.id}/my-bid`).set(bearer(second.token));
+    expect(res.status).toBe(404);
   });
 });

@@ -174,6 +174,8 @@ export function createBidService(
 
     async mine(actor: AuthUser, requestId: number): Promise<BidDto | null> {
       if (actor.orgKind !== 'die_shop') return null;
+      // A request the shop may not see is the same 404 as everywhere else, not an empty answer.
+      await requests.findVisible(actor, requestId);
       const bid = await Bid.query().findOne({ requestId, shopId: actor.organisationId });
       return bid ? withRevisions(bid) : null;
     },

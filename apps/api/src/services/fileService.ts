@@ -130,7 +130,9 @@ export function createFileService(
     },
 
     async makePrimary(actor: AuthUser, fileId: number): Promise<DielineFileDto> {
-      const { file } = await ownedFile(actor, fileId);
+      const { file, request } = await ownedFile(actor, fileId);
+      // After bidding closes the primary file is what the bids, the award and the price record rest on.
+      if (!['draft', 'open'].includes(request.status)) throw conflict('The primary file can be changed on a draft or an open request only.');
       await knex.transaction(async (trx) => {
         await DielineFile.query(trx).patch({ isPrimary: false }).where({ requestId: file.requestId });
         await DielineFile.query(trx).patch({ isPrimary: true }).findById(file.id);
