@@ -45,6 +45,9 @@ export const InvitationAccept = z.object({
 });
 export type InvitationAccept = z.infer<typeof InvitationAccept>;
 
+/** The invitation link's token, which the accept page sends to show whose invitation it is. */
+export const InvitationPreviewQuery = InvitationAccept.pick({ token: true });
+
 /** What an invitee sees before choosing a password. */
 export const InvitationPreview = z.object({
   email: z.string(),

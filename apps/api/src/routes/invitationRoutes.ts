@@ -1,11 +1,8 @@
 import { Router, type RequestHandler } from 'express';
-import { z } from 'zod';
-import { InvitationAccept } from '@kerfmark/contracts';
+import { InvitationAccept, InvitationPreviewQuery } from '@kerfmark/contracts';
 import { parse, parseId } from '../lib/parse';
 import { allow } from '../middleware/allow';
 import type { Services } from '../services';
-
-const PreviewQuery = z.object({ token: z.string({ error: 'The invitation link is incomplete' }).min(20).max(200) });
 
 export function invitationRoutes(services: Services, requireAuth: RequestHandler): Router {
   const router = Router();
@@ -13,7 +10,7 @@ export function invitationRoutes(services: Services, requireAuth: RequestHandler
 
   // Public: the invitee has no account yet; the token is the credential.
   router.get('/preview', async (req, res) => {
-    const { token } = parse(PreviewQuery, req.query);
+    const { token } = parse(InvitationPreviewQuery, req.query);
     res.json(await services.invitations.preview(token));
   });
 
