@@ -49,6 +49,11 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
       res.status(400).json({ error: { code: 'malformed_json', message: 'The request body is not valid JSON.' } });
       return;
     }
+    // The router's own: a path parameter with a broken %-escape (e.g. /api/requests/%E0%A4%A).
+    if (error instanceof URIError && (error as { status?: number }).status === 400) {
+      res.status(400).json({ error: { code: 'bad_path', message: 'The address has a broken %-escape in it.', fields: { path: 'Not a valid address' } } });
+      return;
+    }
     if (isUnavailable(error)) {
       logger.warn({ err: error }, 'a backing service is unavailable');
       res

@@ -314,3 +314,16 @@ describe('fuzzing every route that takes input', () => {
     }
   }
 });
+
+// Inputs the fuzz run found answered 500, each now a clear 400 naming what is wrong.
+describe('inputs that once answered 500', () => {
+  const refused = async (res: request.Test, field: string) => {
+    const done = await res;
+    expect(done.status, JSON.stringify(done.body)).toBe(400);
+    expect(done.body.error.fields).toHaveProperty([field]);
+  };
+
+  it('a broken %-escape in a path parameter', async () => {
+    await refused(send('GET /api/requests/:id', { id: '%E0%A4%A' }), 'path');
+  });
+});
