@@ -326,4 +326,13 @@ describe('inputs that once answered 500', () => {
   it('a broken %-escape in a path parameter', async () => {
     await refused(send('GET /api/requests/:id', { id: '%E0%A4%A' }), 'path');
   });
+
+  it('a NUL character or half a character pair in text', async () => {
+    await refused(sendJson('POST /api/library/:id/runs', { id: f.libraryDie! }, { runOn: '2026-11-30', impressions: 1, jobReference: '\u0000' }), 'jobReference');
+    const line = { kind: 'die', amountCents: 1_000, description: 'a\ud800b' };
+    await refused(sendJson('PATCH /api/bids/:id', { id: f.revisableBid! }, bidBody(1_000, { lines: [line] })), 'lines.0.description');
+    await refused(sendJson('PUT /api/files/:id/layers', { id: f.file! }, { layerMap: { 'CUT\u0000': 'cut' } }), 'layerMap.CUT\u0000');
+    await refused(send('GET /api/requests').query({ q: '\u0000' }), 'q');
+    await refused(send('GET /api/price-history').query({ shop: '\u0000' }), 'shop');
+  });
 });
