@@ -1,3 +1,4 @@
+export * from './ids';
 export * from './roles';
 export * from './auth';
 export * from './users';

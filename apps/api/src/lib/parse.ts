@@ -1,5 +1,5 @@
 import type { z } from 'zod';
-import { fieldErrors } from '@kerfmark/contracts';
+import { fieldErrors, maxRecordId } from '@kerfmark/contracts';
 import { HttpError } from './httpError';
 
 // Half of a UTF-16 surrogate pair: no character at all, and PostgreSQL refuses it in JSON.
@@ -37,7 +37,7 @@ export function parse<S extends z.ZodType>(schema: S, input: unknown): z.output<
 /** Parses a route's numeric id; anything else is a plain 404, as for a missing record. */
 export function parseId(value: unknown, what = 'That record'): number {
   const id = Number(value);
-  if (!Number.isSafeInteger(id) || id <= 0 || id > 2_147_483_647) {
+  if (!Number.isSafeInteger(id) || id <= 0 || id > maxRecordId) {
     throw new HttpError(404, 'not_found', `${what} was not found.`);
   }
   return id;

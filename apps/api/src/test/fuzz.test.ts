@@ -335,4 +335,11 @@ describe('inputs that once answered 500', () => {
     await refused(send('GET /api/requests').query({ q: '\u0000' }), 'q');
     await refused(send('GET /api/price-history').query({ shop: '\u0000' }), 'shop');
   });
+
+  it('an id past the 4-byte id column', async () => {
+    await refused(sendJson('POST /api/requests', {}, { ...requestExample(), pressId: 2_147_483_648 }), 'pressId');
+    await refused(sendJson('POST /api/requests', {}, { ...requestExample(), invitedShopIds: [9_999_999_999_999] }), 'invitedShopIds.0');
+    await refused(sendJson('POST /api/requests/:id/award', { id: f.awardable! }, { bidId: 2_147_483_648 }), 'bidId');
+    await refused(send('GET /api/requests').query({ pressId: '2147483648' }), 'pressId');
+  });
 });
