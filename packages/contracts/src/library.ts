@@ -9,7 +9,7 @@ export const LibraryDieUpdate = z.object({
   condition: z.enum(dieConditions).optional(),
   impressionLimit: z.number().int().min(1).max(100_000_000).nullable().optional(),
   listed: z.boolean().optional(),
-});
+}).refine((v) => Object.keys(v).length > 0, { error: 'Nothing to change' });
 
 export const DieRunInput = z.object({
   runOn: z.iso.date({ error: 'Enter the date of the run' }),

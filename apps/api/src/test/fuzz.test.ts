@@ -342,4 +342,8 @@ describe('inputs that once answered 500', () => {
     await refused(sendJson('POST /api/requests/:id/award', { id: f.awardable! }, { bidId: 2_147_483_648 }), 'bidId');
     await refused(send('GET /api/requests').query({ pressId: '2147483648' }), 'pressId');
   });
+
+  it('a library die changed with nothing to change', async () => {
+    await refused(sendJson('PATCH /api/library/:id', { id: f.libraryDie! }, {}), '_');
+  });
 });
