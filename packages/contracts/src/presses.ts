@@ -12,7 +12,8 @@ export const pressKindLabels: Record<PressKind, string> = {
 
 const SheetSide = z
   .number({ error: 'Enter a size in inches' })
-  .positive('A sheet side must be more than 0 in')
+  // Stored to the hundredth of an inch: a side under 1 in is no press, and 1e-300 would be stored as 0.
+  .min(1, 'A sheet side is at least 1 in')
   .max(120, 'A sheet side is at most 120 in');
 
 // Common practice: die-cutting presses run a few thousand sheets an hour, up to about 7,800 on a

@@ -40,6 +40,13 @@ describe('presses', () => {
       ['kind', 'maxSheetLengthIn', 'maxSheetWidthIn', 'maxSpeedSph', 'name', 'typicalSpeedSph'].sort(),
     );
     expect(res.body.error.message).toContain('name');
+    // A side too small to store to the hundredth of an inch is refused, not saved as 0.
+    const tiny = await request(app)
+      .post('/api/presses')
+      .set('Authorization', `Bearer ${tokens.printerAdmin}`)
+      .send({ name: 'Tiny', kind: 'platen', maxSheetWidthIn: 1e-300, maxSheetLengthIn: 30, typicalSpeedSph: 4000, maxSpeedSph: 5000 });
+    expect(tiny.status).toBe(400);
+    expect(tiny.body.error.fields.maxSheetWidthIn).toBe('A sheet side is at least 1 in');
   });
 
   it('keeps the typical speed at or below the maximum, on create and on a partial edit', async () => {
