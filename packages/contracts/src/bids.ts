@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { maxRecordId } from './ids';
+import { recordId } from './ids';
 
 export const bidLineKinds = ['die', 'counter', 'ejection_rubber', 'shipping', 'other'] as const;
 export const BidLineKind = z.enum(bidLineKinds);
@@ -44,7 +44,7 @@ export const DeclineInput = z.object({
   reason: z.string({ error: 'Say why, for the buyer' }).trim().min(2, 'Say why, for the buyer').max(500),
 });
 export const AwardInput = z.object({
-  bidId: z.number({ error: 'Choose a bid' }).int().positive().max(maxRecordId, 'Choose a bid'),
+  bidId: recordId(z.number({ error: 'Choose a bid' }), 'Choose a bid'),
   reason: z.string().trim().max(2000).optional(),
 });
 export const ShipInput = z.object({

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { maxRecordId } from './ids';
+import { recordId } from './ids';
 
 /** A die request's life, in plain words of our own. */
 export const requestStatuses = [
@@ -98,7 +98,7 @@ export const DieRequestFields = z.object({
   foldAcrossGrain: z.boolean().nullable().optional(),
   heavyInkOnFold: z.boolean().nullable().optional(),
   colourBreakOnFold: z.boolean().nullable().optional(),
-  pressId: z.number().int().positive().max(maxRecordId, 'Choose one of your presses').nullable().optional(),
+  pressId: recordId(z.number(), 'Choose one of your presses').nullable().optional(),
   runSheets: z.number({ error: 'Enter the sheets to run' }).int('A whole number of sheets').min(1).max(10_000_000).nullable().optional(),
   plannedLeadDays: z.number().int().min(1, 'At least 1 working day').max(60, 'At most 60 working days').default(5),
   ruleTypes: z.array(RuleType).min(1, 'Choose at least one rule type').max(4),
@@ -110,7 +110,7 @@ export const DieRequestFields = z.object({
   deliveryPostcode: z.string().trim().max(12, 'At most 12 characters').nullable().optional(),
   notes: optionalText(4000),
   visibility: Visibility.default('public'),
-  invitedShopIds: z.array(z.number().int().positive().max(maxRecordId, 'Choose die shops from the list')).max(50).default([]),
+  invitedShopIds: z.array(recordId(z.number(), 'Choose die shops from the list')).max(50).default([]),
 });
 
 export const DieRequestCreate = DieRequestFields;
@@ -135,7 +135,7 @@ export const PublishReady = z
 
 export const RequestListQuery = z.object({
   status: RequestStatus.optional(),
-  pressId: z.coerce.number().int().positive().max(maxRecordId, 'Choose one of your presses').optional(),
+  pressId: recordId(z.coerce.number(), 'Choose one of your presses').optional(),
   needByFrom: IsoDate.optional(),
   needByTo: IsoDate.optional(),
   q: z.string().trim().max(100).optional(),

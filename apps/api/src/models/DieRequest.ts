@@ -5,7 +5,7 @@ import { Organisation } from './Organisation';
 import { Press } from './Press';
 import type { RequestQuestion } from './RequestQuestion';
 import type { Award } from './Award';
-import type { SubmittedBid } from '../services/submittedBids';
+import type { SubmittedBid } from './SubmittedBid';
 
 export class DieRequest extends Model {
   static override tableName = 'die_requests';

@@ -7,6 +7,7 @@ import { safeFileName } from '../lib/safeFileName';
 import { DieRequest, DielineFile } from '../models';
 import { recordAudit } from './auditService';
 import type { ServiceDeps } from './deps';
+import { isEditable } from './requestStatus';
 import { toFileDto } from './requestViews';
 import type { createRequestService } from './requestService';
 
@@ -59,7 +60,7 @@ export function createFileService(
   return {
     async upload(actor: AuthUser, requestId: number, upload: UploadedFile): Promise<DielineFileDto> {
       const request = await requests.findOwned(actor, requestId);
-      if (!['draft', 'open'].includes(request.status)) throw conflict('Files can be added to a draft or an open request only.');
+      if (!isEditable(request.status)) throw conflict('Files can be added to a draft or an open request only.');
       if (upload.size === 0) throw new HttpError(400, 'empty_file', 'The file is empty.');
       const format = sniff(upload);
       const fileName = safeFileName(upload.originalname);
@@ -132,7 +133,7 @@ export function createFileService(
     async makePrimary(actor: AuthUser, fileId: number): Promise<DielineFileDto> {
       const { file, request } = await ownedFile(actor, fileId);
       // After bidding closes the primary file is what the bids, the award and the price record rest on.
-      if (!['draft', 'open'].includes(request.status)) throw conflict('The primary file can be changed on a draft or an open request only.');
+      if (!isEditable(request.status)) throw conflict('The primary file can be changed on a draft or an open request only.');
       await knex.transaction(async (trx) => {
         await DielineFile.query(trx).patch({ isPrimary: false }).where({ requestId: file.requestId });
         await DielineFile.query(trx).patch({ isPrimary: true }).findById(file.id);
@@ -143,7 +144,7 @@ export function createFileService(
     /** Sets which rule type each layer is, and measures the file again. */
     async remap(actor: AuthUser, fileId: number, layerMap: Record<string, string>): Promise<DielineFileDto> {
       const { file, request } = await ownedFile(actor, fileId);
-      if (!['draft', 'open'].includes(request.status)) throw conflict('Layers can be changed on a draft or an open request only.');
+      if (!isEditable(request.status)) throw conflict('Layers can be changed on a draft or an open request only.');
       const updated = await file.$query().patchAndFetch({
         layerMap,
         analysisStatus: 'pending',

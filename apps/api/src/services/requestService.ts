@@ -24,7 +24,7 @@ import { knownPostcodes, postcodeCentre } from '../lib/postcodeCentre';
 import { biddingOpen } from './bidService';
 import { recordAudit } from './auditService';
 import type { ServiceDeps } from './deps';
-import { transitionRequest, allowedActions } from './requestStatus';
+import { transitionRequest, allowedActions, isEditable } from './requestStatus';
 import { boardPage } from './boardPage';
 import { openToShop } from './openToShop';
 import { readRequestGraph } from './requestGraph';
@@ -33,8 +33,6 @@ import { containsPattern } from '../lib/containsPattern';
 
 /** Statuses a die shop may look at, when the request is open to it. */
 const SHOP_VISIBLE = ['open', 'bidding_closed'] as const;
-
-const EDITABLE = ['draft', 'open'] as const;
 
 /** Narrows a query to requests this die shop may see: open to every shop, or it was invited. */
 // eslint-disable-next-line @typescript-eslint/no-explicit-any
@@ -255,7 +253,7 @@ export function createRequestService({ knex, reminders }: ServiceDeps) {
       await knex.transaction(async (trx) => {
         const request = await findOwned(actor, id, trx);
         await DieRequest.query(trx).findById(id).forUpdate();
-        if (!(EDITABLE as readonly string[]).includes(request.status)) {
+        if (!isEditable(request.status)) {
           throw conflict('Only a draft or an open request can be changed.');
         }
         if (request.status === 'open' && patch.bidDeadline && new Date(patch.bidDeadline).getTime() <= Date.now()) {

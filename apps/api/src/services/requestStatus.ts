@@ -6,6 +6,11 @@ import { DieRequest } from '../models';
 import { recordAudit } from './auditService';
 import type { ReminderPlanner } from './deps';
 
+/** A draft or an open request: its fields and dieline files may still change; after that the bids rest on them. */
+export function isEditable(status: RequestStatus): boolean {
+  return status === 'draft' || status === 'open';
+}
+
 /**
  * The one place a request changes status: the move must be in the transition table, made by
  * the right side (the printer, or the awarded die shop) and role. Locks the row and audits.

@@ -1,21 +1,4 @@
-import type { BidLine } from '@kerfmark/contracts';
-
-export interface SubmittedBid {
-  id: number;
-  shopId: number;
-  shopName: string;
-  revision: number;
-  lines: BidLine[];
-  currency: string;
-  totalCents: number;
-  dieCents: number;
-  leadDays: number;
-  promisedShipDate: string;
-  validUntil: string;
-  /** The shop's record: its awarded jobs, and of those shipped the share shipped by the promised date. */
-  pastJobs: number;
-  onTimeRate: number | null;
-}
+import type { SubmittedBid } from '../models/SubmittedBid';
 
 /**
  * A request's submitted bids as a JSON array, lowest total first, each with its shop's name and
