@@ -9,5 +9,7 @@ export default defineProject({
     testTimeout: 90_000,
     hookTimeout: 60_000,
     fileParallelism: false,
+    // A page answers within a second on an idle machine; a loaded CI machine gets ten.
+    expect: { poll: { timeout: 10_000 } },
   },
 });
