@@ -1,69 +1,48 @@
 import { execFile } from 'node:child_process';
-import { chownSync, existsSync, mkdirSync, readdirSync } from 'node:fs';
-import { createHash } from 'node:crypto';
-import os from 'node:os';
+import { existsSync, readdirSync, readFileSync } from 'node:fs';
 import path from 'node:path';
 import { promisify } from 'node:util';
 import pg from 'pg';
-import type { Profile } from './profile';
-import { repoRoot } from './profile';
-import { asUser, ensureDebianPackage, isRoot, run, succeeds } from './system';
+import { clusterDirs } from './clusterDirs';
+import { assertPortFree } from './net';
+import { portVariable, repoRoot, type Profile } from './profile';
+import { asUser, ensureDebianPackage, isRoot, run } from './system';
 
 const PG_ROOT = '/usr/lib/postgresql';
 const RUN_AS = isRoot ? 'postgres' : null;
 const execFileAsync = promisify(execFile);
-// A Unix socket path over about 107 bytes cannot be created.
-const MAX_SOCKET_DIR = 90;
 
-function binDir(): string {
-  const versions = existsSync(PG_ROOT)
-    ? readdirSync(PG_ROOT).filter((v) => existsSync(path.join(PG_ROOT, v, 'bin/initdb')))
-    : [];
-  if (versions.length === 0) {
-    // Guarded: a bare install when a server exists would upgrade it.
-    ensureDebianPackage(`${PG_ROOT}/15/bin/initdb`, 'postgresql', 'The database (PostgreSQL)');
-    return binDir();
-  }
-  const newest = versions.sort((a, b) => Number(b) - Number(a))[0]!;
-  return path.join(PG_ROOT, newest, 'bin');
+/** The installed server majors, newest first (15 on Debian 12, 17 on Debian 13, or several). */
+export function installedMajors(root = PG_ROOT): number[] {
+  if (!existsSync(root)) return [];
+  return readdirSync(root)
+    .filter((v) => /^\d+$/.test(v) && existsSync(path.join(root, v, 'bin/initdb')))
+    .map(Number)
+    .sort((a, b) => b - a);
 }
 
-function ownedDir(dir: string): string {
-  mkdirSync(dir, { recursive: true, mode: 0o700 });
-  if (RUN_AS) {
-    const uid = Number(run('id', ['-u', RUN_AS], { quiet: true }).trim());
-    const gid = Number(run('id', ['-g', RUN_AS], { quiet: true }).trim());
-    chownSync(dir, uid, gid);
-  }
-  return dir;
-}
-
-function reachable(dir: string): boolean {
-  if (!RUN_AS) return true;
-  return succeeds('runuser', ['-u', RUN_AS, '--', 'test', '-w', dir, '-a', '-x', dir]);
+/** The newest installed server's bin folder; Debian's `postgresql` package is installed when there is none. */
+function binDir(): { bin: string; major: number } {
+  // Guarded: a bare install when a server exists would upgrade it.
+  ensureDebianPackage(() => installedMajors().length > 0, 'postgresql', 'The database (PostgreSQL)');
+  const major = installedMajors()[0]!;
+  return { bin: path.join(PG_ROOT, String(major), 'bin'), major };
 }
 
 /**
- * Where a cluster lives: `pg` and `pg-run` under `baseDir` (an ignored folder of the checkout),
- * or a temp folder named for the checkout and `name` when the postgres user cannot reach it.
+ * Refuses a cluster that an older (or newer) server major made: reusing it fails to start,
+ * and removing it would lose the data, so say what to do instead.
  */
-function clusterDirs(baseDir: string, name: string): { data: string; run: string } {
-  const local = { data: path.join(baseDir, 'pg'), run: path.join(baseDir, 'pg-run') };
-  const key = createHash('sha256').update(repoRoot).digest('hex').slice(0, 10);
-  const temp = path.join(os.tmpdir(), `kerfmark-${key}-${name}`);
-  const fallback = { data: path.join(temp, 'pg'), run: path.join(temp, 'run') };
-  let dirs = local;
-  try {
-    mkdirSync(baseDir, { recursive: true });
-    ownedDir(local.data);
-    if (!reachable(local.data)) dirs = fallback;
-  } catch {
-    dirs = fallback;
-  }
-  if (dirs.run.length > MAX_SOCKET_DIR) dirs = { ...dirs, run: path.join(fallback.run) };
-  ownedDir(dirs.data);
-  ownedDir(dirs.run);
-  return dirs;
+export function checkClusterMajor(dataDir: string, serverMajor: number): void {
+  const versionFile = path.join(dataDir, 'PG_VERSION');
+  if (!existsSync(versionFile)) return;
+  const clusterMajor = Number(readFileSync(versionFile, 'utf8').trim());
+  if (clusterMajor === serverMajor) return;
+  throw new Error(
+    `The PostgreSQL cluster in ${dataDir} was made by PostgreSQL ${clusterMajor}, and this machine runs PostgreSQL ${serverMajor}. ` +
+      `Nothing was changed. For a fresh demo, remove that folder and start again; to keep its data, upgrade it with ` +
+      `pg_upgrade (or install postgresql-${clusterMajor} beside the newer server and dump and restore).`,
+  );
 }
 
 export interface PostgresHandle {
@@ -74,6 +53,8 @@ export interface PostgresHandle {
 export interface PostgresCluster extends PostgresHandle {
   readonly port: number;
   readonly dataDir: string;
+  /** Where its socket and log are. */
+  readonly runDir: string;
   /** Starts the server unless it is running, and waits until it accepts connections. */
   start(): Promise<void>;
   /** Stops the server at once if it runs (fast shutdown: open sessions are ended). */
@@ -86,9 +67,11 @@ export interface PostgresCluster extends PostgresHandle {
  * a crash of the machine. pg_ctl runs without blocking the event loop, so a process may stop
  * and start its own cluster while it serves requests (the outage tests do).
  */
-export function postgresCluster(opts: { baseDir: string; name: string; port: number; forTests: boolean }): PostgresCluster {
-  const bin = binDir();
-  const dirs = clusterDirs(opts.baseDir, opts.name);
+export function postgresCluster(opts: { baseDir: string; name: string; port: number; forTests: boolean; checkoutRoot?: string; portVariable?: string }): PostgresCluster {
+  const { bin, major } = binDir();
+  const dirs = clusterDirs({ baseDir: opts.baseDir, name: opts.name, checkoutRoot: opts.checkoutRoot ?? repoRoot, user: RUN_AS });
+  if (dirs.movedBecause) console.log(`· PostgreSQL data for ${opts.name} is in ${dirs.data}: ${dirs.movedBecause}`);
+  checkClusterMajor(dirs.data, major);
   const pgCtl = (args: string[]) => execFileAsync(...asUser(RUN_AS, path.join(bin, 'pg_ctl'), ['-D', dirs.data, ...args]));
   const running = () => pgCtl(['status']).then(() => true, () => false);
 
@@ -101,11 +84,15 @@ export function postgresCluster(opts: { baseDir: string; name: string; port: num
   return {
     port: opts.port,
     dataDir: dirs.data,
+    runDir: dirs.run,
     async start() {
       if (await running()) return;
+      // Our own server is not running, so anything on the port is someone else's: never use it.
+      await assertPortFree(opts.port, 'PostgreSQL', opts.portVariable ?? 'the PostgreSQL port');
       const options = [
         `-p ${opts.port}`,
-        `-k ${dirs.run}`,
+        // pg_ctl hands -o to a shell: quote the folder, which may hold spaces.
+        `-k ${shellQuote(dirs.run)}`,
         '-c listen_addresses=127.0.0.1',
         // Random reads cost about what sequential ones do on SSD or a cache-resident data set; the
         // default (4, for spinning disks) has the planner scan a whole table rather than fetch 25 rows by key.
@@ -120,6 +107,10 @@ export function postgresCluster(opts: { baseDir: string; name: string; port: num
   };
 }
 
+function shellQuote(text: string): string {
+  return `'${text.replaceAll("'", "'\\''")}'`;
+}
+
 function failed(what: string) {
   return (error: Error & { stdout?: string; stderr?: string }) => {
     const output = `${error.stdout ?? ''}${error.stderr ?? ''}`.trim();
@@ -128,7 +119,7 @@ function failed(what: string) {
 }
 
 export async function startPostgres(p: Profile, opts: { fresh?: boolean } = {}): Promise<PostgresHandle> {
-  const cluster = postgresCluster({ baseDir: p.dataDir, name: p.name, port: p.ports.postgres, forTests: p.name === 'test' });
+  const cluster = postgresCluster({ baseDir: p.dataDir, name: p.name, port: p.ports.postgres, forTests: p.name === 'test', portVariable: portVariable(p, 'postgres') });
   await cluster.start();
   await ensureDatabase(p.ports.postgres, p.database, opts.fresh ?? false);
   return { stop: () => cluster.stop() };

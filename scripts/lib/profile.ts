@@ -13,25 +13,35 @@ export interface Profile {
   bucket: string;
 }
 
+const PORT_VARIABLES = { app: 'PORT', postgres: 'PG_PORT', redis: 'REDIS_PORT', s3: 'S3_PORT', smtp: 'SMTP_PORT', mailUi: 'MAIL_PORT', vite: 'VITE_PORT' } as const;
+
+/** The variable that moves one of a profile's ports, e.g. KERFMARK_TEST_REDIS_PORT. */
+export function portVariable(p: Pick<Profile, 'name'>, key: keyof Profile['ports']): string {
+  return `${p.name === 'dev' ? 'KERFMARK_' : 'KERFMARK_TEST_'}${PORT_VARIABLES[key]}`;
+}
+
 function port(envName: string, fallback: number): number {
   const value = process.env[envName];
-  return value ? Number(value) : fallback;
+  if (!value) return fallback;
+  const n = Number(value);
+  if (!Number.isInteger(n) || n < 1 || n > 65535) throw new Error(`${envName} must be a port number from 1 to 65535, not "${value}"`);
+  return n;
 }
 
 export function profile(name: 'dev' | 'test'): Profile {
   const base = name === 'dev' ? 4100 : 4200;
-  const prefix = name === 'dev' ? 'KERFMARK_' : 'KERFMARK_TEST_';
+  const v = (key: keyof Profile['ports']) => portVariable({ name }, key);
   return {
     name,
     dataDir: path.join(repoRoot, '.data', name),
     ports: {
-      app: port(`${prefix}PORT`, base),
-      postgres: port(`${prefix}PG_PORT`, name === 'dev' ? 54329 : 54339),
-      redis: port(`${prefix}REDIS_PORT`, name === 'dev' ? 6390 : 6391),
-      s3: port(`${prefix}S3_PORT`, base + 10),
-      smtp: port(`${prefix}SMTP_PORT`, base + 25),
-      mailUi: port(`${prefix}MAIL_PORT`, base + 80),
-      vite: port(`${prefix}VITE_PORT`, base + 73),
+      app: port(v('app'), base),
+      postgres: port(v('postgres'), name === 'dev' ? 54329 : 54339),
+      redis: port(v('redis'), name === 'dev' ? 6390 : 6391),
+      s3: port(v('s3'), base + 10),
+      smtp: port(v('smtp'), base + 25),
+      mailUi: port(v('mailUi'), base + 80),
+      vite: port(v('vite'), base + 73),
     },
     database: name === 'dev' ? 'kerfmark' : 'kerfmark_test',
     bucket: name === 'dev' ? 'kerfmark-files' : 'kerfmark-test-files',

@@ -1,7 +1,8 @@
 import { existsSync, mkdirSync, readFileSync } from 'node:fs';
 import path from 'node:path';
 import { setTimeout as sleep } from 'node:timers/promises';
-import type { Profile } from './profile';
+import { assertPortFree } from './net';
+import { portVariable, type Profile } from './profile';
 import { ensureDebianPackage, run } from './system';
 
 const REDIS = '/usr/bin/redis-server';
@@ -13,8 +14,11 @@ export interface RedisHandle {
 /** One redis-server of our own, on its own port and folder. */
 export interface RedisServer extends RedisHandle {
   readonly port: number;
-  /** Starts the server unless it is running (it answers PING a moment later). */
-  start(): void;
+  /**
+   * Starts the server unless ours is running (it answers PING a moment later). A port held by
+   * anything else is refused, naming `portVariable`: another program's Redis is never used.
+   */
+  start(portVariable?: string): Promise<void>;
   /** Stops the server and waits (up to 10 s) until it has exited. */
   stop(): Promise<void>;
 }
@@ -37,8 +41,9 @@ export function redisServer(opts: { port: number; dir: string }): RedisServer {
   const pidFile = path.join(opts.dir, 'redis.pid');
   return {
     port: opts.port,
-    start() {
+    async start(variable = 'the Redis port') {
       if (pidAlive(pidFile)) return;
+      await assertPortFree(opts.port, 'Redis', variable);
       run(REDIS, [
         '--port', String(opts.port),
         '--bind', '127.0.0.1',
@@ -49,6 +54,11 @@ export function redisServer(opts: { port: number; dir: string }): RedisServer {
         '--dir', opts.dir,
         '--logfile', path.join(opts.dir, 'redis.log'),
       ]);
+      // The daemon writes its pid file a moment after the fork: until then it is not known as ours.
+      for (let waited = 0; !pidAlive(pidFile); waited += 50) {
+        if (waited > 5_000) throw new Error(`redis-server did not start; see ${path.join(opts.dir, 'redis.log')}`);
+        await sleep(50);
+      }
     },
     async stop() {
       const pid = pidAlive(pidFile);
@@ -59,8 +69,8 @@ export function redisServer(opts: { port: number; dir: string }): RedisServer {
   };
 }
 
-export function startRedis(p: Profile): RedisHandle {
+export async function startRedis(p: Profile): Promise<RedisHandle> {
   const server = redisServer({ port: p.ports.redis, dir: path.join(p.dataDir, 'redis') });
-  server.start();
+  await server.start(portVariable(p, 'redis'));
   return server;
 }

@@ -4,7 +4,7 @@ import path from 'node:path';
 import { prepareDatabase } from './database';
 import { assertPortFree, httpOk, waitFor } from './net';
 import { startPostgres } from './postgres';
-import { repoRoot, serviceEnv, type Profile } from './profile';
+import { portVariable, repoRoot, serviceEnv, type Profile } from './profile';
 import { startRedis } from './redis';
 import type { Supervisor } from './supervisor';
 
@@ -25,18 +25,18 @@ function redisAnswers(port: number): Promise<boolean> {
  */
 export async function bringUp(p: Profile, supervisor: Supervisor, opts: { fresh: boolean; productionSweeps?: boolean }): Promise<Record<string, string>> {
   const env = serviceEnv(p);
-  const prefix = p.name === 'dev' ? 'KERFMARK_' : 'KERFMARK_TEST_';
-  await assertPortFree(p.ports.app, 'the app', `${prefix}PORT`);
-  await assertPortFree(p.ports.s3, 'the S3 fake', `${prefix}S3_PORT`);
-  await assertPortFree(p.ports.smtp, 'the mail catcher (SMTP)', `${prefix}SMTP_PORT`);
-  await assertPortFree(p.ports.mailUi, 'the mail catcher (inbox)', `${prefix}MAIL_PORT`);
+  // Every port before anything starts; PostgreSQL's and Redis's are checked unless this checkout's own server runs there.
+  await assertPortFree(p.ports.app, 'the app', portVariable(p, 'app'));
+  await assertPortFree(p.ports.s3, 'the S3 fake', portVariable(p, 's3'));
+  await assertPortFree(p.ports.smtp, 'the mail catcher (SMTP)', portVariable(p, 'smtp'));
+  await assertPortFree(p.ports.mailUi, 'the mail catcher (inbox)', portVariable(p, 'mailUi'));
 
   step('PostgreSQL');
   const postgres = await startPostgres(p, { fresh: opts.fresh });
   supervisor.onStop(() => postgres.stop());
 
   step('Redis');
-  const redis = startRedis(p);
+  const redis = await startRedis(p);
   supervisor.onStop(() => redis.stop());
   await waitFor('Redis', () => redisAnswers(p.ports.redis));
 

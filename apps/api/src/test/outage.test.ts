@@ -87,7 +87,7 @@ beforeAll(async () => {
   await assertPortFree(PG_PORT, 'the outage test’s PostgreSQL', 'KERFMARK_TEST_OUTAGE_PG_PORT');
   await assertPortFree(REDIS_PORT, 'the outage test’s Redis', 'KERFMARK_TEST_OUTAGE_REDIS_PORT');
   await cluster.start();
-  redisSrv.start();
+  await redisSrv.start('KERFMARK_TEST_OUTAGE_REDIS_PORT');
   closers.push(() => cluster.stop(), () => redisSrv.stop());
   await ensureDatabase(PG_PORT, DATABASE, true);
 
@@ -445,7 +445,7 @@ describe('PostgreSQL and Redis really going away under a running API', () => {
         expect((await call('check', 'health', 'GET', '/api/health')).body).toMatchObject({ database: 'up', queue: 'down' });
 
         // Back, and empty: it keeps nothing. The jobs are gone though reminders_planned still lists them.
-        redisSrv.start();
+        await redisSrv.start('KERFMARK_TEST_OUTAGE_REDIS_PORT');
         await waitUntil('the sweep is scheduled again', () => restored.includes('reminder-sweep'), 15_000);
         expect(await reminders.getJobScheduler('reminder-sweep')).toBeDefined();
         for (const id of planned) expect(await reminders.getJob(id)).toBeUndefined();
@@ -469,7 +469,7 @@ describe('PostgreSQL and Redis really going away under a running API', () => {
         await waitUntil('the API sees the queue again', async () => (await call('check', 'health', 'GET', '/api/health')).body?.queue === 'up', 15_000);
       } finally {
         stopKeeping();
-        redisSrv.start();
+        await redisSrv.start('KERFMARK_TEST_OUTAGE_REDIS_PORT');
         await reminders.close();
       }
     },
