@@ -4,6 +4,7 @@ import {
   deliverEmailJobId,
   jobNames,
   queueNames,
+  redisOptions,
   type AnalyseDielineJob,
   type DeliverEmailJob,
   type PlanRemindersJob,
@@ -26,9 +27,8 @@ const config = loadConfig();
 const knex = createKnex(config.databaseUrl);
 const mailer = createMailer(config.smtpUrl);
 const storage = createStorage(storageConfigFromEnv());
-const redisUrl = new URL(config.redisUrl);
 // Workers wait out a Redis outage instead of failing commands (BullMQ requires this).
-const connection = { host: redisUrl.hostname, port: Number(redisUrl.port || 6379), maxRetriesPerRequest: null };
+const connection = { ...redisOptions(config.redisUrl), maxRetriesPerRequest: null };
 
 const emailQueue = new Queue(queueNames.email, { connection });
 

@@ -13,3 +13,4 @@ export * from './notifications';
 export * from './priceHistory';
 export * from './library';
 export * from './pricedLength';
+export * from './redisOptions';
