@@ -14,3 +14,4 @@ export * from './priceHistory';
 export * from './library';
 export * from './pricedLength';
 export * from './redisOptions';
+export * from './env';
