@@ -36,7 +36,7 @@ describe('health', () => {
     expect(live.body).toEqual({ status: 'live' });
     for (const url of ['/api/health/ready', '/api/health']) {
       const ready = await request(app).get(url);
-      expect(ready.status, url).toBe(200);
+      expect(ready.status, JSON.stringify(ready.body)).toBe(200);
       expect(ready.headers['cache-control']).toBe('no-store');
       expect(ready.body).toEqual({
         status: 'ready',

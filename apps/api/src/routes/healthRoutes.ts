@@ -1,3 +1,4 @@
+import { once } from 'node:events';
 import { Router, type RequestHandler } from 'express';
 import type { Redis } from 'ioredis';
 import type { Knex } from 'knex';
@@ -25,6 +26,15 @@ async function probe(run: () => Promise<unknown>): Promise<Check> {
 }
 
 /**
+ * The request path's client queues nothing while it is not connected, so a ping just after
+ * start-up would fail: wait for it to connect (an 'error' first means it cannot).
+ */
+async function pingRedis(redis: Redis): Promise<void> {
+  if (redis.status !== 'ready') await once(redis, 'ready', { signal: AbortSignal.timeout(CHECK_TIMEOUT_MS) });
+  await redis.ping();
+}
+
+/**
  * For the start scripts, a load balancer and an orchestrator:
  * - `/live`: the process answers (restart it if not); checks nothing else.
  * - `/ready`: PostgreSQL, Redis and S3 reachable and the schema migrated; 503 until then, so that
@@ -41,7 +51,7 @@ export function healthRoutes(deps: { knex: Knex; redis: Redis; storage: Storage 
       probe(async () => {
         pending = await pendingMigrations(deps.knex);
       }),
-      probe(() => deps.redis.ping()),
+      probe(() => pingRedis(deps.redis)),
       probe(() => deps.storage.ping()),
     ]);
     const migrations: Check = database.status !== 'up' ? { status: 'down', error: 'database unreachable' } : pending.length ? { status: 'behind', pending } : { status: 'up' };
