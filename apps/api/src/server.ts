@@ -4,7 +4,7 @@ import { createStorage } from '@kerfmark/storage';
 import { createApp } from './app';
 import { loadConfig, type Config } from './config';
 import { bindModels, createKnex } from './db/knex';
-import { closeServer } from './lib/closeServer';
+import { gracefulClose } from './lib/gracefulClose';
 import { createJobQueues } from './lib/jobQueues';
 import { createRedis } from './lib/redis';
 
@@ -28,6 +28,7 @@ const app = createApp({ config, knex, redis, logger, emails: queues.emails, anal
 const server = app.listen(config.port, config.host, () => {
   logger.info({ host: config.host, port: config.port }, `API listening on ${config.appUrl}`);
 });
+const closeServer = gracefulClose(server);
 server.on('error', (error) => {
   logger.fatal({ err: error }, 'the API cannot listen');
   process.exit(1);
@@ -36,7 +37,7 @@ server.on('error', (error) => {
 /** Answers what is in flight (up to SHUTDOWN_GRACE_MS), then closes the database, Redis and the queues. */
 async function shutdown(signal: string) {
   logger.info({ signal, graceMs: config.shutdownGraceMs }, 'shutting down: no new connections, finishing requests in flight');
-  await closeServer(server, config.shutdownGraceMs);
+  await closeServer(config.shutdownGraceMs);
   await Promise.allSettled([queues.close(), knex.destroy(), redis.quit()]);
   logger.info('shut down');
   process.exit(0);
