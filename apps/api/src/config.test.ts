@@ -32,6 +32,12 @@ describe('the API configuration', () => {
     expect(config.storage.endpoint).toBe('http://s3.local:9000');
   });
 
+  it('reads TRUST_PROXY as Express takes it: a hop count, true or false, or addresses', () => {
+    expect(loadConfig({ ...base, TRUST_PROXY: '1' }).trustProxy).toBe(1);
+    expect(loadConfig({ ...base, TRUST_PROXY: 'false' }).trustProxy).toBe(false);
+    expect(loadConfig({ ...base, TRUST_PROXY: '10.0.0.0/8, loopback' }).trustProxy).toBe('10.0.0.0/8, loopback');
+  });
+
   it('names a missing variable, on one line', () => {
     const message = problem({ ...base, REDIS_URL: undefined });
     expect(message).toBe('Configuration: REDIS_URL is not set');

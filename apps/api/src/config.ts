@@ -26,8 +26,12 @@ const schema = z
     MAX_UPLOAD_BYTES: envInt(25 * 1024 * 1024, 1024),
     LOGIN_MAX_ATTEMPTS: envInt(5, 1),
     LOGIN_WINDOW_SECONDS: envInt(15 * 60, 1),
-    // Express's "trust proxy": which hops may set X-Forwarded-For (a load balancer's address or hop count).
-    TRUST_PROXY: z.string().default('loopback'),
+    // Express's "trust proxy": which hops may set X-Forwarded-For: addresses or subnets (comma
+    // separated, or loopback / uniquelocal), a number of hops, or true / false.
+    TRUST_PROXY: z
+      .string()
+      .default('loopback')
+      .transform((value) => (/^\d+$/.test(value) ? Number(value) : value === 'true' ? true : value === 'false' ? false : value)),
     SHUTDOWN_GRACE_MS: envInt(10_000, 0),
     LOG_LEVEL: envLogLevel,
     ...envStorage,
@@ -58,7 +62,7 @@ export interface Config {
   invitationTtlHours: number;
   maxUploadBytes: number;
   login: { maxAttempts: number; windowSeconds: number };
-  trustProxy: string;
+  trustProxy: string | number | boolean;
   shutdownGraceMs: number;
   logLevel: string;
   storage: StorageConfig;
