@@ -1,6 +1,7 @@
 import { createHash } from 'node:crypto';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
+import { LOCAL_JWT_SECRET_PREFIX } from '../../apps/api/src/config';
 
 export const repoRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..');
 
@@ -65,8 +66,8 @@ export function serviceEnv(p: Profile): Record<string, string> {
     SMTP_URL: `smtp://${host}:${p.ports.smtp}`,
     MAIL_CATCHER_URL: `http://${host}:${p.ports.mailUi}`,
     MAIL_FROM: 'Kerfmark <no-reply@kerfmark.test>',
-    // A per-checkout secret for local use only; production sets its own JWT_SECRET.
-    JWT_SECRET: createHash('sha256').update(`kerfmark-local:${repoRoot}:${p.name}`).digest('hex'),
+    // A per-checkout secret for local use only, marked by its prefix: production refuses it.
+    JWT_SECRET: LOCAL_JWT_SECRET_PREFIX + createHash('sha256').update(`kerfmark-local:${repoRoot}:${p.name}`).digest('hex'),
     WEB_DIST: path.join(repoRoot, 'apps/web/dist'),
     DATA_DIR: p.dataDir,
   };

@@ -8,6 +8,7 @@ import { pinoHttp } from 'pino-http';
 import { createLoginLimiter } from './auth/loginLimiter';
 import { createPassport } from './auth/passport';
 import { errorHandler, notFoundHandler } from './middleware/errorHandler';
+import { requestId } from './middleware/requestId';
 import { requireAuth as requireAuthWith } from './middleware/requireAuth';
 import { authRoutes } from './routes/authRoutes';
 import { healthRoutes } from './routes/healthRoutes';
@@ -36,7 +37,8 @@ export function createApp(deps: AppDeps): Express {
   // No ETag on the API's answers: hashing every JSON body cost CPU on each request, and the web
   // app refetches through its own query cache rather than the browser's.
   app.set('etag', false);
-  app.set('trust proxy', process.env.TRUST_PROXY ?? 'loopback');
+  app.set('trust proxy', config.trustProxy);
+  app.use(requestId);
   app.use(
     helmet({
       contentSecurityPolicy: { directives: { 'upgrade-insecure-requests': null } },
@@ -46,8 +48,9 @@ export function createApp(deps: AppDeps): Express {
   if (process.env.NODE_ENV !== 'test') app.use(
       pinoHttp({
         logger,
+        genReqId: (req) => req.id,
         redact: ['req.headers.authorization', 'req.headers.cookie'],
-        autoLogging: { ignore: (req) => req.url === '/api/health' },
+        autoLogging: { ignore: (req) => req.url?.startsWith('/api/health') ?? false },
       }),
     );
 
@@ -56,7 +59,7 @@ export function createApp(deps: AppDeps): Express {
 
   const api = express.Router();
   api.use(express.json({ limit: '100kb' }));
-  api.use('/health', healthRoutes(knex, redis));
+  api.use('/health', healthRoutes({ knex, redis, storage: deps.storage }));
   api.use('/auth', authRoutes(services, requireAuth));
   api.use('/me', meRoutes(services, requireAuth));
   api.use('/users', userRoutes(services, requireAuth));

@@ -1,11 +1,56 @@
-/** Everything the API reads from its environment; production sets the same names. */
-function required(name: string): string {
-  const value = process.env[name];
-  if (!value) throw new Error(`${name} is not set`);
-  return value;
-}
+import { z } from 'zod';
+import { envInt, envLogLevel, envNodeEnv, envRedisUrl, envStorage, envUrl, readEnv } from '@kerfmark/contracts';
+import type { StorageConfig } from '@kerfmark/storage';
 
+/**
+ * The start of every JWT secret the local scripts derive from the checkout: fine on a laptop,
+ * known to anyone with the code, so production refuses it.
+ */
+export const LOCAL_JWT_SECRET_PREFIX = 'kerfmark-local-';
+const MIN_PRODUCTION_SECRET = 32;
+
+const schema = z
+  .object({
+    NODE_ENV: envNodeEnv,
+    // Loopback locally; a container sets 0.0.0.0 so that its port can be published.
+    HOST: z.string().trim().min(1).default('127.0.0.1'),
+    PORT: envInt(4100, 0, 65_535),
+    APP_URL: envUrl(['http:', 'https:']).optional(),
+    DATABASE_URL: envUrl(['postgres:', 'postgresql:']),
+    REDIS_URL: envRedisUrl,
+    JWT_SECRET: z.string({ error: 'is not set' }),
+    TOKEN_TTL_SECONDS: envInt(8 * 3600, 60),
+    BCRYPT_ROUNDS: envInt(11, 4, 15),
+    WEB_DIST: z.string().optional(),
+    INVITATION_TTL_HOURS: envInt(72, 1),
+    MAX_UPLOAD_BYTES: envInt(25 * 1024 * 1024, 1024),
+    LOGIN_MAX_ATTEMPTS: envInt(5, 1),
+    LOGIN_WINDOW_SECONDS: envInt(15 * 60, 1),
+    // Express's "trust proxy": which hops may set X-Forwarded-For: addresses or subnets (comma
+    // separated, or loopback / uniquelocal), a number of hops, or true / false.
+    TRUST_PROXY: z
+      .string()
+      .default('loopback')
+      .transform((value) => (/^\d+$/.test(value) ? Number(value) : value === 'true' ? true : value === 'false' ? false : value)),
+    SHUTDOWN_GRACE_MS: envInt(10_000, 0),
+    LOG_LEVEL: envLogLevel,
+    ...envStorage,
+  })
+  .superRefine((env, ctx) => {
+    if (env.NODE_ENV !== 'production') return;
+    if (env.JWT_SECRET.startsWith(LOCAL_JWT_SECRET_PREFIX)) {
+      ctx.addIssue({ code: 'custom', path: ['JWT_SECRET'], message: 'is the local development secret; set a random one in production' });
+    } else if (env.JWT_SECRET.length < MIN_PRODUCTION_SECRET) {
+      ctx.addIssue({ code: 'custom', path: ['JWT_SECRET'], message: `must be at least ${MIN_PRODUCTION_SECRET} characters in production` });
+    }
+    // Links in e-mails and HSTS follow it: the local default would send users to 127.0.0.1.
+    if (!env.APP_URL) ctx.addIssue({ code: 'custom', path: ['APP_URL'], message: 'is not set (required in production: the public address of the app)' });
+  });
+
+/** Everything the API reads from its environment, read once at start-up. */
 export interface Config {
+  production: boolean;
+  host: string;
   port: number;
   appUrl: string;
   databaseUrl: string;
@@ -17,23 +62,38 @@ export interface Config {
   invitationTtlHours: number;
   maxUploadBytes: number;
   login: { maxAttempts: number; windowSeconds: number };
+  trustProxy: string | number | boolean;
+  shutdownGraceMs: number;
+  logLevel: string;
+  storage: StorageConfig;
 }
 
-export function loadConfig(): Config {
+/** Reads and checks the environment; throws a ConfigError of one line naming every bad variable. */
+export function loadConfig(env: Record<string, string | undefined> = process.env): Config {
+  const e = readEnv(schema, env);
   return {
-    port: Number(process.env.PORT ?? 4100),
-    appUrl: process.env.APP_URL ?? `http://127.0.0.1:${process.env.PORT ?? 4100}`,
-    databaseUrl: required('DATABASE_URL'),
-    redisUrl: required('REDIS_URL'),
-    jwtSecret: required('JWT_SECRET'),
-    tokenTtlSeconds: Number(process.env.TOKEN_TTL_SECONDS ?? 8 * 3600),
-    bcryptRounds: Number(process.env.BCRYPT_ROUNDS ?? 11),
-    webDist: process.env.WEB_DIST,
-    invitationTtlHours: Number(process.env.INVITATION_TTL_HOURS ?? 72),
-    maxUploadBytes: Number(process.env.MAX_UPLOAD_BYTES ?? 25 * 1024 * 1024),
-    login: {
-      maxAttempts: Number(process.env.LOGIN_MAX_ATTEMPTS ?? 5),
-      windowSeconds: Number(process.env.LOGIN_WINDOW_SECONDS ?? 15 * 60),
+    production: e.NODE_ENV === 'production',
+    host: e.HOST,
+    port: e.PORT,
+    appUrl: e.APP_URL ?? `http://127.0.0.1:${e.PORT}`,
+    databaseUrl: e.DATABASE_URL,
+    redisUrl: e.REDIS_URL,
+    jwtSecret: e.JWT_SECRET,
+    tokenTtlSeconds: e.TOKEN_TTL_SECONDS,
+    bcryptRounds: e.BCRYPT_ROUNDS,
+    webDist: e.WEB_DIST,
+    invitationTtlHours: e.INVITATION_TTL_HOURS,
+    maxUploadBytes: e.MAX_UPLOAD_BYTES,
+    login: { maxAttempts: e.LOGIN_MAX_ATTEMPTS, windowSeconds: e.LOGIN_WINDOW_SECONDS },
+    trustProxy: e.TRUST_PROXY,
+    shutdownGraceMs: e.SHUTDOWN_GRACE_MS,
+    logLevel: e.LOG_LEVEL,
+    storage: {
+      endpoint: e.S3_ENDPOINT,
+      bucket: e.S3_BUCKET,
+      region: e.S3_REGION,
+      accessKeyId: e.S3_ACCESS_KEY_ID,
+      secretAccessKey: e.S3_SECRET_ACCESS_KEY,
     },
   };
 }

@@ -1,21 +1,49 @@
-function required(name: string): string {
-  const value = process.env[name];
-  if (!value) throw new Error(`${name} is not set`);
-  return value;
-}
+import { z } from 'zod';
+import { envInt, envLogLevel, envNodeEnv, envRedisUrl, envStorage, envUrl, readEnv } from '@kerfmark/contracts';
 
-export function loadConfig() {
-  return {
-    databaseUrl: required('DATABASE_URL'),
-    redisUrl: required('REDIS_URL'),
-    smtpUrl: required('SMTP_URL'),
-    mailFrom: process.env.MAIL_FROM ?? 'Kerfmark <no-reply@kerfmark.test>',
-    outboxSweepMs: Number(process.env.OUTBOX_SWEEP_MS ?? 30_000),
-    reminderSweepMs: Number(process.env.REMINDER_SWEEP_MS ?? 300_000),
-    appUrl: process.env.APP_URL ?? 'http://127.0.0.1:4100',
-    analysisSweepMs: Number(process.env.ANALYSIS_SWEEP_MS ?? 30_000),
+const schema = z
+  .object({
+    NODE_ENV: envNodeEnv,
+    DATABASE_URL: envUrl(['postgres:', 'postgresql:']),
+    REDIS_URL: envRedisUrl,
+    SMTP_URL: envUrl(['smtp:', 'smtps:']),
+    MAIL_FROM: z.string().default('Kerfmark <no-reply@kerfmark.test>'),
+    APP_URL: envUrl(['http:', 'https:']).optional(),
+    OUTBOX_SWEEP_MS: envInt(30_000, 100),
+    REMINDER_SWEEP_MS: envInt(300_000, 100),
+    ANALYSIS_SWEEP_MS: envInt(30_000, 100),
     // How often the worker checks that its sweeps are still scheduled in Redis.
-    scheduleCheckMs: Number(process.env.SCHEDULE_CHECK_MS ?? 30_000),
+    SCHEDULE_CHECK_MS: envInt(30_000, 100),
+    LOG_LEVEL: envLogLevel,
+    ...envStorage,
+  })
+  .superRefine((env, ctx) => {
+    if (env.NODE_ENV !== 'production') return;
+    // The links in every e-mail and reminder point there.
+    if (!env.APP_URL) ctx.addIssue({ code: 'custom', path: ['APP_URL'], message: 'is not set (required in production: the public address of the app)' });
+  });
+
+/** Everything the worker reads from its environment, read once at start-up; throws a ConfigError of one line. */
+export function loadConfig(env: Record<string, string | undefined> = process.env) {
+  const e = readEnv(schema, env);
+  return {
+    databaseUrl: e.DATABASE_URL,
+    redisUrl: e.REDIS_URL,
+    smtpUrl: e.SMTP_URL,
+    mailFrom: e.MAIL_FROM,
+    outboxSweepMs: e.OUTBOX_SWEEP_MS,
+    reminderSweepMs: e.REMINDER_SWEEP_MS,
+    appUrl: e.APP_URL ?? 'http://127.0.0.1:4100',
+    analysisSweepMs: e.ANALYSIS_SWEEP_MS,
+    scheduleCheckMs: e.SCHEDULE_CHECK_MS,
+    logLevel: e.LOG_LEVEL,
+    storage: {
+      endpoint: e.S3_ENDPOINT,
+      bucket: e.S3_BUCKET,
+      region: e.S3_REGION,
+      accessKeyId: e.S3_ACCESS_KEY_ID,
+      secretAccessKey: e.S3_SECRET_ACCESS_KEY,
+    },
   };
 }
 export type WorkerConfig = ReturnType<typeof loadConfig>;

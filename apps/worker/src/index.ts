@@ -1,17 +1,19 @@
 import { Queue, Worker } from 'bullmq';
 import { pino } from 'pino';
 import {
+  ConfigError,
   deliverEmailJobId,
   jobNames,
   queueNames,
+  redisOptions,
   type AnalyseDielineJob,
   type DeliverEmailJob,
   type PlanRemindersJob,
   type SendReminderJob,
 } from '@kerfmark/contracts';
-import { createStorage, storageConfigFromEnv } from '@kerfmark/storage';
+import { createStorage } from '@kerfmark/storage';
 import { analyseDielineFile, waitingAnalyses } from './jobs/analyseDieline';
-import { loadConfig } from './config';
+import { loadConfig, type WorkerConfig } from './config';
 import { deliverEmail } from './jobs/deliverEmail';
 import { sweepOutbox } from './jobs/sweepOutbox';
 import { createKnex } from './db';
@@ -21,14 +23,20 @@ import { planRequestReminders } from './reminders/planRequestReminders';
 import { sendReminder } from './reminders/sendReminder';
 import { sweepReminders } from './reminders/sweepReminders';
 
-const logger = pino({ name: 'worker', level: process.env.LOG_LEVEL ?? 'info' });
-const config = loadConfig();
+let config: WorkerConfig;
+try {
+  config = loadConfig();
+} catch (error) {
+  if (!(error instanceof ConfigError)) throw error;
+  console.error(`Kerfmark worker cannot start. ${error.message}`);
+  process.exit(1);
+}
+const logger = pino({ name: 'worker', level: config.logLevel });
 const knex = createKnex(config.databaseUrl);
 const mailer = createMailer(config.smtpUrl);
-const storage = createStorage(storageConfigFromEnv());
-const redisUrl = new URL(config.redisUrl);
+const storage = createStorage(config.storage);
 // Workers wait out a Redis outage instead of failing commands (BullMQ requires this).
-const connection = { host: redisUrl.hostname, port: Number(redisUrl.port || 6379), maxRetriesPerRequest: null };
+const connection = { ...redisOptions(config.redisUrl), maxRetriesPerRequest: null };
 
 const emailQueue = new Queue(queueNames.email, { connection });
 
@@ -112,12 +120,16 @@ for (const worker of [emailWorker, dielineWorker, reminderWorker]) {
 }
 logger.info('worker running: e-mail delivery, dieline analysis, deadline reminders and their sweeps');
 
-async function shutdown() {
+/** Takes no new jobs, lets the ones running finish (Worker.close waits for them), then closes. */
+async function shutdown(signal: string) {
+  logger.info({ signal }, 'shutting down: finishing the jobs in hand');
   stopKeepingSchedules();
-  await Promise.allSettled([emailWorker.close(), dielineWorker.close(), reminderWorker.close(), emailQueue.close(), dielineQueue.close(), reminderQueue.close()]);
+  await Promise.allSettled([emailWorker.close(), dielineWorker.close(), reminderWorker.close()]);
+  await Promise.allSettled([emailQueue.close(), dielineQueue.close(), reminderQueue.close()]);
   await knex.destroy();
   mailer.close();
+  logger.info('shut down');
   process.exit(0);
 }
-process.once('SIGTERM', shutdown);
-process.once('SIGINT', shutdown);
+process.once('SIGTERM', () => void shutdown('SIGTERM'));
+process.once('SIGINT', () => void shutdown('SIGINT'));

@@ -7,6 +7,8 @@ export const ApiError = z.object({
     message: z.string(),
     fields: z.record(z.string(), z.string()).optional(),
     details: z.unknown().optional(),
+    // The request's id (also in the X-Request-Id header and the server's log line).
+    requestId: z.string().optional(),
   }),
 });
 export type ApiError = z.infer<typeof ApiError>;

@@ -13,3 +13,5 @@ export * from './notifications';
 export * from './priceHistory';
 export * from './library';
 export * from './pricedLength';
+export * from './redisOptions';
+export * from './env';

@@ -5,6 +5,7 @@ import {
   deliverEmailJobId,
   jobNames,
   queueNames,
+  redisOptions,
   type AnalyseDielineJob,
   type DeliverEmailJob,
   type PlanRemindersJob,
@@ -16,8 +17,7 @@ import type { AnalysisDispatcher, EmailDispatcher, ReminderPlanner } from '../se
  * add fails at once, is logged, and the worker's sweep finds the work in PostgreSQL instead.
  */
 export function createJobQueues(redisUrl: string, logger: Logger) {
-  const url = new URL(redisUrl);
-  const connection = { host: url.hostname, port: Number(url.port || 6379), enableOfflineQueue: false, maxRetriesPerRequest: 1 };
+  const connection = { ...redisOptions(redisUrl), enableOfflineQueue: false, maxRetriesPerRequest: 1 };
   const emailQueue = new Queue<DeliverEmailJob>(queueNames.email, { connection });
   const dielineQueue = new Queue<AnalyseDielineJob>(queueNames.dieline, { connection });
   const reminderQueue = new Queue<PlanRemindersJob>(queueNames.reminders, { connection });

@@ -1,4 +1,4 @@
-import type { ErrorRequestHandler, RequestHandler } from 'express';
+import type { ErrorRequestHandler, Request, RequestHandler, Response } from 'express';
 import type { Logger } from 'pino';
 import { HttpError } from '../lib/httpError';
 
@@ -31,42 +31,45 @@ function isUnavailable(error: unknown, depth = 0): boolean {
   return isUnavailable(e.nativeError, depth + 1) || isUnavailable(e.cause, depth + 1);
 }
 
+/** Every error body: `{ error: { code, message, …, requestId } }`, the id that finds it in the logs. */
+function sendError(req: Request, res: Response, status: number, error: Record<string, unknown>) {
+  res.status(status).json({ error: { ...error, requestId: req.id } });
+}
+
 export function errorHandler(logger: Logger): ErrorRequestHandler {
-  return (error, _req, res, _next) => {
+  return (error, req, res, _next) => {
     if (res.headersSent) return;
     if (error instanceof HttpError) {
       if (error.headers) res.set(error.headers);
-      res.status(error.status).json({ error: { code: error.code, message: error.message, fields: error.fields, details: error.details } });
+      sendError(req, res, error.status, { code: error.code, message: error.message, fields: error.fields, details: error.details });
       return;
     }
     // body-parser's own errors carry a status and a type.
     const type = (error as { type?: string }).type;
     if (type === 'entity.too.large') {
-      res.status(413).json({ error: { code: 'payload_too_large', message: 'The request body is too large.' } });
+      sendError(req, res, 413, { code: 'payload_too_large', message: 'The request body is too large.' });
       return;
     }
     if (type === 'entity.parse.failed') {
-      res.status(400).json({ error: { code: 'malformed_json', message: 'The request body is not valid JSON.' } });
+      sendError(req, res, 400, { code: 'malformed_json', message: 'The request body is not valid JSON.' });
       return;
     }
     // The router's own: a path parameter with a broken %-escape (e.g. /api/requests/%E0%A4%A).
     if (error instanceof URIError && (error as { status?: number }).status === 400) {
-      res.status(400).json({ error: { code: 'bad_path', message: 'The address has a broken %-escape in it.', fields: { path: 'Not a valid address' } } });
+      sendError(req, res, 400, { code: 'bad_path', message: 'The address has a broken %-escape in it.', fields: { path: 'Not a valid address' } });
       return;
     }
     if (isUnavailable(error)) {
-      logger.warn({ err: error }, 'a backing service is unavailable');
-      res
-        .status(503)
-        .set('Retry-After', '5')
-        .json({ error: { code: 'service_unavailable', message: 'Kerfmark is briefly unavailable. Try again in a few seconds.' } });
+      logger.warn({ err: error, reqId: req.id }, 'a backing service is unavailable');
+      res.set('Retry-After', '5');
+      sendError(req, res, 503, { code: 'service_unavailable', message: 'Kerfmark is briefly unavailable. Try again in a few seconds.' });
       return;
     }
-    logger.error({ err: error }, 'unhandled error');
-    res.status(500).json({ error: { code: 'internal', message: 'Something went wrong on our side. It has been logged.' } });
+    logger.error({ err: error, reqId: req.id }, 'unhandled error');
+    sendError(req, res, 500, { code: 'internal', message: 'Something went wrong on our side. It has been logged.' });
   };
 }
 
-export const notFoundHandler: RequestHandler = (_req, res) => {
-  res.status(404).json({ error: { code: 'not_found', message: 'No such API route.' } });
+export const notFoundHandler: RequestHandler = (req, res) => {
+  sendError(req, res, 404, { code: 'not_found', message: 'No such API route.' });
 };

@@ -96,6 +96,8 @@ const fx = (w: World): Fixtures => {
 // Each role's access to each route: role and organisation kind, enforced by the API.
 const cases: RouteCase[] = [
   { name: 'GET /api/health', send: () => request(app).get('/api/health'), expect: everyone(200, 200) },
+  { name: 'GET /api/health/live', send: () => request(app).get('/api/health/live'), expect: everyone(200, 200) },
+  { name: 'GET /api/health/ready', send: () => request(app).get('/api/health/ready'), expect: everyone(200, 200) },
   {
     name: 'POST /api/auth/login',
     send: (w, actor) => request(app).post('/api/auth/login').send({ email: w.users[member(actor)].email, password: PASSWORD }),

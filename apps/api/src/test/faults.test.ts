@@ -53,8 +53,9 @@ describe('a backing service that is down', () => {
     expect(login.status).toBe(200);
     const me = await request(noRedis).get('/api/me').set('Authorization', `Bearer ${login.body.token}`);
     expect(me.status).toBe(200);
-    const health = await request(noRedis).get('/api/health');
-    expect(health.body).toMatchObject({ database: 'up', queue: 'down' });
+    const health = await request(noRedis).get('/api/health/ready');
+    expect(health.status).toBe(503);
+    expect(health.body).toMatchObject({ status: 'not_ready', checks: { database: { status: 'up' }, redis: { status: 'down' } } });
   });
 
   it('refuses an upload with a clear 503 while S3 is down, and leaves no row pointing at a missing file', async () => {

@@ -8,7 +8,7 @@ import { createApp } from '../app';
 import { hashPassword } from '../auth/passwords';
 import { loadConfig, type Config } from '../config';
 import { bindModels, createKnex } from '../db/knex';
-import { createStorage, storageConfigFromEnv } from '@kerfmark/storage';
+import { createStorage } from '@kerfmark/storage';
 import { createJobQueues } from '../lib/jobQueues';
 import { createRedis } from '../lib/redis';
 import { Organisation, Press, User } from '../models';
@@ -25,7 +25,7 @@ const logger = pino({ level: 'silent' });
 const redis = createRedis(config.redisUrl);
 redis.on('error', () => undefined);
 const queues = createJobQueues(config.redisUrl, logger);
-export const storage = createStorage(storageConfigFromEnv());
+export const storage = createStorage(config.storage);
 
 export const app: Express = createApp({ config, knex, redis, logger, emails: queues.emails, analyses: queues.analyses, reminders: queues.reminders, storage });
 export const testConfig = config;

@@ -61,6 +61,12 @@ const config: Config = {
   invitationTtlHours: 72,
   maxUploadBytes: 1024 * 1024,
   login: { maxAttempts: 5, windowSeconds: 900 },
+  production: false,
+  host: '127.0.0.1',
+  trustProxy: 'loopback',
+  shutdownGraceMs: 1000,
+  logLevel: 'error',
+  storage: { endpoint: 'http://127.0.0.1:9', bucket: 'kerfmark-outage', region: 'us-east-1', accessKeyId: 'x', secretAccessKey: 'x' },
 };
 
 // Anything the error handler calls unhandled (a 500) is kept, to show beside a failed check.
@@ -106,7 +112,7 @@ beforeAll(async () => {
   redis.on('error', () => undefined);
   const queues = createJobQueues(redisUrl, pino({ level: 'silent' }));
   // No file store is needed here; a purchase order PDF that cannot be kept is made again when opened.
-  const storage = createStorage({ endpoint: 'http://127.0.0.1:9', bucket: 'kerfmark-outage', region: 'us-east-1', accessKeyId: 'x', secretAccessKey: 'x' });
+  const storage = createStorage(config.storage);
   const app = createApp({ config, knex, redis, logger, emails: queues.emails, analyses: queues.analyses, reminders: queues.reminders, storage });
   const server = http.createServer(app);
   await new Promise<void>((resolve) => server.listen(0, '127.0.0.1', resolve));
@@ -352,7 +358,7 @@ describe('PostgreSQL and Redis really going away under a running API', () => {
         const back = stream.find((x) => x.client === name && x.startedAt >= up && ok(x));
         expect(back!.endedAt - up).toBeLessThan(RECOVER_WITHIN_MS);
       }
-      expect((await call('check', 'health', 'GET', '/api/health')).body).toMatchObject({ database: 'up' });
+      expect((await call('check', 'health', 'GET', '/api/health')).body).toMatchObject({ checks: { database: { status: 'up' } } });
 
       // Finish the awards the outage interrupted, so every B is checked as awarded below.
       for (const b of bs.filter((x) => !awarded.has(x.id))) {
@@ -442,7 +448,7 @@ describe('PostgreSQL and Redis really going away under a running API', () => {
         expect(bid.status, JSON.stringify(bid.body)).toBe(201);
         for (const x of answers.slice(-3)) expect(x.endedAt - x.startedAt).toBeLessThan(3_000);
         expect(await plain('bid_revisions').where({ bid_id: bid.body!.id })).toHaveLength(1);
-        expect((await call('check', 'health', 'GET', '/api/health')).body).toMatchObject({ database: 'up', queue: 'down' });
+        expect((await call('check', 'health', 'GET', '/api/health')).body).toMatchObject({ status: 'not_ready', checks: { database: { status: 'up' }, redis: { status: 'down' } } });
 
         // Back, and empty: it keeps nothing. The jobs are gone though reminders_planned still lists them.
         await redisSrv.start('KERFMARK_TEST_OUTAGE_REDIS_PORT');
@@ -466,7 +472,7 @@ describe('PostgreSQL and Redis really going away under a running API', () => {
           expect(Math.abs(job!.opts.delay! - (reminder.fireAt.getTime() - now.getTime()))).toBeLessThan(1_000);
         }
         // And the API's own Redis client found its way back by itself.
-        await waitUntil('the API sees the queue again', async () => (await call('check', 'health', 'GET', '/api/health')).body?.queue === 'up', 15_000);
+        await waitUntil('the API sees the queue again', async () => ((await call('check', 'health', 'GET', '/api/health')).body?.checks as { redis?: { status: string } } | undefined)?.redis?.status === 'up', 15_000);
       } finally {
         stopKeeping();
         await redisSrv.start('KERFMARK_TEST_OUTAGE_REDIS_PORT');

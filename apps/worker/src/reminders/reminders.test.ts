@@ -1,7 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import { Queue } from 'bullmq';
 import { afterAll, describe, expect, it } from 'vitest';
-import { reminderJobId } from '@kerfmark/contracts';
+import { redisOptions, reminderJobId } from '@kerfmark/contracts';
 import { createKnex } from '../db';
 import { planReminders } from './planReminders';
 import { loadReminderState } from './loadReminderState';
@@ -12,10 +12,10 @@ import { sweepReminders } from './sweepReminders';
 // Against the real PostgreSQL and Redis that `npm test` starts. Each test uses a queue of its
 // own, so the running worker never takes its jobs; time is passed in explicitly.
 const knex = createKnex(process.env.DATABASE_URL!);
-const redis = new URL(process.env.REDIS_URL!);
+const connection = redisOptions(process.env.REDIS_URL!);
 const queues: Queue[] = [];
 const testQueue = () => {
-  const queue = new Queue(`test-reminders-${randomUUID()}`, { connection: { host: redis.hostname, port: Number(redis.port) } });
+  const queue = new Queue(`test-reminders-${randomUUID()}`, { connection });
   queues.push(queue);
   return queue;
 };
