@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { calendarDate, instant } from './dateFields';
 import { recordId } from './ids';
 
 /** A die request's life, in plain words of our own. */
@@ -72,8 +73,8 @@ export type Grain = z.infer<typeof Grain>;
 export const Visibility = z.enum(['public', 'invited']);
 export type Visibility = z.infer<typeof Visibility>;
 
-const IsoDate = z.iso.date({ error: 'Enter a date as YYYY-MM-DD' });
-const Instant = z.iso.datetime({ offset: true, error: 'Enter a date and time' });
+const IsoDate = calendarDate();
+const Instant = instant();
 const Inches = (what: string) =>
   z.number({ error: `Enter ${what} in inches` }).positive(`${what} must be more than 0`).max(120, `${what} is at most 120 in`);
 const optionalText = (max: number) =>
