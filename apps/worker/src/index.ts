@@ -12,9 +12,10 @@ import {
   type SendReminderJob,
 } from '@kerfmark/contracts';
 import { createStorage } from '@kerfmark/storage';
-import { analyseDielineFile, waitingAnalyses } from './jobs/analyseDieline';
+import { analyseDielineFile } from './jobs/analyseDieline';
 import { loadConfig, type WorkerConfig } from './config';
 import { deliverEmail } from './jobs/deliverEmail';
+import { sweepAnalyses } from './jobs/sweepAnalyses';
 import { sweepOutbox } from './jobs/sweepOutbox';
 import { createKnex } from './db';
 import { keepJobSchedulers } from './keepJobSchedulers';
@@ -44,7 +45,7 @@ const emailWorker = new Worker<DeliverEmailJob>(
   queueNames.email,
   async (job) => {
     if (job.name === jobNames.sweepOutbox) {
-      const results = await sweepOutbox(knex, mailer, config.mailFrom);
+      const results = await sweepOutbox(knex, mailer, config.mailFrom, logger);
       if (results.length) logger.info({ results }, 'outbox sweep');
       return results.length;
     }
@@ -64,9 +65,9 @@ const dielineWorker = new Worker<AnalyseDielineJob>(
   async (job) => {
     if (job.name === jobNames.sweepAnalyses) {
       // Only files left waiting well past a normal run: their job was lost with Redis.
-      const ids = await waitingAnalyses(knex, config.analysisSweepMs * 2);
-      for (const fileId of ids) logger.info({ fileId, result: await analyseDielineFile(knex, storage, fileId) }, 'analysis (sweep)');
-      return ids.length;
+      const { results, failed } = await sweepAnalyses(knex, storage, config.analysisSweepMs * 2, logger);
+      if (results.length || failed) logger.info({ results, failed }, 'analysis sweep');
+      return results.length;
     }
     if (job.name === jobNames.analyseDieline) {
       const result = await analyseDielineFile(knex, storage, job.data.fileId);
@@ -90,7 +91,7 @@ const reminderQueue = new Queue<SendReminderJob>(queueNames.reminders, { connect
 const reminderWorker = new Worker<SendReminderJob | PlanRemindersJob>(
   queueNames.reminders,
   async (job) => {
-    if (job.name === jobNames.sweepReminders) return sweepReminders(knex, reminderQueue);
+    if (job.name === jobNames.sweepReminders) return sweepReminders(knex, reminderQueue, new Date(), logger);
     if (job.name === jobNames.planReminders) return planRequestReminders(knex, reminderQueue, job.data.requestId);
     if (job.name === jobNames.sendReminder) {
       const { key, requestId } = job.data as SendReminderJob;

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { calendarDate } from './dateFields';
 import { recordId } from './ids';
 
 export const bidLineKinds = ['die', 'counter', 'ejection_rubber', 'shipping', 'other'] as const;
@@ -35,7 +36,7 @@ export const BidInput = z.object({
     .refine((lines) => lines.some((l) => l.kind === 'die'), { error: 'Include the price of the die itself' }),
   currency: Currency,
   leadDays: z.number({ error: 'Enter the lead time' }).int('Whole working days').min(1, 'At least 1 working day').max(120, 'At most 120 working days'),
-  validUntil: z.iso.date({ error: 'Enter the date the price holds until' }),
+  validUntil: calendarDate('Enter the date the price holds until'),
   notes: z.string().trim().max(4000, 'At most 4,000 characters').nullable().optional(),
 });
 export type BidInput = z.input<typeof BidInput>;

@@ -6,6 +6,7 @@ export * from './presses';
 export * from './errors';
 export * from './queues';
 export * from './dates';
+export * from './dateFields';
 export * from './requests';
 export * from './requestDtos';
 export * from './bids';

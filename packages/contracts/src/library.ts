@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { calendarDate } from './dateFields';
 import type { DielineMetrics } from './requestDtos';
 
 export const dieConditions = ['good', 'worn', 'damaged', 'retired'] as const;
@@ -12,7 +13,7 @@ export const LibraryDieUpdate = z.object({
 }).refine((v) => Object.keys(v).length > 0, { error: 'Nothing to change' });
 
 export const DieRunInput = z.object({
-  runOn: z.iso.date({ error: 'Enter the date of the run' }),
+  runOn: calendarDate('Enter the date of the run'),
   impressions: z.number({ error: 'Enter the impressions run' }).int('Whole impressions').min(1, 'At least 1').max(10_000_000, 'At most 10,000,000 in one run'),
   jobReference: z.string().trim().max(60).nullable().optional(),
   notes: z.string().trim().max(1000).nullable().optional(),

@@ -1,6 +1,7 @@
 import { z } from 'zod';
+import { calendarDate } from './dateFields';
 
-const IsoDate = z.iso.date({ error: 'Enter a date as YYYY-MM-DD' });
+const IsoDate = calendarDate();
 
 export const PriceHistoryQuery = z.object({
   from: IsoDate.optional(),

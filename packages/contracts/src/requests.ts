@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { calendarDate, instant } from './dateFields';
 import { recordId } from './ids';
 
 /** A die request's life, in plain words of our own. */
@@ -72,15 +73,19 @@ export type Grain = z.infer<typeof Grain>;
 export const Visibility = z.enum(['public', 'invited']);
 export type Visibility = z.infer<typeof Visibility>;
 
-const IsoDate = z.iso.date({ error: 'Enter a date as YYYY-MM-DD' });
-const Instant = z.iso.datetime({ offset: true, error: 'Enter a date and time' });
+const IsoDate = calendarDate();
+const Instant = instant();
 const Inches = (what: string) =>
   z.number({ error: `Enter ${what} in inches` }).positive(`${what} must be more than 0`).max(120, `${what} is at most 120 in`);
 const optionalText = (max: number) =>
   z.string().trim().max(max, `At most ${max} characters`).nullable().optional();
 
-/** Everything a buyer fills in; a draft may leave most of it empty, publishing needs it complete. */
-export const DieRequestFields = z.object({
+/**
+ * Everything a buyer fills in; a draft may leave most of it empty, publishing needs it complete.
+ * No field here has a default: the create schema adds them, so the update schema (built with
+ * .partial()) never fills in a field the update did not name, which zod 4 would do.
+ */
+const DieRequestFields = z.object({
   title: z.string({ error: 'Enter a title' }).trim().min(1, 'Enter a title').max(160, 'At most 160 characters'),
   jobReference: optionalText(60),
   quantity: z.number({ error: 'Enter how many dies' }).int('A whole number of dies').min(1, 'At least 1 die').max(100, 'At most 100 dies'),
@@ -92,7 +97,7 @@ export const DieRequestFields = z.object({
   caliperIn: z.number({ error: 'Enter the caliper' }).min(0.001, 'At least 0.001 in').max(0.5, 'At most 0.5 in').nullable().optional(),
   stockWeightGsm: z.number({ error: 'Enter the stock weight' }).min(20, 'At least 20 g/m²').max(3000, 'At most 3,000 g/m²').nullable().optional(),
   grain: Grain.nullable().optional(),
-  stockKind: z.enum(['paper', 'paperboard', 'corrugated']).default('paperboard'),
+  stockKind: z.enum(['paper', 'paperboard', 'corrugated']),
   /** The weight as the buyer entered it, e.g. "80 lb cover"; stockWeightGsm holds it in g/m². */
   stockWeightEntry: optionalText(40),
   foldAcrossGrain: z.boolean().nullable().optional(),
@@ -100,20 +105,28 @@ export const DieRequestFields = z.object({
   colourBreakOnFold: z.boolean().nullable().optional(),
   pressId: recordId(z.number(), 'Choose one of your presses').nullable().optional(),
   runSheets: z.number({ error: 'Enter the sheets to run' }).int('A whole number of sheets').min(1).max(10_000_000).nullable().optional(),
-  plannedLeadDays: z.number().int().min(1, 'At least 1 working day').max(60, 'At most 60 working days').default(5),
+  plannedLeadDays: z.number().int().min(1, 'At least 1 working day').max(60, 'At most 60 working days'),
   ruleTypes: z.array(RuleType).min(1, 'Choose at least one rule type').max(4),
-  counterWanted: z.boolean().default(false),
-  ejectionRubberWanted: z.boolean().default(true),
+  counterWanted: z.boolean(),
+  ejectionRubberWanted: z.boolean(),
   needByDate: IsoDate.nullable().optional(),
   bidDeadline: Instant.nullable().optional(),
   deliveryAddress: optionalText(500),
   deliveryPostcode: z.string().trim().max(12, 'At most 12 characters').nullable().optional(),
   notes: optionalText(4000),
-  visibility: Visibility.default('public'),
-  invitedShopIds: z.array(recordId(z.number(), 'Choose die shops from the list')).max(50).default([]),
+  visibility: Visibility,
+  invitedShopIds: z.array(recordId(z.number(), 'Choose die shops from the list')).max(50),
 });
 
-export const DieRequestCreate = DieRequestFields;
+const { shape } = DieRequestFields;
+export const DieRequestCreate = DieRequestFields.extend({
+  stockKind: shape.stockKind.default('paperboard'),
+  plannedLeadDays: shape.plannedLeadDays.default(5),
+  counterWanted: shape.counterWanted.default(false),
+  ejectionRubberWanted: shape.ejectionRubberWanted.default(true),
+  visibility: shape.visibility.default('public'),
+  invitedShopIds: shape.invitedShopIds.default([]),
+});
 export type DieRequestCreate = z.input<typeof DieRequestCreate>;
 export const DieRequestUpdate = DieRequestFields.partial().refine((v) => Object.keys(v).length > 0, { error: 'Nothing to change' });
 export type DieRequestUpdate = z.input<typeof DieRequestUpdate>;

@@ -181,6 +181,19 @@ describe('dieline uploads', () => {
     expect(link.status).toBe(200);
   });
 
+  // OWASP XXE Prevention: the entity is never expanded, and the refusal settles the file.
+  it('settles an SVG with a DOCTYPE and external entities as failed, with the reason', async () => {
+    const w = await createWorld();
+    const draft = await createDraft(w);
+    const xxe = rectangleSvg.replace('<svg', '<!DOCTYPE svg [<!ENTITY xxe SYSTEM "file:///etc/passwd">]>\n<svg').replace('</svg>', '<text>&xxe;</text></svg>');
+    const res = await upload(w, draft.id, 'entities.svg', xxe);
+    expect(res.status, JSON.stringify(res.body)).toBe(201);
+    const file = await analysed(w, res.body.id);
+    expect(file.analysisStatus).toBe('failed');
+    expect(file.analysisError).toMatch(/could not be read.*DOCTYPE/);
+    expect(JSON.stringify(file)).not.toContain('root:');
+  });
+
   it('stores a safe file name and downloads the same bytes through a short-lived link', async () => {
     const w = await createWorld();
     const draft = await createDraft(w);

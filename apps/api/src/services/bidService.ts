@@ -127,9 +127,11 @@ export function createBidService(
       const bid = await knex.transaction(async (trx) => {
         const { bid, request } = await ownBid(trx, actor, bidId);
         if (!biddingOpen(request)) throw closedError(request, actor.timeZone);
+        // A revision restates the price; notes it leaves out stay as they were (null clears them).
+        const restated = input.notes === undefined ? { ...input, notes: bid.notes } : input;
         const revised = await bid
           .$query(trx)
-          .patchAndFetch({ ...(await terms(trx, actor, request, input)), status: 'submitted', revision: bid.revision + 1, updatedAt: new Date() });
+          .patchAndFetch({ ...(await terms(trx, actor, request, restated)), status: 'submitted', revision: bid.revision + 1, updatedAt: new Date() });
         await BidRevision.query(trx).insert(revisionRow(revised, 'revised', actor));
         await recordAudit(trx, { organisationId: actor.organisationId, actorUserId: actor.id, entity: 'bid', entityId: bid.id, action: 'revised', detail: { revision: revised.revision } });
         return revised;

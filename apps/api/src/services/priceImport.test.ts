@@ -32,6 +32,17 @@ describe('price history import', () => {
     ]);
   });
 
+  // PostgreSQL has no year 0000; the dates taken run from 1900-01-01 to 2200-12-31.
+  it('reports a date outside the range taken as a bad row, not a database error', () => {
+    const far = `${csv}0000-01-01,Acme Dies,100.00,110.00,20,4,0\n2201-01-01,Acme Dies,100.00,110.00,20,4,0\n`;
+    const { errors } = readImport(far, previewImport(far).suggested as Record<string, string>, 'USD');
+    expect(errors.map((e) => [e.row, e.field])).toEqual([
+      [4, 'Date'],
+      [5, 'Date'],
+    ]);
+    expect(errors[0]!.message).toMatch(/from 1900-01-01 to 2200-12-31/);
+  });
+
   it('refuses a mapping without the required columns, and a file that is not CSV', () => {
     expect(() => readImport(csv, { pricedOn: 'Date' }, 'USD')).toThrow(/Choose a column for: Die shop, Die price, Rule length/);
     expect(() => previewImport('only a header\n')).toThrow(/at least one row/);

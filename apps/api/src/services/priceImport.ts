@@ -1,4 +1,4 @@
-import { importFields, type ImportField, type ImportPreviewDto, type ImportRowError } from '@kerfmark/contracts';
+import { dateInRange, earliestDate, importFields, latestDate, type ImportField, type ImportPreviewDto, type ImportRowError } from '@kerfmark/contracts';
 import { COMPLEXITY_FEATURES_PER_INCH } from '@kerfmark/dieline';
 import { parseMoneyInput } from '@kerfmark/pricing';
 import Papa from 'papaparse';
@@ -78,6 +78,7 @@ export function readImport(text: string, mapping: Record<string, string>, defaul
     };
     const pricedOn = cell('pricedOn');
     if (!/^\d{4}-\d{2}-\d{2}$/.test(pricedOn) || Number.isNaN(Date.parse(`${pricedOn}T00:00:00Z`))) fail('pricedOn', `“${pricedOn}” is not a date as YYYY-MM-DD`);
+    else if (!dateInRange(pricedOn)) fail('pricedOn', `“${pricedOn}” is not a date from ${earliestDate} to ${latestDate}`);
     const shopName = cell('shopName');
     if (!shopName) fail('shopName', 'Empty');
     const currency = (cell('currency') || defaultCurrency).toUpperCase();

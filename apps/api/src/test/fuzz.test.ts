@@ -29,7 +29,7 @@ import {
 } from '@kerfmark/contracts';
 import { DieRequest, DielineFile } from '../models';
 import { bidBody, inDays, rectangleDxf } from './fixtures';
-import { csvText, edgeBodies, jsonBody, junkText, pathJunk, queryEdges, queryString } from './fuzzInputs';
+import { csvText, edgeBodies, extremeDates, jsonBody, junkText, pathJunk, queryEdges, queryString } from './fuzzInputs';
 import { app, createOpenRequest, createPress, createUser, createWorld, knex, PASSWORD, signIn, unique, type World } from './harness';
 import { routeList, routesReadingQuery } from './routeList';
 
@@ -312,6 +312,26 @@ describe('fuzzing every route that takes input', () => {
         );
       });
     }
+  }
+});
+
+/** The date and instant fields of a body or a filter, by name. */
+const dateKey = /date|deadline|until|^runOn$|^(from|to)$|needBy/i;
+
+describe('extreme dates in every date field', () => {
+  for (const [route, c] of Object.entries(cases)) {
+    const bodyKeys = shapeKeys(c.body?.schema).filter((k) => dateKey.test(k));
+    const queryKeys = shapeKeys(c.query).filter((k) => dateKey.test(k));
+    if (!bodyKeys.length && !queryKeys.length) continue;
+    it(`${route}: ${[...bodyKeys, ...queryKeys].join(', ')} at and past the edges never answer 500`, async () => {
+      for (const value of extremeDates) {
+        for (const key of bodyKeys) {
+          const body = { ...c.body!.example(), [key]: value };
+          expectClearAnswer(await sendJson(route, c.params?.(), body), body);
+        }
+        for (const key of queryKeys) expectClearAnswer(await send(route, c.params?.()).query({ [key]: value }), { [key]: value });
+      }
+    });
   }
 });
 

@@ -41,6 +41,26 @@ const encodable = (s: string) => {
 /** Dates and instants, real, impossible and out of range. */
 const oddDates = ['2026-02-30', '2026-13-01', '0000-01-01', '9999-12-31', '275760-09-14', '2026-1-1', '1970-01-01T00:00:00Z', '2026-12-01T25:61:00+00:00'];
 
+/**
+ * Dates at and past the edges: PostgreSQL has no year 0 (ISO 8601's 0000 is 1 BC) and refuses it;
+ * the schemas take 1900-01-01 to 2200-12-31. Offsets move an instant across the edge.
+ */
+export const extremeDates = [
+  '0000-01-01',
+  '0000-01-01T00:00:00Z',
+  '0000-12-31T23:59:59-14:00',
+  '0001-01-01',
+  '1899-12-31',
+  '1899-12-31T23:59:59Z',
+  '1900-01-01',
+  '1900-01-01T00:00:00+14:00',
+  '2200-12-31',
+  '2200-12-31T23:59:59-14:00',
+  '2201-01-01',
+  '9999-12-31',
+  '9999-12-31T23:59:59+00:00',
+];
+
 /** Numbers at and past the edges of the columns they land in (PostgreSQL integer is 4 bytes). */
 const edgeNumbers = [0, -0, -1, 0.5, 1e-9, 2_147_483_647, 2_147_483_648, 9_999_999_999_999, Number.MAX_SAFE_INTEGER, 1e308, -1e308];
 

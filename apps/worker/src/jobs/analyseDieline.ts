@@ -2,6 +2,8 @@ import { analyseDieline, DielineError } from '@kerfmark/dieline';
 import type { Storage } from '@kerfmark/storage';
 import type { Knex } from 'knex';
 
+const UNREADABLE = 'Kerfmark could not measure this file. Save it again from your drawing program as DXF, SVG or PDF and upload it again.';
+
 export type AnalysisResult = 'done' | 'failed' | 'skipped';
 
 /**
@@ -23,29 +25,32 @@ export async function analyseDielineFile(knex: Knex, storage: Storage, fileId: n
     await knex('dieline_files').where({ id: fileId }).update({ analysis_status: 'pending' });
     throw error;
   }
+  let measured: ReturnType<typeof analyseDieline>;
   try {
-    const { metrics, preview } = analyseDieline(content, {
+    measured = analyseDieline(content, {
       fileName: file.file_name,
       layerMap: file.layer_map ?? {},
       press: press ? { widthIn: Number(press.max_sheet_width_in), lengthIn: Number(press.max_sheet_length_in) } : null,
     });
-    await knex('dieline_files')
-      .where({ id: fileId })
-      .update({
-        analysis_status: 'done',
-        analysis_error: null,
-        metrics: JSON.stringify(metrics),
-        preview: JSON.stringify(preview),
-        analysed_at: new Date(),
-      });
-    return 'done';
   } catch (error) {
-    if (!(error instanceof DielineError)) throw error;
+    // Whatever the reading throws is about this file (a parser library's plain Error included):
+    // settle it as failed, or it stays "measuring" and every sweep trips on it again.
+    const reason = error instanceof DielineError ? error.message : UNREADABLE;
     await knex('dieline_files')
       .where({ id: fileId })
-      .update({ analysis_status: 'failed', analysis_error: error.message, metrics: null, preview: null, analysed_at: new Date() });
+      .update({ analysis_status: 'failed', analysis_error: reason, metrics: null, preview: null, analysed_at: new Date() });
     return 'failed';
   }
+  await knex('dieline_files')
+    .where({ id: fileId })
+    .update({
+      analysis_status: 'done',
+      analysis_error: null,
+      metrics: JSON.stringify(measured.metrics),
+      preview: JSON.stringify(measured.preview),
+      analysed_at: new Date(),
+    });
+  return 'done';
 }
 
 /** Files whose analysis job was lost (Redis down or flushed), oldest first. */

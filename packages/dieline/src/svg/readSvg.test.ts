@@ -153,6 +153,13 @@ describe('readSvg bad input', () => {
     expect(fail('<svg xmlns="http://www.w3.org/2000/svg">\n<g><line x2="1"/></svg>')).toMatch(/^MALFORMED: The SVG file is not well-formed XML: .*\(line 2/);
   });
 
+  // fast-xml-parser throws a plain Error on a DOCTYPE with external entities: it must reach the
+  // user as a dieline error, and the entity must never be expanded (OWASP XXE Prevention).
+  it('refuses a DOCTYPE with external entities as a dieline error, without expanding them', () => {
+    const xxe = `<?xml version="1.0"?>\n<!DOCTYPE svg [<!ENTITY xxe SYSTEM "file:///etc/passwd">]>\n${svg('<rect class="cut" width="96" height="96"/><text>&xxe;</text>')}`;
+    expect(fail(xxe)).toMatch(/^MALFORMED: The SVG file could not be read: .*entit/i);
+  });
+
   it('refuses a truncated SVG', () => {
     const good = svg('<g id="cut"><line x2="96"/><line x2="96" y2="5"/></g>');
     expect(fail(good.slice(0, good.length - 12))).toMatch(/^TRUNCATED: The SVG file ends before its elements are closed/);

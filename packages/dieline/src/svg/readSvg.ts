@@ -29,6 +29,17 @@ const NOT_DRAWN = new Set([
 /** Attributes that may name a rule type, nearest first: labels, then id, then classes. */
 const LABEL_ATTRIBUTES = ['inkscape:label', 'data-label', 'data-name', 'aria-label', 'sodipodi:label', 'id'];
 
+// fast-xml-parser throws a plain Error where it refuses a document (a DOCTYPE with external
+// entities, which are never expanded): every refusal is the user's file, so say so.
+function parseXml(parser: XMLParser, text: string): XmlNode[] {
+  try {
+    return parser.parse(text) as XmlNode[];
+  } catch (error) {
+    const why = error instanceof Error ? error.message : String(error);
+    throw new DielineError('MALFORMED', `The SVG file could not be read: ${why}. Export it again as plain SVG, without a DOCTYPE.`);
+  }
+}
+
 /** Reads an SVG document into rule paths in inches. */
 export function readSvg(text: string, opts: ReadSvgOptions): Drawing {
   const valid = XMLValidator.validate(text);
@@ -52,7 +63,7 @@ export function readSvg(text: string, opts: ReadSvgOptions): Drawing {
     ignoreDeclaration: true,
     ignorePiTags: true,
   });
-  const doc = parser.parse(text) as XmlNode[];
+  const doc = parseXml(parser, text);
   const root = doc.find((n) => localName(tagOf(n)) === 'svg');
   if (!root) throw new DielineError('MALFORMED', 'The file is XML but has no <svg> root element.');
 
