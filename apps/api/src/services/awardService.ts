@@ -5,7 +5,7 @@ import type { AuthUser } from '../auth/passport';
 import { badRequest, conflict, HttpError, notFound } from '../lib/httpError';
 import { todayIn } from '../lib/todayIn';
 import { Award, Bid, DieRequest, Organisation, User } from '../models';
-import { biddingOpen } from './bidService';
+import { assertMay, biddingOpen, loadFacts, visibleParts } from '../access';
 import type { ServiceDeps } from './deps';
 import { ocdsRelease } from './documents/ocdsRelease';
 import { purchaseOrderPdf } from './documents/purchaseOrderPdf';
@@ -13,7 +13,8 @@ import { notifyOrganisation } from './notificationService';
 import type { createLibraryService } from './libraryService';
 import type { createPriceHistoryService } from './priceHistoryService';
 import type { createRequestService } from './requestService';
-import { checkTransition, transitionRequest } from './requestStatus';
+import { transitionRequest } from './requestStatus';
+import { tellBidders } from './tellBidders';
 import { primaryFile } from './requestViews';
 
 export function createAwardService(
@@ -26,27 +27,22 @@ export function createAwardService(
   const notify = (trx: Knex.Transaction, orgId: number, notice: Parameters<typeof notifyOrganisation>[3]) =>
     notifyOrganisation(trx, { emails: deps.emails, appUrl: config.appUrl }, orgId, notice);
 
-  async function bidderShops(trx: Knex.Transaction, requestId: number): Promise<number[]> {
-    return (await Bid.query(trx).where({ requestId }).select('shopId')).map((b) => b.shopId);
-  }
-
   async function closeInside(trx: Knex.Transaction, actor: AuthUser, request: DieRequest) {
-    const early = biddingOpen(request);
+    // Purchasing's early close is the only way, besides the clock, that sealed bids open: every bidder is told.
+    const early = biddingOpen(request, new Date());
     await transitionRequest(trx, actor, request.id, 'close-bidding', {
       reminders: deps.reminders,
       patch: { biddingClosedAt: new Date(), closedEarly: early },
       detail: { early },
     });
-    for (const shopId of await bidderShops(trx, request.id)) {
-      await notify(trx, shopId, {
-        kind: 'bidding_closed',
-        title: `Bidding closed: ${request.title}`,
-        body: early
-          ? `The buyer closed bidding on "${request.title}" before the deadline. Bids can no longer be changed.`
-          : `Bidding on "${request.title}" has closed. Bids can no longer be changed.`,
-        link: `/requests/${request.id}`,
-      });
-    }
+    await tellBidders(trx, deps, request.id, {
+      kind: 'bidding_closed',
+      title: `Bidding closed: ${request.title}`,
+      body: early
+        ? `The buyer closed bidding on "${request.title}" before the deadline. Bids can no longer be changed.`
+        : `Bidding on "${request.title}" has closed. Bids can no longer be changed.`,
+      link: `/requests/${request.id}`,
+    });
   }
 
   /** The awarded shop of a request, for the moves only that shop may make. */
@@ -70,15 +66,10 @@ export function createAwardService(
      */
     async award(actor: AuthUser, requestId: number, input: { bidId: number; reason?: string }) {
       const awardId = await knex.transaction(async (trx) => {
-        await requests.findOwned(actor, requestId, trx);
-        const request = await DieRequest.query(trx).findById(requestId).forUpdate().throwIfNotFound();
-        // Who may award at all comes before whether now is the time.
-        checkTransition(actor, { ...request, status: 'bidding_closed' } as DieRequest, 'award', null);
-        if (request.status === 'awarded' || (await awardOf(trx, requestId))) throw conflict('This request has already been awarded.');
-        if (request.status === 'open') {
-          if (biddingOpen(request)) throw conflict('Close bidding before awarding: bids are still sealed.');
-          await closeInside(trx, actor, request);
-        }
+        const { request, facts } = await requests.factsFor(actor, requestId, trx);
+        // Before any bid is read: a request whose bids are sealed (or sealed for good) says nothing of them.
+        assertMay(actor, facts, 'award');
+        if (request.status === 'open') await closeInside(trx, actor, request);
         const bid = await Bid.query(trx).findOne({ id: input.bidId, requestId }).withGraphFetched('shop');
         if (!bid || bid.status !== 'submitted') throw notFound('That bid');
         if (bid.validUntil < todayIn(actor.timeZone)) {
@@ -116,9 +107,8 @@ export function createAwardService(
           throw error;
         }
         await transitionRequest(trx, actor, requestId, 'award', { reminders: deps.reminders, detail: { bidId: bid.id, poNumber, reason } });
-        for (const shopId of await bidderShops(trx, requestId)) {
-          const won = shopId === bid.shopId;
-          await notify(trx, shopId, won
+        await tellBidders(trx, deps, requestId, (shopId) =>
+          shopId === bid.shopId
             ? {
                 kind: 'award_won',
                 title: `Awarded to you: ${request.title} (${poNumber})`,
@@ -130,8 +120,8 @@ export function createAwardService(
                 title: `Not awarded: ${request.title}`,
                 body: `Thank you for bidding on "${request.title}". This job was not awarded to your shop.`,
                 link: `/requests/${requestId}`,
-              });
-        }
+              },
+        );
         return award.id;
       });
       // The PDF is made and kept now; should the store be down, it is made again when opened.
@@ -143,9 +133,9 @@ export function createAwardService(
     async purchaseOrder(actor: AuthUser, awardId: number): Promise<{ fileName: string; pdf: Buffer }> {
       const award = await Award.query().findById(awardId).withGraphFetched('shop');
       if (!award) throw notFound('That purchase order');
-      const request = await DieRequest.query().findById(award.requestId).withGraphFetched('[organisation, files(byUpload)]');
-      const mayRead = request && (actor.organisationId === request.organisationId || actor.organisationId === award.shopId);
-      if (!request || !mayRead) throw notFound('That purchase order');
+      const found = await loadFacts(knex, award.requestId);
+      if (!found || !visibleParts(actor, found.facts, new Date()).purchaseOrder) throw notFound('That purchase order');
+      const request = await found.request.$fetchGraph('[organisation, files(byUpload)]');
       const fileName = `${award.poNumber}.pdf`;
       if (award.poS3Key) {
         try {
@@ -199,7 +189,11 @@ export function createAwardService(
     async ocds(actor: AuthUser, requestId: number): Promise<Record<string, unknown>> {
       const request = await requests.findOwned(actor, requestId);
       const award = await awardOf(knex, requestId);
-      if (!award) throw new HttpError(409, 'not_awarded', 'The export is available once the request has been awarded.');
+      const found = await loadFacts(knex, requestId);
+      // Every bid and its shop are in it: only once bids are opened and awarded.
+      if (!award || !found || !visibleParts(actor, found.facts, new Date()).ocdsRelease) {
+        throw new HttpError(409, 'not_awarded', 'The export is available once the request has been awarded.');
+      }
       await request.$fetchGraph('organisation');
       const bids = await Bid.query().where({ requestId }).withGraphFetched('shop').orderBy('submittedAt');
       const shopOf = (bid: Bid) => ({ id: bid.shopId, name: bid.shop?.name ?? '' });

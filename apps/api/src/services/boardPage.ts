@@ -3,7 +3,7 @@ import type { Knex } from 'knex';
 import type { z } from 'zod';
 import { containsPattern } from '../lib/containsPattern';
 import { DieRequest } from '../models';
-import { openToShop } from './openToShop';
+import { openToShop } from '../access';
 import { readRequestGraph } from './requestGraph';
 import { SUMMARY_COLUMNS } from './requestViews';
 
