@@ -5,7 +5,7 @@ export { maySee, visibleParts, type VisibleParts } from './visibility';
 export { actionRefusal, openActions, transitionRefusal, type RequestAction, type StatusAction } from './actions';
 export { deadlineMoveRefusal, MIN_DEADLINE_NOTICE_MS, type Refusal } from './deadline';
 export { visibleTo } from './visibleQuery';
-export { openToShop } from './openToShop';
+export { biddableByShop, openToShop } from './openToShop';
 export { factsOf, loadFacts, TIES_PART, type RequestTies } from './loadFacts';
 export { refuse, assertMay } from './refuse';
 export { presentToOwner } from './presentToOwner';

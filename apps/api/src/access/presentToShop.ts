@@ -7,6 +7,8 @@ import { questionDto, requestFields } from './presentRequest';
 import { biddingOpen } from './sealed';
 import { visibleParts } from './visibility';
 
+const MAKING: readonly string[] = ['in_production', 'shipped', 'received'];
+
 /**
  * A request's page for a die shop: the job, the answered questions and its own, its own bid, and
  * after the award only whether it won; the winner also gets its terms, the delivery address and
@@ -16,8 +18,13 @@ export function presentToShop(request: DieRequest, facts: RequestFacts, actor: A
   const parts = visibleParts(actor, facts, now);
   const award = request.award ?? null;
   const won = parts.award === 'own-terms';
+  const awarded = award !== null;
+  const fields = requestFields(request, actor);
   return {
-    ...requestFields(request, actor),
+    ...fields,
+    // A shop that did not win learns that the job was awarded, not how the winner is getting on.
+    status: awarded && !won && MAKING.includes(request.status) ? 'awarded' : request.status,
+    shippedAt: parts.delivery ? fields.shippedAt : null,
     deliveryAddress: parts.delivery ? request.deliveryAddress : null,
     invitedShops: [],
     questions: (request.questions ?? []).filter((q) => q.answer !== null || q.shopId === actor.organisationId).map((q) => questionDto(actor, q)),

@@ -133,3 +133,26 @@ describe('the buyer’s home page before the deadline', () => {
     expect(after.body.atRisk.find((i: { requestId: number }) => i.requestId === r.id)?.reason).toMatch(/lowest bid’s promised ship date/);
   });
 });
+
+describe('after the award', () => {
+  it('a shop that did not win learns only that; the printer’s notices and e-mails name no bid before it', async () => {
+    const r = await withTwoBids();
+    // Before the deadline the printer's notices say nothing of the bids.
+    for (const user of [w.users.buyer, w.users.purchasing]) expectNothingOfTheBids(await noticesOf(user.id, r.id));
+    expect((await request(app).post(`/api/requests/${r.id}/close-bidding`).set(bearer(w.tokens.purchasing))).status).toBe(200);
+    // The first shop's dearer bid wins, with a reason.
+    const award = await request(app).post(`/api/requests/${r.id}/award`).set(bearer(w.tokens.purchasing)).send({ bidId: r.bidIds[0], reason: 'Faster lead time.' });
+    expect(award.status, JSON.stringify(award.body)).toBe(200);
+    await request(app).post(`/api/requests/${r.id}/start-production`).set(bearer(w.tokens.estimator)).expect(200);
+
+    const seen = await request(app).get(`/api/requests/${r.id}`).set(bearer(second.token));
+    expect(seen.status).toBe(200);
+    expect(seen.body).toMatchObject({ outcome: 'not_awarded', award: null, status: 'awarded', shippedAt: null, deliveryAddress: null, trackingNote: null });
+    expect(JSON.stringify(seen.body)).not.toContain(w.shop.name);
+    expect(JSON.stringify(seen.body)).not.toContain('83500');
+    expect((await request(app).get(`/api/purchase-orders/${award.body.award.id}/pdf`).set(bearer(second.token))).status).toBe(404);
+    const lost = await noticesOf(second.estimator.id, r.id);
+    expect(lost.map((n) => n.kind)).toContain('award_lost');
+    for (const n of lost) expect(`${n.title} ${n.body}`).not.toMatch(/\$|83,500|835|Faster/);
+  });
+});
