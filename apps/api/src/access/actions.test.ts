@@ -32,6 +32,10 @@ describe('request status transitions', () => {
     expect(openActions(purchasing, to('cancelled'), NOW)).toEqual(['answer']);
   });
 
+  it('never leads back to bidding once the bids are opened', () => {
+    expect(requestTransitions.filter((t) => t.to === 'open').map((t) => t.from)).toEqual(['draft']);
+  });
+
   it('checks the side and the role: another shop’s job is a 404', () => {
     expect(transitionRefusal(buyer, to('open'), 'close-bidding').refusal).toMatchObject({ status: 403, message: /Only purchasing, admin/ });
     expect(transitionRefusal(otherPrinter, to('draft'), 'publish').refusal).toMatchObject({ status: 403 });
