@@ -5,6 +5,8 @@ export const notificationKindLabels = {
   bid_deadline_48h: 'Bids due in 48 hours (to shops that have not bid)',
   bid_deadline_24h: 'Bids due in 24 hours (to shops that have not bid)',
   bidding_closed: 'Bidding closed on a request you bid on',
+  deadline_changed: 'The bid deadline moved on a request you bid on',
+  request_cancelled: 'A request you bid on was cancelled',
   bids_ready: 'Bids ready to compare',
   validity_ending: 'The best bid’s price is about to lapse',
   award_won: 'A job was awarded to your shop',

@@ -44,7 +44,7 @@ export const requestTransitions: readonly Transition[] = [
   { from: 'draft', to: 'cancelled', action: 'cancel', actor: 'printer', roles: ['buyer', 'purchasing', 'admin'] },
   { from: 'open', to: 'bidding_closed', action: 'close-bidding', actor: 'printer', roles: ['purchasing', 'admin'] },
   { from: 'open', to: 'cancelled', action: 'cancel', actor: 'printer', roles: ['buyer', 'purchasing', 'admin'] },
-  { from: 'bidding_closed', to: 'open', action: 'reopen', actor: 'printer', roles: ['purchasing', 'admin'] },
+  // No way back to open: once the printer has seen the bids, they are never sealed again.
   { from: 'bidding_closed', to: 'awarded', action: 'award', actor: 'printer', roles: ['purchasing', 'admin'] },
   { from: 'bidding_closed', to: 'cancelled', action: 'cancel', actor: 'printer', roles: ['purchasing', 'admin'] },
   { from: 'awarded', to: 'in_production', action: 'start-production', actor: 'awarded_shop', roles: ['estimator', 'admin'] },

@@ -6,6 +6,7 @@ import { Press } from './Press';
 import type { RequestQuestion } from './RequestQuestion';
 import type { Award } from './Award';
 import type { SubmittedBid } from './SubmittedBid';
+import type { RequestTies } from '../access/loadFacts';
 
 export class DieRequest extends Model {
   static override tableName = 'die_requests';
@@ -57,6 +58,8 @@ export class DieRequest extends Model {
   press?: Press | null;
   files?: DielineFile[];
   invitedShops?: Organisation[];
+  /** The shops tied to it, read with the request by readRequestGraph for the access rules. */
+  ties?: RequestTies;
   /** Read with the request by readRequestGraph. */
   award?: Award | null;
   questions?: RequestQuestion[];

@@ -1,6 +1,8 @@
 import request from 'supertest';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { newToken } from '../lib/hashToken';
+import type { OrgKind } from '@kerfmark/contracts';
+import { actionRefusal, loadFacts, maySee, type Actor as AccessActor, type RequestAction } from '../access';
 import { DielineFile, Invitation, Notification, type Organisation, type User } from '../models';
 import { bidBody, inDays, rectangleSvg } from '../test/fixtures';
 import { app, createOpenRequest, createPress, createWorld, knex, PASSWORD, unique, type World } from '../test/harness';
@@ -425,6 +427,64 @@ let world: World;
 beforeAll(async () => {
   world = await createWorld();
   fixtures.set(world, await setUp(world));
+});
+
+/**
+ * The request routes whose answer the access module gives: the action asked, the request it is
+ * asked of, the route's own gate on the kind of organisation, and the status of a success.
+ */
+interface ModuleCase {
+  action: RequestAction | 'see';
+  target: (f: Fixtures, actor: Actor) => number;
+  kind?: OrgKind;
+  ok: number;
+}
+const printerKind = 'printer' as const;
+const shopKind = 'die_shop' as const;
+const byModule: Record<string, ModuleCase> = {
+  'GET /api/requests/:id': { action: 'see', target: (f) => f.open, ok: 200 },
+  'PATCH /api/requests/:id': { action: 'edit', target: (f) => f.draft, kind: printerKind, ok: 200 },
+  'POST /api/requests/:id/publish': { action: 'publish', target: (f, a) => f.toPublish[a], kind: printerKind, ok: 200 },
+  'POST /api/requests/:id/cancel': { action: 'cancel', target: (f, a) => f.toCancel[a], kind: printerKind, ok: 200 },
+  'POST /api/requests/:id/files': { action: 'edit', target: (f) => f.draft, kind: printerKind, ok: 201 },
+  'POST /api/requests/:id/questions': { action: 'ask', target: (f) => f.open, kind: shopKind, ok: 201 },
+  'POST /api/requests/:id/questions/:questionId/answer': { action: 'answer', target: (f) => f.open, kind: printerKind, ok: 200 },
+  'POST /api/requests/:id/bids': { action: 'bid', target: (f, a) => f.toBidOn[a], kind: shopKind, ok: 201 },
+  'POST /api/requests/:id/decline': { action: 'decline', target: (f) => f.open, kind: shopKind, ok: 204 },
+  'PATCH /api/bids/:id': { action: 'revise', target: (f) => f.bid.id, kind: shopKind, ok: 200 },
+  'POST /api/requests/:id/close-bidding': { action: 'close-bidding', target: (f, a) => f.toClose[a], kind: printerKind, ok: 200 },
+  'POST /api/requests/:id/award (bids still sealed)': { action: 'award', target: (f) => f.open, kind: printerKind, ok: 200 },
+  'POST /api/requests/:id/award (bidding closed)': { action: 'award', target: (f, a) => f.toAward[a].id, kind: printerKind, ok: 200 },
+  'POST /api/requests/:id/start-production': { action: 'start-production', target: (f, a) => f.toStart[a], kind: shopKind, ok: 200 },
+  'POST /api/requests/:id/ship': { action: 'ship', target: (f, a) => f.toShip[a], kind: shopKind, ok: 200 },
+  'POST /api/requests/:id/receive': { action: 'receive', target: (f, a) => f.toReceive[a], kind: printerKind, ok: 200 },
+};
+
+/** What the access module answers for a signed-in actor, before the route is called. */
+async function moduleAnswer(w: World, actor: Exclude<Actor, 'anonymous'>, rule: ModuleCase): Promise<number> {
+  const user = w.users[actor];
+  const who: AccessActor = { organisationId: user.organisationId, orgKind: shopSide.includes(actor) ? 'die_shop' : 'printer', role: user.role };
+  // The route's gate on the kind of organisation answers first.
+  if (rule.kind && who.orgKind !== rule.kind) return 403;
+  const { facts } = (await loadFacts(knex, rule.target(fx(w), actor)))!;
+  if (rule.action === 'see') return maySee(who, facts) ? rule.ok : 404;
+  return actionRefusal(who, facts, rule.action, new Date())?.status ?? rule.ok;
+}
+
+// Runs before the matrix below changes its targets.
+describe('the matrix and the access module', () => {
+  it('names only cases of the matrix', () => {
+    expect(Object.keys(byModule).filter((name) => !cases.some((c) => c.name === name))).toEqual([]);
+  });
+  for (const [name, rule] of Object.entries(byModule)) {
+    it(`${name}: the module gives each actor the matrix's answer`, async () => {
+      const expected = cases.find((c) => c.name === name)!.expect;
+      for (const actor of actors) {
+        if (actor === 'anonymous') continue;
+        expect(await moduleAnswer(world, actor, rule), actor).toBe(expected[actor]);
+      }
+    });
+  }
 });
 
 describe('role-by-route access', () => {

@@ -257,7 +257,7 @@ describe('what the award rests on', () => {
     const file = await knex('dielineFiles').where({ requestId: staged.id }).first();
     const res = await request(app).post(`/api/files/${file.id}/primary`).set(bearer(w.tokens.buyer));
     expect(res.status).toBe(409);
-    expect(res.body.error.message).toMatch(/primary file can be changed on a draft or an open request only/);
+    expect(res.body.error.message).toMatch(/Only a draft, or an open request before its deadline, can be changed/);
   });
 
   it('answers a shop asking for its bid on a request it may not see with a 404, not an empty answer', async () => {

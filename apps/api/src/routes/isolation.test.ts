@@ -1,12 +1,15 @@
 import request from 'supertest';
 import { beforeAll, describe, expect, it } from 'vitest';
-import { Invitation } from '../models';
-import { app, createPress, createWorld, type World } from '../test/harness';
+import { loadFacts, maySee, visibleParts } from '../access';
+import { DielineFile, Invitation } from '../models';
+import { app, createPress, createWorld, knex, type World } from '../test/harness';
+import { createRequestAt, type StagedRequest } from '../test/requestStages';
 
 let a: World;
 let b: World;
 let pressOfA: number;
 let invitationOfA: number;
+let awardedOfA: StagedRequest;
 
 beforeAll(async () => {
   [a, b] = await Promise.all([createWorld(), createWorld()]);
@@ -16,6 +19,7 @@ beforeAll(async () => {
     .set('Authorization', `Bearer ${a.tokens.printerAdmin}`)
     .send({ email: `isolated-${Date.now()}@test.example`, name: 'Isolated Person', role: 'buyer' });
   invitationOfA = invited.body.id;
+  awardedOfA = await createRequestAt(a, 'awarded');
   expect(await Invitation.query().findById(invitationOfA)).toBeTruthy();
 });
 
@@ -63,6 +67,39 @@ describe('cross-organisation isolation', () => {
     for (const id of ['abc', '-1', '0', '99999999999', '1.5']) {
       const res = await request(app).patch(`/api/presses/${id}`).set('Authorization', `Bearer ${a.tokens.printerAdmin}`).send({ name: 'x' });
       expect(res.status).toBe(404);
+    }
+  });
+
+  it('hides another printer’s requests, bids, files and documents by every route, as the access module says', async () => {
+    const { facts } = (await loadFacts(knex, awardedOfA.id))!;
+    const outsider = { organisationId: b.printer.id, orgKind: 'printer' as const, role: 'admin' as const };
+    expect(maySee(outsider, facts)).toBe(false);
+    expect(visibleParts(outsider, facts, new Date())).toMatchObject({ bids: 'none', award: 'none', purchaseOrder: false, ocdsRelease: false });
+    const file = await DielineFile.query().findOne({ requestId: awardedOfA.id }).throwIfNotFound();
+    const id = awardedOfA.id;
+    const calls = [
+      request(app).get(`/api/requests/${id}`),
+      request(app).patch(`/api/requests/${id}`).send({ notes: 'Taken over' }),
+      request(app).get(`/api/requests/${id}/bids`),
+      request(app).get(`/api/requests/${id}/ocds`),
+      request(app).get(`/api/requests/${id}/fair-price`),
+      request(app).post(`/api/requests/${id}/cancel`).send({ reason: 'x' }),
+      request(app).post(`/api/requests/${id}/close-bidding`),
+      request(app).post(`/api/requests/${id}/award`).send({ bidId: awardedOfA.bidId }),
+      request(app).post(`/api/requests/${id}/receive`).send({ condition: 'good' }),
+      request(app).get(`/api/purchase-orders/${awardedOfA.awardId}/pdf`),
+      request(app).get(`/api/files/${file.id}`),
+      request(app).get(`/api/files/${file.id}/download`),
+    ];
+    for (const [i, call] of calls.entries()) {
+      const res = await call.set('Authorization', `Bearer ${b.tokens.printerAdmin}`);
+      expect(res.status, `call ${i}`).toBe(404);
+      expect(JSON.stringify(res.body)).not.toContain(a.shop.name);
+    }
+    // And the die shop of the other world: the awarded job is none of its business either.
+    for (const path of [`/api/requests/${id}`, `/api/requests/${id}/my-bid`, `/api/purchase-orders/${awardedOfA.awardId}/pdf`, `/api/files/${file.id}`]) {
+      const res = await request(app).get(path).set('Authorization', `Bearer ${b.tokens.estimator}`);
+      expect(res.status, path).toBe(404);
     }
   });
 });

@@ -4,16 +4,16 @@ import type { Knex } from 'knex';
 import type { AuthUser } from '../auth/passport';
 import { badRequest, conflict, HttpError, notFound } from '../lib/httpError';
 import { todayIn } from '../lib/todayIn';
-import { Award, Bid, DieRequest, Organisation, User } from '../models';
-import { biddingOpen } from './bidService';
+import { Award, Bid, DieRequest, Organisation } from '../models';
+import { assertMay, biddingOpen } from '../access';
 import type { ServiceDeps } from './deps';
-import { ocdsRelease } from './documents/ocdsRelease';
-import { purchaseOrderPdf } from './documents/purchaseOrderPdf';
+import { createAwardDocuments } from './awardDocuments';
 import { notifyOrganisation } from './notificationService';
 import type { createLibraryService } from './libraryService';
 import type { createPriceHistoryService } from './priceHistoryService';
 import type { createRequestService } from './requestService';
-import { checkTransition, transitionRequest } from './requestStatus';
+import { transitionRequest } from './requestStatus';
+import { tellBidders } from './tellBidders';
 import { primaryFile } from './requestViews';
 
 export function createAwardService(
@@ -22,31 +22,26 @@ export function createAwardService(
   library: ReturnType<typeof createLibraryService>,
   priceHistory: ReturnType<typeof createPriceHistoryService>,
 ) {
-  const { knex, config, storage, logger } = deps;
+  const { knex, config, logger } = deps;
   const notify = (trx: Knex.Transaction, orgId: number, notice: Parameters<typeof notifyOrganisation>[3]) =>
     notifyOrganisation(trx, { emails: deps.emails, appUrl: config.appUrl }, orgId, notice);
 
-  async function bidderShops(trx: Knex.Transaction, requestId: number): Promise<number[]> {
-    return (await Bid.query(trx).where({ requestId }).select('shopId')).map((b) => b.shopId);
-  }
-
   async function closeInside(trx: Knex.Transaction, actor: AuthUser, request: DieRequest) {
-    const early = biddingOpen(request);
+    // Purchasing's early close is the only way, besides the clock, that sealed bids open: every bidder is told.
+    const early = biddingOpen(request, new Date());
     await transitionRequest(trx, actor, request.id, 'close-bidding', {
       reminders: deps.reminders,
       patch: { biddingClosedAt: new Date(), closedEarly: early },
       detail: { early },
     });
-    for (const shopId of await bidderShops(trx, request.id)) {
-      await notify(trx, shopId, {
-        kind: 'bidding_closed',
-        title: `Bidding closed: ${request.title}`,
-        body: early
-          ? `The buyer closed bidding on "${request.title}" before the deadline. Bids can no longer be changed.`
-          : `Bidding on "${request.title}" has closed. Bids can no longer be changed.`,
-        link: `/requests/${request.id}`,
-      });
-    }
+    await tellBidders(trx, deps, request.id, {
+      kind: 'bidding_closed',
+      title: `Bidding closed: ${request.title}`,
+      body: early
+        ? `The buyer closed bidding on "${request.title}" before the deadline. Bids can no longer be changed.`
+        : `Bidding on "${request.title}" has closed. Bids can no longer be changed.`,
+      link: `/requests/${request.id}`,
+    });
   }
 
   /** The awarded shop of a request, for the moves only that shop may make. */
@@ -54,7 +49,11 @@ export function createAwardService(
     return Award.query(trx).findOne({ requestId });
   }
 
+  const documents = createAwardDocuments(deps, requests);
+
   return {
+    ...documents,
+
     async closeBidding(actor: AuthUser, requestId: number) {
       await knex.transaction(async (trx) => {
         await requests.findOwned(actor, requestId, trx);
@@ -70,15 +69,10 @@ export function createAwardService(
      */
     async award(actor: AuthUser, requestId: number, input: { bidId: number; reason?: string }) {
       const awardId = await knex.transaction(async (trx) => {
-        await requests.findOwned(actor, requestId, trx);
-        const request = await DieRequest.query(trx).findById(requestId).forUpdate().throwIfNotFound();
-        // Who may award at all comes before whether now is the time.
-        checkTransition(actor, { ...request, status: 'bidding_closed' } as DieRequest, 'award', null);
-        if (request.status === 'awarded' || (await awardOf(trx, requestId))) throw conflict('This request has already been awarded.');
-        if (request.status === 'open') {
-          if (biddingOpen(request)) throw conflict('Close bidding before awarding: bids are still sealed.');
-          await closeInside(trx, actor, request);
-        }
+        const { request, facts } = await requests.factsFor(actor, requestId, trx);
+        // Before any bid is read: a request whose bids are sealed (or sealed for good) says nothing of them.
+        assertMay(actor, facts, 'award');
+        if (request.status === 'open') await closeInside(trx, actor, request);
         const bid = await Bid.query(trx).findOne({ id: input.bidId, requestId }).withGraphFetched('shop');
         if (!bid || bid.status !== 'submitted') throw notFound('That bid');
         if (bid.validUntil < todayIn(actor.timeZone)) {
@@ -116,9 +110,8 @@ export function createAwardService(
           throw error;
         }
         await transitionRequest(trx, actor, requestId, 'award', { reminders: deps.reminders, detail: { bidId: bid.id, poNumber, reason } });
-        for (const shopId of await bidderShops(trx, requestId)) {
-          const won = shopId === bid.shopId;
-          await notify(trx, shopId, won
+        await tellBidders(trx, deps, requestId, (shopId) =>
+          shopId === bid.shopId
             ? {
                 kind: 'award_won',
                 title: `Awarded to you: ${request.title} (${poNumber})`,
@@ -130,98 +123,13 @@ export function createAwardService(
                 title: `Not awarded: ${request.title}`,
                 body: `Thank you for bidding on "${request.title}". This job was not awarded to your shop.`,
                 link: `/requests/${requestId}`,
-              });
-        }
+              },
+        );
         return award.id;
       });
       // The PDF is made and kept now; should the store be down, it is made again when opened.
-      this.purchaseOrder(actor, awardId).catch((error: unknown) => logger.warn({ err: error, awardId }, 'purchase order PDF not stored yet'));
+      documents.purchaseOrder(actor, awardId).catch((error: unknown) => logger.warn({ err: error, awardId }, 'purchase order PDF not stored yet'));
       return requests.detail(actor, requestId);
-    },
-
-    /** The purchase order PDF: for the printer that issued it and the shop it was issued to. */
-    async purchaseOrder(actor: AuthUser, awardId: number): Promise<{ fileName: string; pdf: Buffer }> {
-      const award = await Award.query().findById(awardId).withGraphFetched('shop');
-      if (!award) throw notFound('That purchase order');
-      const request = await DieRequest.query().findById(award.requestId).withGraphFetched('[organisation, files(byUpload)]');
-      const mayRead = request && (actor.organisationId === request.organisationId || actor.organisationId === award.shopId);
-      if (!request || !mayRead) throw notFound('That purchase order');
-      const fileName = `${award.poNumber}.pdf`;
-      if (award.poS3Key) {
-        try {
-          return { fileName, pdf: Buffer.from(await storage.get(award.poS3Key)) };
-        } catch {
-          // made again below
-        }
-      }
-      const bid = await Bid.query().findById(award.bidId);
-      const buyer = await User.query().findById(award.awardedBy ?? 0);
-      const file = primaryFile(request.files);
-      const metrics = file?.metrics as DielineMetrics | null | undefined;
-      const shop = award.shop as Organisation;
-      const pdf = await purchaseOrderPdf({
-        poNumber: award.poNumber,
-        issuedAt: award.awardedAt,
-        timeZone: request.organisation?.timeZone ?? 'UTC',
-        buyer: {
-          organisation: request.organisation?.name ?? '',
-          contact: buyer?.name ?? '',
-          email: buyer?.email ?? '',
-          deliveryAddress: request.deliveryAddress,
-          deliveryPostcode: request.deliveryPostcode,
-        },
-        supplier: { organisation: shop.name, postcode: shop.postcode },
-        request: { id: request.id, title: request.title, jobReference: request.jobReference, needByDate: request.needByDate, quantity: request.quantity, ups: request.ups },
-        dieline: file && metrics ? { fileName: file.fileName, totalRuleIn: pricedLength(metrics.length), complexity: metrics.complexity } : null,
-        lines: (bid?.lines ?? []).map((l) => ({ kind: l.kind, description: l.description, amountCents: l.amountCents })),
-        totalCents: award.totalCents,
-        currency: award.currency,
-        leadDays: award.leadDays,
-        promisedShipDate: award.promisedShipDate,
-        bidRevision: award.revision,
-        awardReason: award.reason,
-        notes: request.notes,
-      }).catch((error: unknown) => {
-        if (error instanceof RangeError) throw new HttpError(422, 'document_unprintable', `The purchase order cannot be printed: ${error.message}`);
-        throw error;
-      });
-      const key = `purchase-orders/${award.requestId}/${award.poNumber}.pdf`;
-      try {
-        await storage.put(key, pdf, 'application/pdf');
-        await award.$query().patch({ poS3Key: key });
-      } catch (error) {
-        logger.warn({ err: error }, 'purchase order PDF not stored');
-      }
-      return { fileName, pdf };
-    },
-
-    /** The request, its bids and the award as one Open Contracting Data Standard 1.1 release. */
-    async ocds(actor: AuthUser, requestId: number): Promise<Record<string, unknown>> {
-      const request = await requests.findOwned(actor, requestId);
-      const award = await awardOf(knex, requestId);
-      if (!award) throw new HttpError(409, 'not_awarded', 'The export is available once the request has been awarded.');
-      await request.$fetchGraph('organisation');
-      const bids = await Bid.query().where({ requestId }).withGraphFetched('shop').orderBy('submittedAt');
-      const shopOf = (bid: Bid) => ({ id: bid.shopId, name: bid.shop?.name ?? '' });
-      const awarded = bids.find((b) => b.id === award.bidId)!;
-      return ocdsRelease({
-        ocidPrefix: 'ocds-kerfmark',
-        request: {
-          id: request.id,
-          title: request.title,
-          description: request.notes,
-          status: request.status,
-          publishedAt: request.publishedAt,
-          bidDeadline: request.bidDeadline,
-          needByDate: request.needByDate,
-          quantity: request.quantity,
-        },
-        buyer: { id: request.organisationId, name: request.organisation?.name ?? '' },
-        bids: bids.map((b) => ({ id: b.id, shop: shopOf(b), status: b.status, submittedAt: b.submittedAt, totalCents: b.totalCents, currency: b.currency })),
-        award: { id: award.id, bidId: award.bidId, shop: shopOf(awarded), awardedAt: award.awardedAt, totalCents: award.totalCents, currency: award.currency, reason: award.reason },
-        purchaseOrder: { poNumber: award.poNumber, issuedAt: award.awardedAt, status: request.status === 'cancelled' ? 'terminated' : 'active' },
-        releasedAt: new Date(),
-      });
     },
 
     async startProduction(actor: AuthUser, requestId: number) {

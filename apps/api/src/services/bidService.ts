@@ -9,6 +9,7 @@ import { addWorkingDays, compareBids, sumCents } from '@kerfmark/pricing';
 import type { Knex } from 'knex';
 import type { z } from 'zod';
 import type { BidInput as BidInputSchema } from '@kerfmark/contracts';
+import { assertMay, biddingOpen, factsOf, loadFacts, maySee, visibleParts } from '../access';
 import type { AuthUser } from '../auth/passport';
 import { badRequest, HttpError, notFound } from '../lib/httpError';
 import { todayIn } from '../lib/todayIn';
@@ -21,11 +22,6 @@ import { readRequestGraph } from './requestGraph';
 import { primaryFile, toBidDto } from './requestViews';
 
 type ParsedBid = z.output<typeof BidInputSchema>;
-
-/** Bidding is open while the request is open and its deadline has not passed. */
-export function biddingOpen(request: DieRequest, now = new Date()): boolean {
-  return request.status === 'open' && (!request.bidDeadline || request.bidDeadline.getTime() > now.getTime());
-}
 
 export function createBidService(
   { knex, reminders }: ServiceDeps,
@@ -65,12 +61,14 @@ export function createBidService(
     };
   }
 
-  async function ownBid(trx: Knex.Transaction, actor: AuthUser, bidId: number) {
+  /** The shop's own bid, locked, if it may still change it: no other shop's bid is ever found. */
+  async function ownBid(trx: Knex.Transaction, actor: AuthUser, bidId: number, action: 'revise' | 'withdraw') {
     const bid = await Bid.query(trx).findOne({ id: bidId, shopId: actor.organisationId }).forUpdate();
-    if (!bid) throw notFound('That bid');
-    const request = await DieRequest.query(trx).findById(bid.requestId).forShare();
-    if (!request) throw notFound('That bid');
-    return { bid, request };
+    const found = bid && (await loadFacts(trx, bid.requestId, 'share'));
+    if (!bid || !found) throw notFound('That bid');
+    if (!biddingOpen(found.facts, new Date())) throw closedError(found.request, actor.timeZone);
+    assertMay(actor, found.facts, action);
+    return { bid, request: found.request };
   }
 
   async function withRevisions(bid: Bid): Promise<BidDto> {
@@ -94,12 +92,11 @@ export function createBidService(
   return {
     async submit(actor: AuthUser, requestId: number, input: ParsedBid): Promise<BidDto> {
       const bid = await knex.transaction(async (trx) => {
-        await requests.findVisible(actor, requestId, trx);
-        const request = await DieRequest.query(trx).findById(requestId).forShare().throwIfNotFound();
-        if (!biddingOpen(request)) throw closedError(request, actor.timeZone);
-        if (await Bid.query(trx).findOne({ requestId, shopId: actor.organisationId })) {
-          throw new HttpError(409, 'bid_exists', 'Your shop has already bid on this request: revise that bid instead.');
-        }
+        const found = await loadFacts(trx, requestId, 'share');
+        if (!found || !maySee(actor, found.facts)) throw notFound('That die request');
+        const { request, facts } = found;
+        if (!biddingOpen(facts, new Date())) throw closedError(request, actor.timeZone);
+        assertMay(actor, facts, 'bid', new Date(), 'bid_exists');
         let created: Bid;
         try {
           created = await Bid.query(trx).insertAndFetch({
@@ -125,8 +122,7 @@ export function createBidService(
     },
     async revise(actor: AuthUser, bidId: number, input: ParsedBid): Promise<BidDto> {
       const bid = await knex.transaction(async (trx) => {
-        const { bid, request } = await ownBid(trx, actor, bidId);
-        if (!biddingOpen(request)) throw closedError(request, actor.timeZone);
+        const { bid, request } = await ownBid(trx, actor, bidId, 'revise');
         // A revision restates the price; notes it leaves out stay as they were (null clears them).
         const restated = input.notes === undefined ? { ...input, notes: bid.notes } : input;
         const revised = await bid
@@ -142,8 +138,7 @@ export function createBidService(
 
     async withdraw(actor: AuthUser, bidId: number): Promise<BidDto> {
       const bid = await knex.transaction(async (trx) => {
-        const { bid, request } = await ownBid(trx, actor, bidId);
-        if (!biddingOpen(request)) throw closedError(request, actor.timeZone);
+        const { bid } = await ownBid(trx, actor, bidId, 'withdraw');
         if (bid.status === 'withdrawn') return bid;
         const withdrawn = await bid.$query(trx).patchAndFetch({ status: 'withdrawn', updatedAt: new Date() });
         await BidRevision.query(trx).insert(revisionRow(withdrawn, 'withdrawn', actor));
@@ -183,21 +178,23 @@ export function createBidService(
     },
 
     async decline(actor: AuthUser, requestId: number, reason: string): Promise<void> {
-      await requests.findVisible(actor, requestId);
+      const found = await loadFacts(knex, requestId);
+      if (!found) throw notFound('That die request');
+      assertMay(actor, found.facts, 'decline');
       await knex('requestDeclines')
         .insert({ requestId, shopId: actor.organisationId, reason, createdBy: actor.id })
         .onConflict(['requestId', 'shopId'])
         .merge(['reason', 'createdBy']);
     },
 
-    /** The sealed bids, opened: only the printer, and only once bidding has closed. */
+    /** The sealed bids, opened: only the printer, and only once the sealed-bid rule opens them. */
     async compare(actor: AuthUser, requestId: number): Promise<BidComparisonDto> {
       if (actor.orgKind !== 'printer') throw notFound('That die request');
       // For a printer, the requests it may see are its own.
-      const request = await readRequestGraph(knex, requests.visibleQuery(actor, requestId), ['award', 'fileSummaries', 'submittedBids']);
+      const request = await readRequestGraph(knex, requests.visibleQuery(actor, requestId), ['award', 'fileSummaries', 'submittedBids', 'ties']);
       if (!request) throw notFound('That die request');
       const bids = request.submittedBids ?? [];
-      if (biddingOpen(request) || request.status === 'draft') {
+      if (visibleParts(actor, factsOf(request, request.ties!), new Date()).bids !== 'all') {
         throw new HttpError(404, 'bids_sealed', 'Bids stay sealed until the bid deadline, unless purchasing closes bidding early.');
       }
       const metrics = primaryFile(request.files)?.metrics as DielineMetrics | null | undefined;

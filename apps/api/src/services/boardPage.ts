@@ -3,7 +3,7 @@ import type { Knex } from 'knex';
 import type { z } from 'zod';
 import { containsPattern } from '../lib/containsPattern';
 import { DieRequest } from '../models';
-import { openToShop } from './openToShop';
+import { biddableByShop } from '../access';
 import { readRequestGraph } from './requestGraph';
 import { SUMMARY_COLUMNS } from './requestViews';
 
@@ -34,10 +34,7 @@ export async function boardPage(
 ): Promise<{ rows: Array<BoardRow & { request: DieRequest }>; total: number }> {
   // The requests that match, as a fresh query each time it is needed.
   const matching = () => {
-    const query = knex('dieRequests as r')
-      .where('r.status', 'open')
-      .where('r.bidDeadline', '>', knex.fn.now())
-      .where(openToShop(knex, shopId, 'r'));
+    const query = knex('dieRequests as r').where(biddableByShop(knex, shopId, 'r'));
     if (q.minIn !== undefined) query.where('r.measuredRuleIn', '>=', q.minIn);
     if (q.maxIn !== undefined) query.where('r.measuredRuleIn', '<=', q.maxIn);
     if (q.complexity) query.where('r.measuredComplexity', q.complexity);

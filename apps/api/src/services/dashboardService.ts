@@ -4,15 +4,24 @@ import type { AuthUser } from '../auth/passport';
 import { todayIn } from '../lib/todayIn';
 import { Award, Bid, DieRequest } from '../models';
 import type { ServiceDeps } from './deps';
-import { visibleToShop } from './requestService';
+import { factsOf, visibleParts, visibleTo } from '../access';
 
 const LIVE = ['open', 'bidding_closed', 'awarded', 'in_production'];
 const HORIZON_DAYS = 30;
 
+/** The owner's own request, so the only ties the rule reads are none. */
+const mayReckonWithBids = (actor: AuthUser, r: DieRequest, now: Date) =>
+  visibleParts(actor, factsOf(r, { invitedShopIds: [], bidderShopIds: [], awardedShopId: null }), now).bidFiguresOnDashboard;
+
 export function createDashboardService(_deps: ServiceDeps) {
-  /** Requests whose need-by date is at risk, given the best bid's (or the award's) ship date and the die-cutting run. */
+  /**
+   * Requests whose need-by date is at risk, given the award's ship date, else (once bids are
+   * opened) the lowest bid's, else the request's own planned lead time, and the die-cutting run.
+   * Before the deadline the bids are sealed: only the request's own dates count.
+   */
   async function atRisk(actor: AuthUser): Promise<AtRiskItem[]> {
     const today = todayIn(actor.timeZone);
+    const now = new Date();
     const requests = await DieRequest.query()
       .where({ organisationId: actor.organisationId })
       .whereIn('status', LIVE)
@@ -21,7 +30,7 @@ export function createDashboardService(_deps: ServiceDeps) {
     const ids = requests.map((r) => r.id);
     const [awards, bids] = await Promise.all([
       Award.query().whereIn('requestId', ids),
-      Bid.query().whereIn('requestId', ids).where({ status: 'submitted' }).orderBy('totalCents'),
+      Bid.query().whereIn('requestId', requests.filter((r) => mayReckonWithBids(actor, r, now)).map((r) => r.id)).where({ status: 'submitted' }).orderBy('totalCents'),
     ]);
     const items: AtRiskItem[] = [];
     for (const request of requests) {
@@ -67,7 +76,7 @@ export function createDashboardService(_deps: ServiceDeps) {
         if (award && !r.shippedAt && award.promisedShipDate <= untilDay) items.push({ requestId: r.id, title: r.title, kind: 'promised_ship', at: award.promisedShipDate });
       }
     } else {
-      const open = await visibleToShop(DieRequest.query(), actor.organisationId).where('die_requests.status', 'open').where('die_requests.bidDeadline', '>', now).where('die_requests.bidDeadline', '<', until);
+      const open = await visibleTo(DieRequest.query(), actor).where('die_requests.status', 'open').where('die_requests.bidDeadline', '>', now).where('die_requests.bidDeadline', '<', until);
       for (const r of open) items.push({ requestId: r.id, title: r.title, kind: 'bid_deadline', at: r.bidDeadline!.toISOString() });
       const won = await Award.query().where({ shopId: actor.organisationId }).withGraphFetched('request');
       for (const award of won as Array<Award & { request?: DieRequest }>) {

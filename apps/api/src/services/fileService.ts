@@ -7,7 +7,7 @@ import { safeFileName } from '../lib/safeFileName';
 import { DieRequest, DielineFile } from '../models';
 import { recordAudit } from './auditService';
 import type { ServiceDeps } from './deps';
-import { isEditable } from './requestStatus';
+import { assertMay, loadFacts } from '../access';
 import { toFileDto } from './requestViews';
 import type { createRequestService } from './requestService';
 
@@ -51,6 +51,13 @@ export function createFileService(
     }
   }
 
+  /** Files change with the request: on a draft, or an open request before its deadline. */
+  async function mayEdit(actor: AuthUser, requestId: number) {
+    const found = await loadFacts(knex, requestId);
+    if (!found) throw notFound('That die request');
+    assertMay(actor, found.facts, 'edit');
+  }
+
   async function ownedFile(actor: AuthUser, fileId: number) {
     const { file, request } = await visibleFile(actor, fileId);
     if (actor.orgKind !== 'printer') throw notFound('That file');
@@ -59,8 +66,7 @@ export function createFileService(
 
   return {
     async upload(actor: AuthUser, requestId: number, upload: UploadedFile): Promise<DielineFileDto> {
-      const request = await requests.findOwned(actor, requestId);
-      if (!isEditable(request.status)) throw conflict('Files can be added to a draft or an open request only.');
+      await mayEdit(actor, requestId);
       if (upload.size === 0) throw new HttpError(400, 'empty_file', 'The file is empty.');
       const format = sniff(upload);
       const fileName = safeFileName(upload.originalname);
@@ -131,9 +137,9 @@ export function createFileService(
     },
 
     async makePrimary(actor: AuthUser, fileId: number): Promise<DielineFileDto> {
-      const { file, request } = await ownedFile(actor, fileId);
+      const { file } = await ownedFile(actor, fileId);
       // After bidding closes the primary file is what the bids, the award and the price record rest on.
-      if (!isEditable(request.status)) throw conflict('The primary file can be changed on a draft or an open request only.');
+      await mayEdit(actor, file.requestId);
       await knex.transaction(async (trx) => {
         await DielineFile.query(trx).patch({ isPrimary: false }).where({ requestId: file.requestId });
         await DielineFile.query(trx).patch({ isPrimary: true }).findById(file.id);
@@ -143,8 +149,8 @@ export function createFileService(
 
     /** Sets which rule type each layer is, and measures the file again. */
     async remap(actor: AuthUser, fileId: number, layerMap: Record<string, string>): Promise<DielineFileDto> {
-      const { file, request } = await ownedFile(actor, fileId);
-      if (!isEditable(request.status)) throw conflict('Layers can be changed on a draft or an open request only.');
+      const { file } = await ownedFile(actor, fileId);
+      await mayEdit(actor, file.requestId);
       const updated = await file.$query().patchAndFetch({
         layerMap,
         analysisStatus: 'pending',

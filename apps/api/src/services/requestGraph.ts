@@ -1,9 +1,10 @@
 import type { Knex } from 'knex';
 import type { QueryBuilder } from 'objection';
+import { TIES_PART, type RequestTies } from '../access/loadFacts';
 import { SUBMITTED_BIDS_PART, toSubmittedBid } from './submittedBids';
 import { DielineFile, type Award, type DieRequest, type Organisation, type Press, type RequestQuestion } from '../models';
 
-export type RequestPart = 'organisation' | 'press' | 'award' | 'files' | 'fileSummaries' | 'questions' | 'invitedShops' | 'submittedBids';
+export type RequestPart = 'organisation' | 'press' | 'award' | 'files' | 'fileSummaries' | 'questions' | 'invitedShops' | 'submittedBids' | 'ties';
 
 // Remembered, as every row of every part asks for the same few names.
 const camelNames = new Map<string, string>();
@@ -40,6 +41,8 @@ const PARTS: Record<RequestPart, string> = {
   invitedShops: `(select coalesce(json_agg(json_build_object('id', o.id, 'name', o.name) order by o.name), '[]')
     from request_invitations i join organisations o on o.id = i.shop_id where i.request_id = die_requests.id)`,
   submittedBids: SUBMITTED_BIDS_PART,
+  // The shops tied to the request, for the access rules (never shown as such).
+  ties: TIES_PART,
 };
 
 /** Turns the parts the database sent as JSON into the request's relations, as plain objects in the models' shape. */
@@ -56,6 +59,7 @@ function adoptParts(request: DieRequest, parts: RequestPart[]): DieRequest {
     if (part === 'files' || part === 'fileSummaries') request.files = many.map((f) => fromJson<DielineFile>(f));
     if (part === 'questions') request.questions = many.map((q) => fromJson<RequestQuestion>(q));
     if (part === 'invitedShops') request.invitedShops = many.map((o) => fromJson<Organisation>(o));
+    if (part === 'ties') request.ties = one as unknown as RequestTies;
     if (part === 'submittedBids') request.submittedBids = (many as Array<Parameters<typeof toSubmittedBid>[0]>).map(toSubmittedBid);
   }
   return request;

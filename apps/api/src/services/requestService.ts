@@ -10,57 +10,34 @@ import {
   RequestListQuery,
   type RequestQuestionDto,
   type BidDto,
+  formatInZone,
 } from '@kerfmark/contracts';
-import { checkNeedBy, runHours } from '@kerfmark/pricing';
 import type { Knex } from 'knex';
-import type { QueryBuilder } from 'objection';
+import { assertMay, deadlineMoveRefusal, factsOf, loadFacts, presentToOwner, presentToShop, questionDto, refuse, sealOnCancel, visibleTo, type RequestFacts } from '../access';
 import type { AuthUser } from '../auth/passport';
-import { badRequest, conflict, forbidden, HttpError, notFound } from '../lib/httpError';
+import { badRequest, HttpError, notFound } from '../lib/httpError';
 import { parse } from '../lib/parse';
 import { Bid, BidRevision, DieRequest, Organisation, Press, RequestQuestion } from '../models';
-import { todayIn } from '../lib/todayIn';
 import { distanceMiles } from '../lib/distanceMiles';
 import { knownPostcodes, postcodeCentre } from '../lib/postcodeCentre';
-import { biddingOpen } from './bidService';
 import { recordAudit } from './auditService';
 import type { ServiceDeps } from './deps';
-import { transitionRequest, allowedActions, isEditable } from './requestStatus';
+import { transitionRequest } from './requestStatus';
 import { boardPage } from './boardPage';
-import { openToShop } from './openToShop';
 import { readRequestGraph } from './requestGraph';
-import { primaryFile, toBidDto, toFileDto, toPressDto, toSummary } from './requestViews';
+import { toBidDto, toSummary } from './requestViews';
+import { tellBidders } from './tellBidders';
 import { containsPattern } from '../lib/containsPattern';
-
-/** Statuses a die shop may look at, when the request is open to it. */
-const SHOP_VISIBLE = ['open', 'bidding_closed'] as const;
-
-/** Narrows a query to requests this die shop may see: open to every shop, or it was invited. */
-// eslint-disable-next-line @typescript-eslint/no-explicit-any
-export function visibleToShop<Q extends QueryBuilder<DieRequest, any>>(query: Q, shopId: number): Q {
-  return query.where((visible) =>
-    visible
-      .where((open) =>
-        open
-          .whereIn('die_requests.status', [...SHOP_VISIBLE])
-          .where(openToShop(DieRequest.knex(), shopId)),
-      )
-      // A shop that bid keeps seeing the request, to learn the outcome.
-      .orWhereExists(Bid.query().whereColumn('bids.requestId', 'die_requests.id').where('bids.shopId', shopId)),
-  ) as Q;
-}
-
 
 async function bidDto(bid: Bid): Promise<BidDto> {
   return toBidDto(bid, await BidRevision.query().where({ bidId: bid.id }).orderBy('id'));
 }
 
-export function createRequestService({ knex, reminders }: ServiceDeps) {
+export function createRequestService(deps: ServiceDeps) {
+  const { knex, reminders } = deps;
   /** The query for a request this user may see. */
   function visibleQuery(actor: AuthUser, id: number, trx?: Knex.Transaction) {
-    const query = DieRequest.query(trx).findById(id);
-    if (actor.orgKind === 'printer') query.where('die_requests.organisationId', actor.organisationId);
-    else visibleToShop(query, actor.organisationId);
-    return query;
+    return visibleTo(DieRequest.query(trx).findById(id), actor);
   }
 
   /** The request if this user may see it; anything else is the same 404. */
@@ -68,6 +45,13 @@ export function createRequestService({ knex, reminders }: ServiceDeps) {
     const request = await visibleQuery(actor, id, trx);
     if (!request) throw notFound('That die request');
     return request;
+  }
+
+  /** The request and its facts, locked for the change the caller makes; another organisation's is a 404. */
+  async function factsFor(actor: AuthUser, id: number, trx: Knex.Transaction): Promise<{ request: DieRequest; facts: RequestFacts }> {
+    const found = await loadFacts(trx, id, 'update');
+    if (!found || actor.orgKind !== 'printer' || found.request.organisationId !== actor.organisationId) throw notFound('That die request');
+    return found;
   }
 
   async function findOwned(actor: AuthUser, id: number, trx?: Knex.Transaction): Promise<DieRequest> {
@@ -100,98 +84,34 @@ export function createRequestService({ knex, reminders }: ServiceDeps) {
     }
   }
 
-  function questionsFor(actor: AuthUser, questions: RequestQuestion[], isOwner: boolean): RequestQuestionDto[] {
-    // Answers are for every shop on the request; an unanswered question only for its asker.
-    return questions
-      .filter((q) => isOwner || q.answer !== null || q.shopId === actor.organisationId)
-      .map((q) => ({
-        id: q.id,
-        question: q.question,
-        askedAt: q.askedAt.toISOString(),
-        askedByYou: q.shopId === actor.organisationId,
-        answer: q.answer,
-        answeredAt: q.answeredAt?.toISOString() ?? null,
-      }));
+  /** Every bidder hears of a new deadline, in its own time zone. */
+  async function tellOfDeadline(trx: Knex.Transaction, request: DieRequest, to: Date) {
+    const zones = new Map(((await trx('organisations').whereIn('id', trx('bids').where({ requestId: request.id }).select('shopId')).select('id', 'timeZone')) as Array<{ id: number; timeZone: string }>).map((o) => [o.id, o.timeZone]));
+    await tellBidders(trx, deps, request.id, (shopId) => ({
+      kind: 'deadline_changed',
+      title: `New bid deadline: ${request.title}`,
+      body: `The bid deadline on "${request.title}" is now ${formatInZone(to, zones.get(shopId) ?? 'UTC')}. You can revise or withdraw your bid until then.`,
+      link: `/requests/${request.id}`,
+    }));
   }
 
   async function detail(actor: AuthUser, id: number): Promise<DieRequestDetail> {
     const isOwner = actor.orgKind === 'printer';
     const [request, ownBid] = await Promise.all([
-      readRequestGraph(knex, visibleQuery(actor, id), ['organisation', 'press', 'award', 'files', 'questions', ...(isOwner ? (['invitedShops'] as const) : [])]),
+      readRequestGraph(knex, visibleQuery(actor, id), ['organisation', 'press', 'award', 'files', 'questions', 'ties', ...(isOwner ? (['invitedShops'] as const) : [])]),
       isOwner ? undefined : Bid.query().findOne({ requestId: id, shopId: actor.organisationId }),
     ]);
     if (!request) throw notFound('That die request');
-    const award = request.award ?? null;
-    const questions = request.questions ?? [];
-    const won = !isOwner && award?.shopId === actor.organisationId;
-    const myBid = ownBid ? await bidDto(ownBid) : null;
-    const file = primaryFile(request.files);
-    const board = file?.analysisStatus === 'done' ? (file.metrics as { board?: { width: number; height: number } } | null)?.board : undefined;
-    const press = request.press ?? null;
-    const fits =
-      board && press
-        ? (board.width <= press.maxSheetWidthIn && board.height <= press.maxSheetLengthIn) ||
-          (board.height <= press.maxSheetWidthIn && board.width <= press.maxSheetLengthIn)
-        : null;
-    const hours = press && request.runSheets ? runHours(request.runSheets, press.typicalSpeedSph) : null;
-    const needBy = request.needByDate
-      ? { runHours: hours, ...checkNeedBy({ today: todayIn(actor.timeZone), needByDate: request.needByDate, leadDays: request.plannedLeadDays, runHours: hours ?? 0 }) }
-      : null;
-    return {
-      ...toSummary(request),
-      pieceWidthIn: request.pieceWidthIn,
-      pieceHeightIn: request.pieceHeightIn,
-      stockName: request.stockName,
-      caliperIn: request.caliperIn,
-      stockWeightGsm: request.stockWeightGsm,
-      grain: request.grain,
-      stockKind: request.stockKind,
-      stockWeightEntry: request.stockWeightEntry,
-      foldAcrossGrain: request.foldAcrossGrain,
-      heavyInkOnFold: request.heavyInkOnFold,
-      colourBreakOnFold: request.colourBreakOnFold,
-      pressId: request.pressId,
-      press: press ? toPressDto(press) : null,
-      runSheets: request.runSheets,
-      plannedLeadDays: request.plannedLeadDays,
-      counterWanted: request.counterWanted,
-      ejectionRubberWanted: request.ejectionRubberWanted,
-      deliveryAddress: isOwner || won ? request.deliveryAddress : null,
-      notes: request.notes,
-      invitedShops: isOwner ? (request.invitedShops ?? []).map((s) => ({ id: s.id, name: s.name })) : [],
-      files: (request.files ?? []).map(toFileDto),
-      questions: questionsFor(actor, questions, isOwner),
-      allowedActions: allowedActions(actor, request.status, request.organisationId, award?.shopId ?? null),
-      isOwner,
-      boardFitsPress: fits,
-      needBy,
-      biddingOpen: biddingOpen(request),
-      myBid,
-      outcome: isOwner || !award ? null : won ? 'won' : 'not_awarded',
-      award:
-        award && (isOwner || won)
-          ? {
-              id: award.id,
-              poNumber: award.poNumber,
-              shopName: isOwner ? (award.shop?.name ?? null) : null,
-              totalCents: award.totalCents,
-              currency: award.currency,
-              promisedShipDate: award.promisedShipDate,
-              reason: isOwner ? award.reason : null,
-            }
-          : null,
-      trackingNote: isOwner || won ? request.trackingNote : null,
-      shippedAt: request.shippedAt?.toISOString() ?? null,
-      receivedAt: isOwner || won ? (request.receivedAt?.toISOString() ?? null) : null,
-      receivedCondition: isOwner || won ? request.receivedCondition : null,
-      lateFlaggedAt: isOwner || won ? (request.lateFlaggedAt?.toISOString() ?? null) : null,
-    };
+    const facts = factsOf(request, request.ties!);
+    const now = new Date();
+    return isOwner ? presentToOwner(request, facts, actor, now) : presentToShop(request, facts, actor, ownBid ? await bidDto(ownBid) : null, now);
   }
 
   return {
     visibleQuery,
     findVisible,
     findOwned,
+    factsFor,
     detail,
 
     async list(actor: AuthUser, q: z.output<typeof RequestListQuery>): Promise<Page<DieRequestSummary>> {
@@ -251,14 +171,19 @@ export function createRequestService({ knex, reminders }: ServiceDeps) {
 
     async update(actor: AuthUser, id: number, patch: DieRequestUpdate): Promise<DieRequestDetail> {
       await knex.transaction(async (trx) => {
-        const request = await findOwned(actor, id, trx);
-        await DieRequest.query(trx).findById(id).forUpdate();
-        if (!isEditable(request.status)) {
-          throw conflict('Only a draft or an open request can be changed.');
+        const { request, facts } = await factsFor(actor, id, trx);
+        const now = new Date();
+        assertMay(actor, facts, 'edit', now);
+        const movesDeadline = 'bidDeadline' in patch && (patch.bidDeadline ? new Date(patch.bidDeadline).getTime() : null) !== (request.bidDeadline?.getTime() ?? null);
+        if (movesDeadline) {
+          const to = patch.bidDeadline ? new Date(patch.bidDeadline) : null;
+          if (request.status === 'open' && to && to.getTime() <= now.getTime()) {
+            throw badRequest('The bid deadline must be in the future.', { bidDeadline: 'Choose a time in the future' });
+          }
+          const refusal = deadlineMoveRefusal(actor, facts, to, now);
+          if (refusal) throw refuse(refusal);
         }
-        if (request.status === 'open' && patch.bidDeadline && new Date(patch.bidDeadline).getTime() <= Date.now()) {
-          throw badRequest('The bid deadline must be in the future.', { bidDeadline: 'Choose a time in the future' });
-        }
+        const fromDeadline = request.bidDeadline?.toISOString() ?? null; // patch() below overwrites the model's fields
         const { invitedShopIds, ...fields } = patch;
         await checkReferences(trx, actor, { pressId: fields.pressId, invitedShopIds });
         if (Object.keys(fields).length) await request.$query(trx).patch(fields as Partial<DieRequest>);
@@ -269,8 +194,9 @@ export function createRequestService({ knex, reminders }: ServiceDeps) {
           entity: 'die_request',
           entityId: id,
           action: 'updated',
-          detail: { fields: Object.keys(patch) },
+          detail: { fields: Object.keys(patch), ...(movesDeadline ? { bidDeadline: { from: fromDeadline, to: patch.bidDeadline } } : {}) },
         });
+        if (movesDeadline && request.status === 'open') await tellOfDeadline(trx, request, new Date(patch.bidDeadline!));
         trx.executionPromise.then(() => reminders.plan(id)).catch(() => undefined);
       });
       return detail(actor, id);
@@ -296,20 +222,27 @@ export function createRequestService({ knex, reminders }: ServiceDeps) {
       return detail(actor, id);
     },
 
+    /** Cancels the request. Bids still sealed stay sealed for good (`sealOnCancel`); every bidder is told. */
     async cancel(actor: AuthUser, id: number, reason: string): Promise<DieRequestDetail> {
       await knex.transaction(async (trx) => {
-        await findOwned(actor, id, trx);
-        await transitionRequest(trx, actor, id, 'cancel', { reminders, detail: { reason } });
+        const { request, facts } = await factsFor(actor, id, trx);
+        await transitionRequest(trx, actor, id, 'cancel', { reminders, detail: { reason }, patch: sealOnCancel(facts, new Date()) });
+        await tellBidders(trx, deps, id, {
+          kind: 'request_cancelled',
+          title: `Cancelled: ${request.title}`,
+          body: `The buyer cancelled "${request.title}", so it will not be awarded. Bids on it stay sealed.${reason ? ` The reason given: ${reason}` : ''}`,
+          link: `/requests/${id}`,
+        });
       });
       return detail(actor, id);
     },
 
     async ask(actor: AuthUser, id: number, question: string): Promise<RequestQuestionDto> {
-      if (actor.orgKind !== 'die_shop') throw forbidden('Die shops ask questions; answer them on the request.');
-      const request = await findVisible(actor, id);
-      if (request.status !== 'open') throw conflict('Questions close with bidding.');
+      const found = await knex.transaction((trx) => loadFacts(trx, id));
+      if (!found) throw notFound('That die request');
+      assertMay(actor, found.facts, 'ask');
       const row = await RequestQuestion.query().insertAndFetch({ requestId: id, shopId: actor.organisationId, askedBy: actor.id, question });
-      return questionsFor(actor, [row], false)[0]!;
+      return questionDto(actor, row);
     },
 
     async answer(actor: AuthUser, id: number, questionId: number, answer: string): Promise<RequestQuestionDto> {
@@ -317,7 +250,7 @@ export function createRequestService({ knex, reminders }: ServiceDeps) {
       const question = await RequestQuestion.query().findOne({ id: questionId, requestId: id });
       if (!question) throw notFound('That question');
       const row = await question.$query().patchAndFetch({ answer, answeredBy: actor.id, answeredAt: new Date() });
-      return questionsFor(actor, [row], true)[0]!;
+      return questionDto(actor, row);
     },
   };
 }

@@ -14,3 +14,12 @@ export function openToShop(knex: Knex, shopId: number, table = 'die_requests') {
   return (q: Conditions) =>
     q.where(`${table}.visibility`, 'public').orWhereIn(`${table}.id`, knex('request_invitations').where('shop_id', shopId).select('request_id'));
 }
+
+/**
+ * The board's condition, the SQL form of "bidding is open and the request is open to this shop"
+ * (`biddingOpen` and `maySee`): open, before its deadline, public or the shop invited.
+ */
+export function biddableByShop(knex: Knex, shopId: number, table = 'die_requests') {
+  return (q: Knex.QueryBuilder) =>
+    q.where(`${table}.status`, 'open').where(`${table}.bid_deadline`, '>', knex.fn.now()).where(openToShop(knex, shopId, table));
+}
