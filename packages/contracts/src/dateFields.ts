@@ -15,6 +15,14 @@ export const dateInRange = (date: string) => date >= earliestDate && date <= lat
 /** A calendar date, YYYY-MM-DD, from `earliestDate` to `latestDate`. */
 export const calendarDate = (error = 'Enter a date as YYYY-MM-DD') => z.iso.date({ error }).refine(dateInRange, { error: outOfRange });
 
-/** An instant with its offset, whose UTC date is from `earliestDate` to `latestDate`. */
-export const instant = (error = 'Enter a date and time') =>
-  z.iso.datetime({ offset: true, error }).refine((v) => dateInRange(new Date(v).toISOString().slice(0, 10)), { error: outOfRange });
+/** Whether an instant's UTC date is in the range; text that is no instant is left to the format check. */
+function instantInRange(text: string): boolean {
+  const time = Date.parse(text);
+  return !Number.isFinite(time) || dateInRange(new Date(time).toISOString().slice(0, 10));
+}
+
+/**
+ * An instant with its offset, whose UTC date is from `earliestDate` to `latestDate`. zod 4 runs
+ * a refinement even after the format check failed, so it must not assume a valid instant.
+ */
+export const instant = (error = 'Enter a date and time') => z.iso.datetime({ offset: true, error }).refine(instantInRange, { error: outOfRange });

@@ -31,7 +31,7 @@ describe('cross-organisation isolation', () => {
       .set('Authorization', `Bearer ${b.tokens.printerAdmin}`)
       .send({ name: 'Taken over' });
     expect(res.status).toBe(404);
-    expect(res.body).toEqual({ error: { code: 'not_found', message: 'That press was not found.' } });
+    expect(res.body).toEqual({ error: { code: 'not_found', message: 'That press was not found.', requestId: expect.any(String) } });
   });
 
   it('hides another organisation’s users', async () => {
