@@ -36,6 +36,27 @@ function sendError(req: Request, res: Response, status: number, error: Record<st
   res.status(status).json({ error: { ...error, requestId: req.id } });
 }
 
+// body-parser's own errors carry a 4xx status and a `type` (its documented error types).
+const BODY_ERRORS: Record<string, { status: number; code: string; message: string }> = {
+  'entity.too.large': { status: 413, code: 'payload_too_large', message: 'The request body is too large.' },
+  'entity.parse.failed': { status: 400, code: 'malformed_json', message: 'The request body is not valid JSON.' },
+  'charset.unsupported': { status: 415, code: 'unsupported_charset', message: 'The request body’s charset is not one Kerfmark reads; send UTF-8.' },
+  'encoding.unsupported': { status: 415, code: 'unsupported_encoding', message: 'The request body’s Content-Encoding is not one Kerfmark reads; send it plain, gzip or deflate.' },
+};
+const UNREADABLE = { status: 400, code: 'unreadable_body', message: 'The request body could not be read (a broken compressed body, or one cut short).' };
+// zlib's codes for a compressed body that is not what its Content-Encoding says.
+const ZLIB_CODES = new Set(['Z_DATA_ERROR', 'Z_BUF_ERROR', 'Z_STREAM_ERROR', 'Z_NEED_DICT']);
+
+/** The answer to a body the parser could not read, or undefined when the error is no such thing. */
+function bodyError(error: unknown): { status: number; code: string; message: string } | undefined {
+  const e = error as { type?: unknown; status?: unknown; code?: unknown };
+  if (typeof e?.type === 'string' && BODY_ERRORS[e.type]) return BODY_ERRORS[e.type];
+  if (typeof e?.code === 'string' && ZLIB_CODES.has(e.code)) return UNREADABLE;
+  // Any other 4xx the body reader raises (aborted, size mismatch, stream errors).
+  if (typeof e?.type === 'string' && typeof e.status === 'number' && e.status >= 400 && e.status < 500) return { ...UNREADABLE, status: e.status };
+  return undefined;
+}
+
 export function errorHandler(logger: Logger): ErrorRequestHandler {
   return (error, req, res, _next) => {
     if (res.headersSent) return;
@@ -44,14 +65,9 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
       sendError(req, res, error.status, { code: error.code, message: error.message, fields: error.fields, details: error.details });
       return;
     }
-    // body-parser's own errors carry a status and a type.
-    const type = (error as { type?: string }).type;
-    if (type === 'entity.too.large') {
-      sendError(req, res, 413, { code: 'payload_too_large', message: 'The request body is too large.' });
-      return;
-    }
-    if (type === 'entity.parse.failed') {
-      sendError(req, res, 400, { code: 'malformed_json', message: 'The request body is not valid JSON.' });
+    const unreadable = bodyError(error);
+    if (unreadable) {
+      sendError(req, res, unreadable.status, { code: unreadable.code, message: unreadable.message });
       return;
     }
     // The router's own: a path parameter with a broken %-escape (e.g. /api/requests/%E0%A4%A).
