@@ -22,7 +22,7 @@ export function createAuthService({ config, knex }: ServiceDeps, limiter: LoginL
         );
       }
       const user = await User.query().findOne({ email: input.email });
-      const ok = await verifyPassword(input.password, user?.passwordHash);
+      const ok = await verifyPassword(input.password, user?.passwordHash, config.bcryptRounds);
       if (!user || !ok) {
         await limiter.recordFailure(input.email, ip);
         throw new HttpError(401, 'invalid_credentials', 'That e-mail and password do not match an account.');
