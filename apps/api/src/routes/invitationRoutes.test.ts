@@ -76,13 +76,23 @@ describe('invitations', () => {
     expect(second.body.error.fields.email).toBeTruthy();
   });
 
-  it('refuses an address that already has an account', async () => {
+  it('answers an address with an account elsewhere as any invitation, and tells only the address', async () => {
     const { tokens, users } = await createWorld();
-    const res = await request(app)
-      .post('/api/users')
-      .set('Authorization', `Bearer ${tokens.printerAdmin}`)
-      .send({ email: users.estimator.email, name: 'Someone', role: 'buyer' });
-    expect(res.status).toBe(409);
+    const invite = (email: string) => request(app).post('/api/users').set('Authorization', `Bearer ${tokens.printerAdmin}`).send({ email, name: 'Someone', role: 'buyer' });
+    // The estimator works at the die shop: the printer's admin must not learn that.
+    const elsewhere = await invite(users.estimator.email);
+    const fresh = await invite(`fresh-${unique()}@test.example`);
+    expect(elsewhere.status).toBe(201);
+    expect(Object.keys(elsewhere.body).sort()).toEqual(Object.keys(fresh.body).sort());
+    expect(elsewhere.body).toMatchObject({ status: fresh.body.status, role: 'buyer' });
+    const mail = await waitForEmail(users.estimator.email, 'invited you');
+    expect(mail.text).toContain('already has a Kerfmark account');
+    expect(mail.text).not.toContain('accept-invitation?token=');
+
+    // Someone already in the organisation is a conflict its admin can see anyway.
+    const mine = await invite(users.buyer.email);
+    expect(mine.status).toBe(409);
+    expect(mine.body.error.fields.email).toBe('Already in your team');
   });
 
   it('revokes a link, and resending issues a new one that replaces the old', async () => {

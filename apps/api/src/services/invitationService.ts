@@ -36,7 +36,10 @@ const invalidLink = () =>
 export function createInvitationService({ config, knex, emails }: ServiceDeps) {
   async function sendInvitation(trx: Knex.Transaction, actor: AuthUser, invitation: Invitation, token: string) {
     const organisation = await Organisation.query(trx).findById(actor.organisationId).throwIfNotFound();
+    const hasAccount = Boolean(await User.query(trx).findOne({ email: invitation.email }));
     const message = invitationEmail({
+      hasAccount,
+      signInUrl: `${config.appUrl}/sign-in`,
       name: invitation.name,
       role: invitation.role,
       organisationName: organisation.name,
@@ -75,9 +78,12 @@ export function createInvitationService({ config, knex, emails }: ServiceDeps) {
         });
       }
       return knex.transaction(async (trx) => {
-        if (await User.query(trx).findOne({ email: input.email })) {
-          throw new HttpError(409, 'conflict', 'Someone with that e-mail already has a Kerfmark account.', {
-            email: 'This address already has an account',
+        // Someone already in this organisation is a conflict its admin can see in the team list.
+        // An account elsewhere is answered as any invitation: only the e-mail, to the address's
+        // owner, says it has an account, so no organisation learns who works at another.
+        if (await User.query(trx).findOne({ email: input.email, organisationId: actor.organisationId })) {
+          throw new HttpError(409, 'conflict', 'Someone in your organisation already has that e-mail.', {
+            email: 'Already in your team',
           });
         }
         // An earlier invitation to the same address that lapsed is replaced; a live one is a conflict.
@@ -166,7 +172,10 @@ export function createInvitationService({ config, knex, emails }: ServiceDeps) {
         // Lock the row: two clicks on the same link create one account.
         const invitation = await Invitation.query(trx).findById(found.id).forUpdate();
         if (!invitation || invitation.status !== 'pending') throw invalidLink();
-        if (await User.query(trx).findOne({ email: invitation.email })) throw invalidLink();
+        // Told to the holder of the link (the address's owner), never to the inviting organisation.
+        if (await User.query(trx).findOne({ email: invitation.email })) {
+          throw new HttpError(409, 'account_exists', 'This e-mail address already has a Kerfmark account. Sign in with it, or ask for an invitation to another address.');
+        }
         const user = await User.query(trx).insertAndFetch({
           organisationId: invitation.organisationId,
           email: invitation.email,
