@@ -1,3 +1,4 @@
+import Papa from 'papaparse';
 import request from 'supertest';
 import { describe, expect, it } from 'vitest';
 import { app, createOpenRequest, createWorld, knex } from '../test/harness';
@@ -24,6 +25,19 @@ async function importCsv(token: string, csv: string) {
 }
 
 describe('price history', () => {
+  it('exports an imported shop name that starts a formula as text (OWASP, CSV Injection), its amount still a number', async () => {
+    const w = await createWorld();
+    const evil = '=HYPERLINK("http://evil.example","Open")';
+    const csv = `Date,Supplier,Die price,Rule length (in),Bends,Curves,Joints,Punches\n2026-03-15,"${evil.replaceAll('"', '""')}",412.50,120,10,0,0,0\n2026-03-16,@Plain Shop,99.00,50,2,0,0,0\n`;
+    expect((await importCsv(w.tokens.purchasing, csv)).status).toBe(201);
+    const exported = await request(app).get('/api/price-history/export.csv').set(bearer(w.tokens.purchasing));
+    const rows = Papa.parse<string[]>(exported.text.trim()).data;
+    const byShop = new Map(rows.slice(1).map((r) => [r[1], r]));
+    expect(byShop.get(`'${evil}`)?.[2]).toBe('412.50');
+    expect(byShop.has(`'@Plain Shop`)).toBe(true);
+    expect(rows.slice(1).some((r) => /^[=+\-@]/.test(r[1]!))).toBe(false);
+  });
+
   it('imports a CSV whole, lists it with filters, exports it, and fits it', async () => {
     const w = await createWorld();
     const preview = await request(app).post('/api/price-history/import/preview').set(bearer(w.tokens.purchasing)).attach('file', Buffer.from(syntheticCsv(40)), 'history.csv');

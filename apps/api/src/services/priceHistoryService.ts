@@ -20,6 +20,7 @@ import { pricedLength, type DielineMetrics } from '@kerfmark/contracts';
 import { DieRequest } from '../models';
 import { notFound } from '../lib/httpError';
 import { primaryFile } from './requestViews';
+import { formulaSafe } from '../lib/formulaSafe';
 
 /** The fit works on at most this many records (a pseudo-random sample past it): enough for stable estimates. */
 export const FIT_SAMPLE = 5000;
@@ -180,7 +181,8 @@ export function createPriceHistoryService({ knex }: ServiceDeps) {
       const major = (cents: number, currency: string) => (currency === 'JPY' ? String(cents) : `${Math.trunc(cents / 100)}.${String(Math.abs(cents % 100)).padStart(2, '0')}`);
       return Papa.unparse({
         fields: ['Date', 'Die shop', 'Die price', 'Total price', 'Currency', 'Rule length (in)', 'Cutting (in)', 'Creasing (in)', 'Perforating (in)', 'Kiss cut (in)', 'Bends', 'Curves', 'Joints', 'Punches', 'Board area (sq in)', 'Complexity', 'Source'],
-        data: rows.map((r) => [r.pricedOn, r.shopName, major(r.dieCents, r.currency), major(r.totalCents, r.currency), r.currency, r.ruleLengthIn, r.cutIn, r.creaseIn, r.perfIn, r.kissIn, r.bends, r.curves, r.joints, r.punches, r.boardAreaSqIn, r.complexity, r.source]),
+        // Text cells are formula-safe (an imported shop name may start with =); amounts stay numbers.
+        data: rows.map((r) => [r.pricedOn, formulaSafe(r.shopName), major(r.dieCents, r.currency), major(r.totalCents, r.currency), r.currency, r.ruleLengthIn, r.cutIn, r.creaseIn, r.perfIn, r.kissIn, r.bends, r.curves, r.joints, r.punches, r.boardAreaSqIn, r.complexity, formulaSafe(r.source)]),
       });
     },
 
