@@ -1,39 +1,98 @@
 import { randomUUID } from 'node:crypto';
-import knexFactory from 'knex';
-import { afterAll, describe, expect, it, vi } from 'vitest';
+import { setTimeout as sleep } from 'node:timers/promises';
 import type { Storage } from '@kerfmark/storage';
-import { analyseDielineFile } from './analyseDieline';
+import { afterAll, describe, expect, it } from 'vitest';
+import { createKnex } from '../db';
+import { analyseDielineFile, waitingAnalyses } from './analyseDieline';
 
-// A reader that throws something other than a DielineError (a library's plain Error, a bug):
-// the file must still settle as failed, not stay "measuring" for every sweep to trip on.
-vi.mock('@kerfmark/dieline', async (original) => ({
-  ...(await original<typeof import('@kerfmark/dieline')>()),
-  analyseDieline: () => {
-    throw new TypeError("Cannot read properties of undefined (reading 'x')");
-  },
-}));
-
-// Against the real PostgreSQL that `npm test` starts.
-const knex = knexFactory({ client: 'pg', connection: process.env.DATABASE_URL });
+// Against the real PostgreSQL that `npm test` starts. The rows are new, so the running worker's
+// sweep (which waits for files a few seconds old) leaves them alone; the store is a stand-in.
+const knex = createKnex(process.env.DATABASE_URL!);
 afterAll(() => knex.destroy());
 
-const storage = { get: async () => new TextEncoder().encode('<svg xmlns="http://www.w3.org/2000/svg"/>') } as unknown as Storage;
+/** A 4 × 3 in rectangle of cutting rule (perimeter 2 × (4 + 3) = 14 in) and a 4 in crease across it. */
+const rectangleDxf = [
+  '0', 'SECTION', '2', 'HEADER', '9', '$INSUNITS', '70', '1', '0', 'ENDSEC',
+  '0', 'SECTION', '2', 'ENTITIES',
+  '0', 'LWPOLYLINE', '8', 'CUT', '90', '4', '70', '1',
+  '10', '0', '20', '0', '10', '4', '20', '0', '10', '4', '20', '3', '10', '0', '20', '3',
+  '0', 'LINE', '8', 'CREASE', '10', '0', '20', '1.5', '11', '4', '21', '1.5',
+  '0', 'ENDSEC', '0', 'EOF', '',
+].join('\n');
 
-async function waitingFile(): Promise<number> {
-  const [org] = await knex('organisations').insert({ name: `Printer ${randomUUID()}`, kind: 'printer', time_zone: 'UTC', country: 'US' }).returning('id');
-  const [request] = await knex('die_requests').insert({ organisation_id: org.id, title: 'Carton', quantity: 1, ups: 1, rule_types: ['cut'] }).returning('id');
-  const [file] = await knex('dieline_files')
-    .insert({ request_id: request.id, file_name: 'carton.svg', format: 'svg', content_type: 'image/svg+xml', byte_size: 40, sha256: 'test', s3_key: `test/${randomUUID()}.svg` })
-    .returning('id');
-  return file.id;
+/** A store that hands out the rectangle after `delayMs`, and can run a step while it waits. */
+function slowStore(delayMs: number, during?: () => Promise<void>): Storage & { reads: number } {
+  const store = {
+    reads: 0,
+    async get() {
+      store.reads += 1;
+      await during?.();
+      await sleep(delayMs);
+      return new TextEncoder().encode(rectangleDxf);
+    },
+    put: () => Promise.reject(new Error('not used')),
+    remove: () => Promise.reject(new Error('not used')),
+    downloadUrl: () => Promise.reject(new Error('not used')),
+    ping: () => Promise.resolve(),
+  };
+  return store;
 }
 
-describe('dieline analysis in the worker', () => {
-  it('settles the file as failed, with a reason for the user, whatever the reader throws', async () => {
-    const id = await waitingFile();
-    expect(await analyseDielineFile(knex, storage, id)).toBe('failed');
-    const row = await knex('dieline_files').where({ id }).first();
-    expect(row.analysis_status).toBe('failed');
-    expect(row.analysis_error).toMatch(/could not measure this file/);
+async function uploadedFile(over: Record<string, unknown> = {}): Promise<number> {
+  const [org] = await knex('organisations').insert({ name: `printer ${randomUUID().slice(0, 8)}`, kind: 'printer', time_zone: 'America/Chicago' }).returning('id');
+  const [request] = await knex('die_requests').insert({ organisation_id: org.id, title: 'Sleeve', status: 'draft', visibility: 'public' }).returning('id');
+  const [file] = await knex('dieline_files')
+    .insert({ request_id: request.id, file_name: 'sleeve.dxf', format: 'dxf', content_type: 'application/dxf', byte_size: rectangleDxf.length, sha256: 'x', s3_key: `test/${randomUUID()}`, ...over })
+    .returning('id');
+  return file.id as number;
+}
+const fileRow = (id: number) => knex('dieline_files').where({ id }).first();
+
+describe('analysing a dieline with more than one worker', () => {
+  it('measures a file once when two workers reach it at the same time', async () => {
+    const id = await uploadedFile();
+    const store = slowStore(200);
+    const results = await Promise.all([analyseDielineFile(knex, store, id), analyseDielineFile(knex, store, id)]);
+    expect(results.sort()).toEqual(['done', 'skipped']);
+    expect(store.reads).toBe(1);
+    const row = await fileRow(id);
+    expect(row.analysis_runs).toBe(1);
+    // Perimeter of a 4 × 3 in rectangle, 2 × (4 + 3) (geometry).
+    expect(row.metrics.length.cut).toBeCloseTo(14, 6);
+  });
+
+  it('keeps the remap that came during a run: the run is dropped and the next one measures the new layers', async () => {
+    const id = await uploadedFile();
+    // What the API's remap does: new layers, and the file waits for a run again.
+    const remap = () => knex('dieline_files').where({ id }).update({ layer_map: JSON.stringify({ CREASE: 'cut' }), analysis_status: 'pending' }).then(() => undefined);
+    expect(await analyseDielineFile(knex, slowStore(50, remap), id)).toBe('superseded');
+    expect((await fileRow(id)).analysis_status).toBe('pending');
+    expect(await analyseDielineFile(knex, slowStore(0), id)).toBe('done');
+    const row = await fileRow(id);
+    expect(row.analysis_runs).toBe(2);
+    // The crease now counts as cutting rule: 14 + 4 in.
+    expect(row.metrics.length.cut).toBeCloseTo(18, 6);
+  });
+
+  it('claims a run again only once it has gone stale, as when its worker died', async () => {
+    const fresh = await uploadedFile({ analysis_status: 'analysing', analysis_started_at: new Date(), analysis_runs: 1 });
+    const stale = await uploadedFile({ analysis_status: 'analysing', analysis_started_at: new Date(Date.now() - 3_600_000), analysis_runs: 1 });
+    expect(await analyseDielineFile(knex, slowStore(0), fresh)).toBe('skipped');
+    expect(await analyseDielineFile(knex, slowStore(0), stale)).toBe('done');
+    expect((await fileRow(stale)).analysis_runs).toBe(2);
+    expect(await analyseDielineFile(knex, slowStore(0), stale)).toBe('skipped');
+  });
+
+  it('lists waiting files and stale runs for the sweep, not runs under way', async () => {
+    // A little older than the sweep's wait below, and newer than the running worker's.
+    const old = new Date(Date.now() - 2_000);
+    const waiting = await uploadedFile({ uploaded_at: old });
+    const running = await uploadedFile({ uploaded_at: old, analysis_status: 'analysing', analysis_started_at: new Date() });
+    const stale = await uploadedFile({ uploaded_at: old, analysis_status: 'analysing', analysis_started_at: new Date(Date.now() - 3_600_000) });
+    const recent = await uploadedFile();
+    const listed = await waitingAnalyses(knex, 1_000, { limit: 10_000 });
+    expect(listed).toEqual(expect.arrayContaining([waiting, stale]));
+    expect(listed).not.toContain(running);
+    expect(listed).not.toContain(recent);
   });
 });
