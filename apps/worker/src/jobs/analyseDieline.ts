@@ -1,4 +1,4 @@
-import { analyseDieline, DielineError } from '@kerfmark/dieline';
+import { analyseDieline, DielineError, type LayerMap } from '@kerfmark/dieline';
 import type { Storage } from '@kerfmark/storage';
 import type { Knex } from 'knex';
 
@@ -22,7 +22,7 @@ interface ClaimedFile {
   request_id: number;
   file_name: string;
   s3_key: string;
-  layer_map: Record<string, string> | null;
+  layer_map: LayerMap | null;
   analysis_runs: number;
 }
 
