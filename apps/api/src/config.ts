@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { envInt, envLogLevel, envNodeEnv, envRedisUrl, envStorage, envUrl, readEnv } from '@kerfmark/contracts';
+import { envInt, envLogLevel, envNodeEnv, envRedisUrl, envStorage, envUrl, readEnv, storageSettings } from '@kerfmark/contracts';
 import type { StorageConfig } from '@kerfmark/storage';
 
 /**
@@ -88,12 +88,6 @@ export function loadConfig(env: Record<string, string | undefined> = process.env
     trustProxy: e.TRUST_PROXY,
     shutdownGraceMs: e.SHUTDOWN_GRACE_MS,
     logLevel: e.LOG_LEVEL,
-    storage: {
-      endpoint: e.S3_ENDPOINT,
-      bucket: e.S3_BUCKET,
-      region: e.S3_REGION,
-      accessKeyId: e.S3_ACCESS_KEY_ID,
-      secretAccessKey: e.S3_SECRET_ACCESS_KEY,
-    },
+    storage: storageSettings(e),
   };
 }

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { envInt, envLogLevel, envNodeEnv, envRedisUrl, envStorage, envUrl, readEnv } from '@kerfmark/contracts';
+import { envInt, envLogLevel, envNodeEnv, envRedisUrl, envStorage, envUrl, readEnv, storageSettings } from '@kerfmark/contracts';
 
 const schema = z
   .object({
@@ -37,13 +37,7 @@ export function loadConfig(env: Record<string, string | undefined> = process.env
     analysisSweepMs: e.ANALYSIS_SWEEP_MS,
     scheduleCheckMs: e.SCHEDULE_CHECK_MS,
     logLevel: e.LOG_LEVEL,
-    storage: {
-      endpoint: e.S3_ENDPOINT,
-      bucket: e.S3_BUCKET,
-      region: e.S3_REGION,
-      accessKeyId: e.S3_ACCESS_KEY_ID,
-      secretAccessKey: e.S3_SECRET_ACCESS_KEY,
-    },
+    storage: storageSettings(e),
   };
 }
 export type WorkerConfig = ReturnType<typeof loadConfig>;

@@ -52,6 +52,11 @@ export const envStorage = {
   S3_SECRET_ACCESS_KEY: text().optional(),
 };
 
+/** The storage settings as the storage package takes them, from variables checked by `envStorage`. */
+export function storageSettings(e: { S3_ENDPOINT?: string; S3_BUCKET: string; S3_REGION: string; S3_ACCESS_KEY_ID?: string; S3_SECRET_ACCESS_KEY?: string }) {
+  return { endpoint: e.S3_ENDPOINT, bucket: e.S3_BUCKET, region: e.S3_REGION, accessKeyId: e.S3_ACCESS_KEY_ID, secretAccessKey: e.S3_SECRET_ACCESS_KEY };
+}
+
 export class ConfigError extends Error {}
 
 /**
