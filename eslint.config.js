@@ -1,5 +1,8 @@
-// One lint configuration for every workspace: TypeScript rules everywhere, Vue's rules in the web app.
+// One lint configuration for every workspace: TypeScript rules everywhere, Vue's rules in the web
+// app. Layout is Prettier's (`.prettierrc.json`); eslint-config-prettier switches off the rules
+// that would fight it, and the Vue template rules that Prettier leaves alone stay on.
 import js from '@eslint/js';
+import prettier from 'eslint-config-prettier';
 import vue from 'eslint-plugin-vue';
 import globals from 'globals';
 import tseslint from 'typescript-eslint';
@@ -13,19 +16,20 @@ export default tseslint.config(
     files: ['**/*.vue'],
     languageOptions: { parserOptions: { parser: tseslint.parser, extraFileExtensions: ['.vue'] } },
   },
+  prettier,
   {
     languageOptions: { globals: { ...globals.node, ...globals.browser } },
     rules: {
       '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_' }],
-      // Templates are formatted for reading; these layout rules only fight that.
-      'vue/max-attributes-per-line': 'off',
-      'vue/singleline-html-element-content-newline': 'off',
-      'vue/multiline-html-element-content-newline': 'off',
-      'vue/html-self-closing': 'off',
-      'vue/html-closing-bracket-newline': 'off',
-      'vue/first-attribute-linebreak': 'off',
-      'vue/html-indent': 'off',
-      'vue/attributes-order': 'off',
+      // Template attributes: a fixed order, and self-closing tags written the way Prettier prints them.
+      'vue/attributes-order': ['error', { alphabetical: false }],
+      'vue/html-self-closing': [
+        'error',
+        { html: { void: 'always', normal: 'always', component: 'always' }, svg: 'always', math: 'always' },
+      ],
+      'vue/attribute-hyphenation': 'error',
+      'vue/v-on-event-hyphenation': ['error', 'always', { autofix: true }],
+      'vue/no-multiple-template-root': 'off',
     },
   },
 );

@@ -9,7 +9,13 @@ import pg from 'pg';
 import { analyseDieline } from '../packages/dieline/src/index';
 import { recordResults, type BenchResult } from './lib/benchResults';
 import { profile, repoRoot } from './lib/profile';
-import { ENTRY_GZIP_TARGET_BYTES, formatWebRows, measureBoardRender, measureEntryChunk, WEB_TABLE_HEADER } from './benchWeb';
+import {
+  ENTRY_GZIP_TARGET_BYTES,
+  formatWebRows,
+  measureBoardRender,
+  measureEntryChunk,
+  WEB_TABLE_HEADER,
+} from './benchWeb';
 import { bringUp } from './lib/stack';
 import { Supervisor } from './lib/supervisor';
 
@@ -20,10 +26,45 @@ const SECONDS = Number(process.env.BENCH_SECONDS ?? 8);
 const p = profile('test');
 const supervisor = new Supervisor(path.join(p.dataDir, 'logs'), { echo: false });
 
-const dxf = ['0', 'SECTION', '2', 'ENTITIES', '0', 'LWPOLYLINE', '8', 'CUT', '90', '4', '70', '1', '10', '0', '20', '0', '10', '8', '20', '0', '10', '8', '20', '5', '10', '0', '20', '5', '0', 'ENDSEC', '0', 'EOF', ''].join('\n');
+const dxf = [
+  '0',
+  'SECTION',
+  '2',
+  'ENTITIES',
+  '0',
+  'LWPOLYLINE',
+  '8',
+  'CUT',
+  '90',
+  '4',
+  '70',
+  '1',
+  '10',
+  '0',
+  '20',
+  '0',
+  '10',
+  '8',
+  '20',
+  '0',
+  '10',
+  '8',
+  '20',
+  '5',
+  '10',
+  '0',
+  '20',
+  '5',
+  '0',
+  'ENDSEC',
+  '0',
+  'EOF',
+  '',
+].join('\n');
 
 /** p-th percentile of sorted values, nearest rank. */
-const percentile = (sorted: number[], p: number) => sorted[Math.min(sorted.length - 1, Math.ceil((p / 100) * sorted.length) - 1)] ?? NaN;
+const percentile = (sorted: number[], p: number) =>
+  sorted[Math.min(sorted.length - 1, Math.ceil((p / 100) * sorted.length) - 1)] ?? NaN;
 
 async function load(url: string, token: string) {
   const headers = { Authorization: `Bearer ${token}` };
@@ -34,7 +75,13 @@ async function load(url: string, token: string) {
   instance.on('response', (_client: unknown, _status: number, _bytes: number, ms: number) => latencies.push(ms));
   const result = await instance;
   latencies.sort((a, b) => a - b);
-  return { rps: result.requests.average, p50: percentile(latencies, 50), p95: percentile(latencies, 95), p99: percentile(latencies, 99), errors: result.errors + result.non2xx };
+  return {
+    rps: result.requests.average,
+    p50: percentile(latencies, 50),
+    p95: percentile(latencies, 95),
+    p99: percentile(latencies, 99),
+    errors: result.errors + result.non2xx,
+  };
 }
 
 try {
@@ -45,28 +92,83 @@ try {
   console.log('· generating 2,000 requests, 20,000 bids, 100,000 price records');
   const shops: number[] = [];
   for (let i = 0; i < BIDS_PER_REQUEST; i++) {
-    const [s] = await knex('organisations').insert({ name: `Bench shop ${i}`, kind: 'die_shop', time_zone: 'America/Chicago', postcode: '60148' }).returning('id');
+    const [s] = await knex('organisations')
+      .insert({ name: `Bench shop ${i}`, kind: 'die_shop', time_zone: 'America/Chicago', postcode: '60148' })
+      .returning('id');
     shops.push(s.id);
   }
   const { metrics, preview } = analyseDieline(dxf);
   const deadline = new Date(Date.now() + 5 * 86_400_000);
   for (let done = 0; done < REQUESTS; done += 500) {
     const ids = await knex('die_requests')
-      .insert(Array.from({ length: 500 }, (_, i) => ({ organisation_id: printer.id, created_by: buyer.id, title: `Bench carton ${done + i}`, status: 'open', quantity: 1, ups: 2, rule_types: '{cut,crease}', need_by_date: '2027-03-01', bid_deadline: deadline, delivery_postcode: '60614', published_at: new Date() })))
+      .insert(
+        Array.from({ length: 500 }, (_, i) => ({
+          organisation_id: printer.id,
+          created_by: buyer.id,
+          title: `Bench carton ${done + i}`,
+          status: 'open',
+          quantity: 1,
+          ups: 2,
+          rule_types: '{cut,crease}',
+          need_by_date: '2027-03-01',
+          bid_deadline: deadline,
+          delivery_postcode: '60614',
+          published_at: new Date(),
+        })),
+      )
       .returning('id');
-    await knex('dieline_files').insert(ids.map(({ id }: { id: number }) => ({ request_id: id, file_name: 'bench.dxf', format: 'dxf', content_type: 'application/dxf', byte_size: dxf.length, sha256: 'bench', s3_key: `bench/${id}.dxf`, is_primary: true, analysis_status: 'done', metrics: JSON.stringify(metrics), preview: JSON.stringify(preview) })));
+    await knex('dieline_files').insert(
+      ids.map(({ id }: { id: number }) => ({
+        request_id: id,
+        file_name: 'bench.dxf',
+        format: 'dxf',
+        content_type: 'application/dxf',
+        byte_size: dxf.length,
+        sha256: 'bench',
+        s3_key: `bench/${id}.dxf`,
+        is_primary: true,
+        analysis_status: 'done',
+        metrics: JSON.stringify(metrics),
+        preview: JSON.stringify(preview),
+      })),
+    );
     await knex('bids').insert(
       ids.flatMap(({ id }: { id: number }) =>
-        shops.map((shopId, k) => ({ request_id: id, shop_id: shopId, lines: JSON.stringify([{ kind: 'die', description: '', amountCents: 50_000 + k * 1000 }]), currency: 'USD', total_cents: 50_000 + k * 1000, die_cents: 50_000 + k * 1000, lead_days: 5 + k, promised_ship_date: '2027-02-01', valid_until: '2027-02-15' })),
+        shops.map((shopId, k) => ({
+          request_id: id,
+          shop_id: shopId,
+          lines: JSON.stringify([{ kind: 'die', description: '', amountCents: 50_000 + k * 1000 }]),
+          currency: 'USD',
+          total_cents: 50_000 + k * 1000,
+          die_cents: 50_000 + k * 1000,
+          lead_days: 5 + k,
+          promised_ship_date: '2027-02-01',
+          valid_until: '2027-02-15',
+        })),
       ),
     );
   }
   for (let done = 0; done < PRICE_RECORDS; done += 5000) {
-    await knex('price_records').insert(Array.from({ length: 5000 }, (_, i) => ({ organisation_id: printer.id, shop_name: `Bench shop ${i % 10}`, total_cents: 60_000 + (i % 500) * 100, die_cents: 55_000 + (i % 500) * 100, currency: 'USD', priced_on: '2026-06-01', rule_length_in: 50 + (i % 300), bends: i % 40, complexity: 'simple', source: 'import' })));
+    await knex('price_records').insert(
+      Array.from({ length: 5000 }, (_, i) => ({
+        organisation_id: printer.id,
+        shop_name: `Bench shop ${i % 10}`,
+        total_cents: 60_000 + (i % 500) * 100,
+        die_cents: 55_000 + (i % 500) * 100,
+        currency: 'USD',
+        priced_on: '2026-06-01',
+        rule_length_in: 50 + (i % 300),
+        bends: i % 40,
+        complexity: 'simple',
+        source: 'import',
+      })),
+    );
   }
   await knex.raw('ANALYZE');
   const sampleRequest = (await knex('die_requests').where({ title: 'Bench carton 1000' }).first()).id;
-  await knex('die_requests').where({ id: sampleRequest }).update({ status: 'bidding_closed', bidding_closed_at: new Date() });
+  await knex('die_requests')
+    .where({ id: sampleRequest })
+    .update({ status: 'bidding_closed', bidding_closed_at: new Date() });
 
   if (process.env.BENCH_HOLD) {
     // For profiling by hand: the generated data set stays up until Ctrl-C.
@@ -74,7 +176,15 @@ try {
     await new Promise((resolve) => process.once('SIGINT', resolve));
   }
   const login = async (email: string) =>
-    ((await (await fetch(`${env.APP_URL}/api/auth/login`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ email, password: 'kerfmark-demo-2026' }) })).json()) as { token: string }).token;
+    (
+      (await (
+        await fetch(`${env.APP_URL}/api/auth/login`, {
+          method: 'POST',
+          headers: { 'content-type': 'application/json' },
+          body: JSON.stringify({ email, password: 'kerfmark-demo-2026' }),
+        })
+      ).json()) as { token: string }
+    ).token;
   const estimatorToken = await login('grace@brightline.example');
   const purchasingToken = await login('daniel@larkspur.example');
 
@@ -106,16 +216,28 @@ try {
       [sampleRequest],
     );
     const [files, questions, invited] = await Promise.all([
-      pool.query('SELECT id, file_name, metrics, layer_map FROM dieline_files WHERE request_id = $1 ORDER BY uploaded_at', [sampleRequest]),
+      pool.query(
+        'SELECT id, file_name, metrics, layer_map FROM dieline_files WHERE request_id = $1 ORDER BY uploaded_at',
+        [sampleRequest],
+      ),
       pool.query('SELECT * FROM request_questions WHERE request_id = $1 ORDER BY asked_at', [sampleRequest]),
-      pool.query('SELECT o.id, o.name FROM request_invitations i JOIN organisations o ON o.id = i.shop_id WHERE i.request_id = $1', [sampleRequest]),
+      pool.query(
+        'SELECT o.id, o.name FROM request_invitations i JOIN organisations o ON o.id = i.shop_id WHERE i.request_id = $1',
+        [sampleRequest],
+      ),
     ]);
     res.json({ ...r.rows[0], files: files.rows, questions: questions.rows, invited: invited.rows });
   });
   base.get('/bids', async (_req, res) => {
-    const r = await pool.query('SELECT r.*, a.po_number FROM die_requests r LEFT JOIN awards a ON a.request_id = r.id WHERE r.id = $1', [sampleRequest]);
+    const r = await pool.query(
+      'SELECT r.*, a.po_number FROM die_requests r LEFT JOIN awards a ON a.request_id = r.id WHERE r.id = $1',
+      [sampleRequest],
+    );
     const [bids, records, files] = await Promise.all([
-      pool.query("SELECT b.*, o.name AS shop FROM bids b JOIN organisations o ON o.id = b.shop_id WHERE b.request_id = $1 AND b.status = 'submitted' ORDER BY b.total_cents", [sampleRequest]),
+      pool.query(
+        "SELECT b.*, o.name AS shop FROM bids b JOIN organisations o ON o.id = b.shop_id WHERE b.request_id = $1 AND b.status = 'submitted' ORDER BY b.total_cents",
+        [sampleRequest],
+      ),
       pool.query(
         `SELECT a.shop_id, count(*) AS jobs, count(r.shipped_at) AS shipped FROM awards a JOIN die_requests r ON r.id = a.request_id
          WHERE a.shop_id IN (SELECT shop_id FROM bids WHERE request_id = $1 AND status = 'submitted') GROUP BY a.shop_id`,
@@ -130,9 +252,21 @@ try {
   const baseUrl = `http://127.0.0.1:${(server.address() as { port: number }).port}`;
 
   const cases = [
-    { name: 'open-requests board', api: [`${env.APP_URL}/api/marketplace/requests`, estimatorToken], base: `${baseUrl}/board` },
-    { name: 'request detail', api: [`${env.APP_URL}/api/requests/${sampleRequest}`, purchasingToken], base: `${baseUrl}/detail` },
-    { name: 'bid comparison', api: [`${env.APP_URL}/api/requests/${sampleRequest}/bids`, purchasingToken], base: `${baseUrl}/bids` },
+    {
+      name: 'open-requests board',
+      api: [`${env.APP_URL}/api/marketplace/requests`, estimatorToken],
+      base: `${baseUrl}/board`,
+    },
+    {
+      name: 'request detail',
+      api: [`${env.APP_URL}/api/requests/${sampleRequest}`, purchasingToken],
+      base: `${baseUrl}/detail`,
+    },
+    {
+      name: 'bid comparison',
+      api: [`${env.APP_URL}/api/requests/${sampleRequest}/bids`, purchasingToken],
+      base: `${baseUrl}/bids`,
+    },
   ] as const;
   const rows: string[] = [];
   const results: BenchResult[] = [];
@@ -152,19 +286,36 @@ try {
       `| ${c.name.padEnd(20)} | ${api.rps.toFixed(0).padStart(6)} | ${api.p50.toFixed(0).padStart(6)} | ${api.p95.toFixed(0).padStart(6)} | ${api.p99.toFixed(0).padStart(6)} | ${bare.rps.toFixed(0).padStart(13)} | ${(api.rps / bare.rps).toFixed(2).padStart(5)} | ${String(api.errors).padStart(6)} |`,
     );
   }
-  console.log(`\nAPI under load: autocannon, 50 connections, ${SECONDS} s each; ${REQUESTS.toLocaleString('en-US')} requests, ${(REQUESTS * BIDS_PER_REQUEST).toLocaleString('en-US')} bids, ${PRICE_RECORDS.toLocaleString('en-US')} price records`);
+  console.log(
+    `\nAPI under load: autocannon, 50 connections, ${SECONDS} s each; ${REQUESTS.toLocaleString('en-US')} requests, ${(REQUESTS * BIDS_PER_REQUEST).toLocaleString('en-US')} bids, ${PRICE_RECORDS.toLocaleString('en-US')} price records`,
+  );
   console.log('| route                | req/s  | p50 ms | p95 ms | p99 ms | bare pg req/s | ratio | errors |');
   console.log('|----------------------|--------|--------|--------|--------|---------------|-------|--------|');
   for (const row of rows) console.log(row);
 
   // The web app over the same data set: what index.html loads, and the board's first row in Chromium.
   const entry = await measureEntryChunk(path.join(repoRoot, 'apps/web/dist'));
-  const board = await measureBoardRender(env.APP_URL!, { email: 'grace@brightline.example', password: 'kerfmark-demo-2026' }, 5);
-  console.log(`\nWeb app: the entry index.html loads, and the open-requests board cold in headless Chromium (median of ${board.runs})`);
+  const board = await measureBoardRender(
+    env.APP_URL!,
+    { email: 'grace@brightline.example', password: 'kerfmark-demo-2026' },
+    5,
+  );
+  console.log(
+    `\nWeb app: the entry index.html loads, and the open-requests board cold in headless Chromium (median of ${board.runs})`,
+  );
   console.log([...WEB_TABLE_HEADER, ...formatWebRows(entry, board)].join('\n'));
   results.push(
-    { figure: 'web entry (JS + CSS), gzip', value: `${(entry.gzip / 1000).toFixed(1)} kB`, target: '< 250 kB', met: entry.gzip < ENTRY_GZIP_TARGET_BYTES },
-    { figure: 'board first row, cold, Chromium', value: `${board.firstRowMs.toFixed(0)} ms`, baseline: `FCP ${board.fcpMs.toFixed(0)} ms` },
+    {
+      figure: 'web entry (JS + CSS), gzip',
+      value: `${(entry.gzip / 1000).toFixed(1)} kB`,
+      target: '< 250 kB',
+      met: entry.gzip < ENTRY_GZIP_TARGET_BYTES,
+    },
+    {
+      figure: 'board first row, cold, Chromium',
+      value: `${board.firstRowMs.toFixed(0)} ms`,
+      baseline: `FCP ${board.fcpMs.toFixed(0)} ms`,
+    },
   );
   recordResults(results);
   server.close();

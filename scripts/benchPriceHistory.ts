@@ -35,18 +35,29 @@ try {
       const length = 30 + rand() * 400;
       const bends = Math.round(rand() * length * 0.8);
       return {
-        organisation_id: org.id, shop_name: `Shop ${(done + i) % 40}`, currency: 'USD', source: 'import',
-        die_cents: Math.round(20_000 + 400 * length + 600 * bends), total_cents: Math.round(24_000 + 400 * length + 600 * bends),
+        organisation_id: org.id,
+        shop_name: `Shop ${(done + i) % 40}`,
+        currency: 'USD',
+        source: 'import',
+        die_cents: Math.round(20_000 + 400 * length + 600 * bends),
+        total_cents: Math.round(24_000 + 400 * length + 600 * bends),
         priced_on: new Date(Date.now() - rand() * 3 * 365 * 86_400_000).toISOString().slice(0, 10),
-        rule_length_in: length.toFixed(3), bends, complexity: bends / length > 1 ? 'complex' : 'simple',
+        rule_length_in: length.toFixed(3),
+        bends,
+        complexity: bends / length > 1 ? 'complex' : 'simple',
       };
     });
     await knex('price_records').insert(rows);
   }
   await knex.raw('ANALYZE price_records');
-  const login = await fetch(`${env.APP_URL}/api/auth/login`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ email: 'daniel@larkspur.example', password: 'kerfmark-demo-2026' }) });
+  const login = await fetch(`${env.APP_URL}/api/auth/login`, {
+    method: 'POST',
+    headers: { 'content-type': 'application/json' },
+    body: JSON.stringify({ email: 'daniel@larkspur.example', password: 'kerfmark-demo-2026' }),
+  });
   const { token } = (await login.json()) as { token: string };
-  const get = (url: string) => fetch(`${env.APP_URL}${url}`, { headers: { Authorization: `Bearer ${token}` } }).then((r) => r.json());
+  const get = (url: string) =>
+    fetch(`${env.APP_URL}${url}`, { headers: { Authorization: `Bearer ${token}` } }).then((r) => r.json());
 
   const bare = await time(() => knex('price_records').where({ organisation_id: org.id }).count('* as n'));
   const list = await time(() => get('/api/price-history?pageSize=50'));
@@ -56,10 +67,22 @@ try {
   console.log(`  bare SQL count            ${bare.toFixed(1)} ms`);
   console.log(`  GET /api/price-history    ${list.toFixed(1)} ms   (ratio ${(list / bare).toFixed(1)})`);
   console.log(`  … with filters            ${filtered.toFixed(1)} ms   (ratio ${(filtered / bare).toFixed(1)})`);
-  console.log(`  GET /api/price-history/fit ${fit.toFixed(1)} ms   (ratio ${(fit / bare).toFixed(1)}; the fit runs on a 5,000-record sample)`);
+  console.log(
+    `  GET /api/price-history/fit ${fit.toFixed(1)} ms   (ratio ${(fit / bare).toFixed(1)}; the fit runs on a 5,000-record sample)`,
+  );
   recordResults([
-    { figure: 'GET /api/price-history (50 of 100,000)', value: `${list.toFixed(1)} ms`, baseline: `count ${bare.toFixed(1)} ms`, ratio: list / bare },
-    { figure: 'GET /api/price-history/fit', value: `${fit.toFixed(1)} ms`, baseline: `count ${bare.toFixed(1)} ms`, ratio: fit / bare },
+    {
+      figure: 'GET /api/price-history (50 of 100,000)',
+      value: `${list.toFixed(1)} ms`,
+      baseline: `count ${bare.toFixed(1)} ms`,
+      ratio: list / bare,
+    },
+    {
+      figure: 'GET /api/price-history/fit',
+      value: `${fit.toFixed(1)} ms`,
+      baseline: `count ${bare.toFixed(1)} ms`,
+      ratio: fit / bare,
+    },
   ]);
   await knex.destroy();
   await supervisor.stopAll(0);

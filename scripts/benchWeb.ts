@@ -44,7 +44,9 @@ export interface EntryChunk {
 function tags(html: string): Array<{ tag: string; attrs: Record<string, string> }> {
   return [...html.matchAll(/<(script|link)\b([^>]*)>/gi)].map((m) => ({
     tag: m[1]!.toLowerCase(),
-    attrs: Object.fromEntries([...m[2]!.matchAll(/([\w-]+)(?:="([^"]*)")?/g)].map((a) => [a[1]!.toLowerCase(), a[2] ?? ''])),
+    attrs: Object.fromEntries(
+      [...m[2]!.matchAll(/([\w-]+)(?:="([^"]*)")?/g)].map((a) => [a[1]!.toLowerCase(), a[2] ?? '']),
+    ),
   }));
 }
 
@@ -61,13 +63,15 @@ function staticImports(code: string): string[] {
  */
 export async function measureEntryChunk(distDir: string): Promise<EntryChunk> {
   const indexPath = path.join(distDir, 'index.html');
-  if (!existsSync(indexPath)) throw new Error(`${indexPath} is missing: build the web app first (npx turbo run build --filter=@kerfmark/web)`);
+  if (!existsSync(indexPath))
+    throw new Error(`${indexPath} is missing: build the web app first (npx turbo run build --filter=@kerfmark/web)`);
   const html = await readFile(indexPath, 'utf8');
   const local = (href: string) => path.join(distDir, new URL(href, 'http://app/').pathname);
   const wanted = new Map<string, EntryFile['kind']>();
   for (const { tag, attrs } of tags(html)) {
     if (tag === 'script' && attrs.type === 'module' && attrs.src) wanted.set(local(attrs.src), 'script');
-    else if (tag === 'link' && attrs.rel === 'modulepreload' && attrs.href) wanted.set(local(attrs.href), 'modulepreload');
+    else if (tag === 'link' && attrs.rel === 'modulepreload' && attrs.href)
+      wanted.set(local(attrs.href), 'modulepreload');
     else if (tag === 'link' && attrs.rel === 'stylesheet' && attrs.href) wanted.set(local(attrs.href), 'stylesheet');
   }
   if (![...wanted.values()].includes('script')) throw new Error(`${indexPath} has no <script type="module" src>`);
@@ -90,7 +94,15 @@ export async function measureEntryChunk(distDir: string): Promise<EntryChunk> {
   const sum = (list: EntryFile[], key: 'raw' | 'gzip') => list.reduce((total, f) => total + f[key], 0);
   const js = files.filter((f) => f.kind !== 'stylesheet');
   const css = files.filter((f) => f.kind === 'stylesheet');
-  return { files, jsRaw: sum(js, 'raw'), jsGzip: sum(js, 'gzip'), cssRaw: sum(css, 'raw'), cssGzip: sum(css, 'gzip'), raw: sum(files, 'raw'), gzip: sum(files, 'gzip') };
+  return {
+    files,
+    jsRaw: sum(js, 'raw'),
+    jsGzip: sum(js, 'gzip'),
+    cssRaw: sum(css, 'raw'),
+    cssGzip: sum(css, 'gzip'),
+    raw: sum(files, 'raw'),
+    gzip: sum(files, 'gzip'),
+  };
 }
 
 export interface BoardRender {
@@ -105,7 +117,13 @@ export interface BoardRender {
   boardApiMs: number;
   /** Bytes over the wire before the first row (median). */
   transferBytes: number;
-  samples: Array<{ firstRowMs: number; fcpMs: number; domContentLoadedMs: number; boardApiMs: number; transferBytes: number }>;
+  samples: Array<{
+    firstRowMs: number;
+    fcpMs: number;
+    domContentLoadedMs: number;
+    boardApiMs: number;
+    transferBytes: number;
+  }>;
 }
 
 /**
@@ -142,9 +160,14 @@ function readTimings(mark: string) {
  * Signs in once through the sign-in page (the app keeps its token in localStorage), then loads the
  * open-requests board `runs` times, each in a new browser context carrying only that storage.
  */
-export async function measureBoardRender(appUrl: string, credentials: { email: string; password: string }, runs = 5): Promise<BoardRender> {
+export async function measureBoardRender(
+  appUrl: string,
+  credentials: { email: string; password: string },
+  runs = 5,
+): Promise<BoardRender> {
   if (!Number.isInteger(runs) || runs < 1) throw new Error(`runs must be a whole number of at least 1, not ${runs}`);
-  if (!process.env.CHROMIUM_PATH) ensureDebianPackage('/usr/bin/chromium', 'chromium', 'The board render benchmark (headless Chromium)');
+  if (!process.env.CHROMIUM_PATH)
+    ensureDebianPackage('/usr/bin/chromium', 'chromium', 'The board render benchmark (headless Chromium)');
   const origin = new URL(appUrl).origin;
   const browser = await launch();
   try {
@@ -167,16 +190,28 @@ export async function measureBoardRender(appUrl: string, credentials: { email: s
         await context.addInitScript(markFirstRow, [ROW, FIRST_ROW_MARK] as [string, string]);
         const board = await context.newPage();
         await board.goto(`${origin}/open-requests`, { waitUntil: 'commit' });
-        await board.waitForFunction((mark) => performance.getEntriesByName(mark).length > 0, FIRST_ROW_MARK, { timeout: 30_000 }).catch(() => {
-          throw new Error(`no board row appeared within 30 s (the page is at ${board.url()}); does ${credentials.email} see open requests?`);
-        });
+        await board
+          .waitForFunction((mark) => performance.getEntriesByName(mark).length > 0, FIRST_ROW_MARK, { timeout: 30_000 })
+          .catch(() => {
+            throw new Error(
+              `no board row appeared within 30 s (the page is at ${board.url()}); does ${credentials.email} see open requests?`,
+            );
+          });
         samples.push(await board.evaluate(readTimings, FIRST_ROW_MARK));
       } finally {
         await context.close();
       }
     }
     const med = (key: keyof BoardRender['samples'][number]) => median(samples.map((s) => s[key]));
-    return { runs, firstRowMs: med('firstRowMs'), fcpMs: med('fcpMs'), domContentLoadedMs: med('domContentLoadedMs'), boardApiMs: med('boardApiMs'), transferBytes: med('transferBytes'), samples };
+    return {
+      runs,
+      firstRowMs: med('firstRowMs'),
+      fcpMs: med('fcpMs'),
+      domContentLoadedMs: med('domContentLoadedMs'),
+      boardApiMs: med('boardApiMs'),
+      transferBytes: med('transferBytes'),
+      samples,
+    };
   } finally {
     await browser.close();
   }
@@ -185,14 +220,26 @@ export async function measureBoardRender(appUrl: string, credentials: { email: s
 const kb = (bytes: number) => `${(bytes / KB).toFixed(1)} kB`;
 const ms = (value: number) => `${value.toFixed(0)} ms`;
 
-export const WEB_TABLE_HEADER = ['| web figure                             | value     | note                                    |', '|----------------------------------------|-----------|-----------------------------------------|'];
+export const WEB_TABLE_HEADER = [
+  '| web figure                             | value     | note                                    |',
+  '|----------------------------------------|-----------|-----------------------------------------|',
+];
 
 /** Table rows for the web figures, in the shape of the bench's other tables. */
 export function formatWebRows(entry: EntryChunk, board?: BoardRender): string[] {
-  const row = (figure: string, value: string, note: string) => `| ${figure.padEnd(38)} | ${value.padStart(9)} | ${note.padEnd(39)} |`;
+  const row = (figure: string, value: string, note: string) =>
+    `| ${figure.padEnd(38)} | ${value.padStart(9)} | ${note.padEnd(39)} |`;
   const rows = [
-    row('entry JS + CSS, gzip -9', kb(entry.gzip), `target < ${kb(ENTRY_GZIP_TARGET_BYTES)}: ${entry.gzip < ENTRY_GZIP_TARGET_BYTES ? 'met' : 'MISSED'}`),
-    row('entry JS + CSS, raw (as served)', kb(entry.raw), `${entry.files.length} files; JS ${kb(entry.jsGzip)} gzip, CSS ${kb(entry.cssGzip)}`),
+    row(
+      'entry JS + CSS, gzip -9',
+      kb(entry.gzip),
+      `target < ${kb(ENTRY_GZIP_TARGET_BYTES)}: ${entry.gzip < ENTRY_GZIP_TARGET_BYTES ? 'met' : 'MISSED'}`,
+    ),
+    row(
+      'entry JS + CSS, raw (as served)',
+      kb(entry.raw),
+      `${entry.files.length} files; JS ${kb(entry.jsGzip)} gzip, CSS ${kb(entry.cssGzip)}`,
+    ),
   ];
   if (board) {
     const note = `median of ${board.runs} cold loads`;
@@ -212,9 +259,19 @@ if (process.argv[1] && import.meta.url === pathToFileURL(process.argv[1]).href) 
     const entry = await measureEntryChunk(process.env.BENCH_WEB_DIST ?? path.join(repoRoot, 'apps/web/dist'));
     const appUrl = process.env.BENCH_WEB_URL;
     const board = appUrl
-      ? await measureBoardRender(appUrl, { email: process.env.BENCH_WEB_EMAIL ?? 'grace@brightline.example', password: process.env.BENCH_WEB_PASSWORD ?? DEMO_PASSWORD }, Number(process.env.BENCH_WEB_RUNS ?? 5))
+      ? await measureBoardRender(
+          appUrl,
+          {
+            email: process.env.BENCH_WEB_EMAIL ?? 'grace@brightline.example',
+            password: process.env.BENCH_WEB_PASSWORD ?? DEMO_PASSWORD,
+          },
+          Number(process.env.BENCH_WEB_RUNS ?? 5),
+        )
       : undefined;
-    for (const f of entry.files) console.log(`  ${f.kind.padEnd(14)} ${f.file.padEnd(44)} ${kb(f.raw).padStart(9)} raw ${kb(f.gzip).padStart(9)} gzip`);
+    for (const f of entry.files)
+      console.log(
+        `  ${f.kind.padEnd(14)} ${f.file.padEnd(44)} ${kb(f.raw).padStart(9)} raw ${kb(f.gzip).padStart(9)} gzip`,
+      );
     if (!board) console.log('  (set BENCH_WEB_URL to a running app to time the board too)');
     console.log([...WEB_TABLE_HEADER, ...formatWebRows(entry, board)].join('\n'));
   } catch (error) {

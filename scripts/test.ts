@@ -26,12 +26,20 @@ let exitCode = 1;
 try {
   ensureDebianPackage('/usr/bin/chromium', 'chromium', 'The end-to-end tests (headless Chromium)');
   // Start from empty stores each run, so a run never depends on the one before.
-  for (const dir of ['s3', 'mail', 'logs', 'screenshots']) rmSync(path.join(p.dataDir, dir), { recursive: true, force: true });
+  for (const dir of ['s3', 'mail', 'logs', 'screenshots'])
+    rmSync(path.join(p.dataDir, dir), { recursive: true, force: true });
   const env = await bringUp(p, supervisor, { fresh: true });
   rmSync(report, { force: true });
   const vitest = spawnSync(
     process.execPath,
-    [path.join(repoRoot, 'node_modules/vitest/vitest.mjs'), 'run', '--reporter=default', '--reporter=json', `--outputFile.json=${report}`, ...process.argv.slice(2)],
+    [
+      path.join(repoRoot, 'node_modules/vitest/vitest.mjs'),
+      'run',
+      '--reporter=default',
+      '--reporter=json',
+      `--outputFile.json=${report}`,
+      ...process.argv.slice(2),
+    ],
     {
       cwd: repoRoot,
       stdio: 'inherit',

@@ -15,7 +15,9 @@ mkdirSync(dir, { recursive: true });
 const store = new MessageStore(path.join(dir, 'messages.jsonl'));
 
 const addresses = (field: AddressObject | AddressObject[] | undefined): string[] =>
-  (Array.isArray(field) ? field : field ? [field] : []).flatMap((a) => a.value.map((v) => v.address ?? '')).filter(Boolean);
+  (Array.isArray(field) ? field : field ? [field] : [])
+    .flatMap((a) => a.value.map((v) => v.address ?? ''))
+    .filter(Boolean);
 
 const smtp = new SMTPServer({
   authOptional: true,

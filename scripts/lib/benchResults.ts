@@ -18,9 +18,17 @@ export function recordResults(results: BenchResult[]): void {
 
 /** The summary table of the figures. */
 export function summaryTable(rows: BenchResult[]): string {
-  const cells = rows.map((r) => [r.figure, r.value, r.baseline ?? '', r.ratio === undefined ? '' : r.ratio.toFixed(2), r.target ?? '', r.met === undefined ? '' : r.met ? 'met' : 'MISSED']);
+  const cells = rows.map((r) => [
+    r.figure,
+    r.value,
+    r.baseline ?? '',
+    r.ratio === undefined ? '' : r.ratio.toFixed(2),
+    r.target ?? '',
+    r.met === undefined ? '' : r.met ? 'met' : 'MISSED',
+  ]);
   const head = ['figure', 'value', 'baseline', 'ratio', 'target', ''];
   const widths = head.map((h, i) => Math.max(h.length, ...cells.map((c) => c[i]!.length)));
-  const line = (c: string[]) => `| ${c.map((v, i) => (i === 0 ? v.padEnd(widths[i]!) : v.padStart(widths[i]!))).join(' | ')} |`;
+  const line = (c: string[]) =>
+    `| ${c.map((v, i) => (i === 0 ? v.padEnd(widths[i]!) : v.padStart(widths[i]!))).join(' | ')} |`;
   return [line(head), `|${widths.map((w) => '-'.repeat(w + 2)).join('|')}|`, ...cells.map(line)].join('\n');
 }

@@ -43,25 +43,46 @@ describe('where a cluster lives', () => {
     expect(statSync(dir).mode & 0o777).toBe(0o700);
   });
 
-  it.runIf(isRoot)('moves the data out of a checkout the postgres user cannot reach, to a kept folder it owns, and says why', () => {
-    const root = checkout('private', 0o700);
-    const dirs = clusterDirs({ baseDir: path.join(root, '.data/test'), name: 'test', checkoutRoot: root, user: 'postgres', sharedRoot });
-    expect(dirs.data.startsWith(sharedRoot)).toBe(true);
-    expect(dirs.movedBecause).toContain('cannot reach');
-    expect(reachableBy(dirs.data, 'postgres') && reachableBy(dirs.run, 'postgres')).toBe(true);
-  });
+  it.runIf(isRoot)(
+    'moves the data out of a checkout the postgres user cannot reach, to a kept folder it owns, and says why',
+    () => {
+      const root = checkout('private', 0o700);
+      const dirs = clusterDirs({
+        baseDir: path.join(root, '.data/test'),
+        name: 'test',
+        checkoutRoot: root,
+        user: 'postgres',
+        sharedRoot,
+      });
+      expect(dirs.data.startsWith(sharedRoot)).toBe(true);
+      expect(dirs.movedBecause).toContain('cannot reach');
+      expect(reachableBy(dirs.data, 'postgres') && reachableBy(dirs.run, 'postgres')).toBe(true);
+    },
+  );
 
   it('keeps the data under the checkout when the server can reach it', () => {
     const root = checkout('open folder with spaces', 0o755);
     const baseDir = path.join(root, '.data/test');
-    const dirs = clusterDirs({ baseDir, name: 'test', checkoutRoot: root, user: isRoot ? 'postgres' : null, sharedRoot });
+    const dirs = clusterDirs({
+      baseDir,
+      name: 'test',
+      checkoutRoot: root,
+      user: isRoot ? 'postgres' : null,
+      sharedRoot,
+    });
     expect(dirs).toEqual({ data: path.join(baseDir, 'pg'), run: path.join(baseDir, 'pg-run') });
   });
 
   it('puts the socket in a short folder when the checkout path is too long for a Unix socket', () => {
     // sun_path holds 108 bytes on Linux (unix(7)); this folder alone is longer.
     const root = checkout('long', 0o755, 'k'.repeat(120));
-    const dirs = clusterDirs({ baseDir: path.join(root, '.data/test'), name: 'test', checkoutRoot: root, user: isRoot ? 'postgres' : null, sharedRoot });
+    const dirs = clusterDirs({
+      baseDir: path.join(root, '.data/test'),
+      name: 'test',
+      checkoutRoot: root,
+      user: isRoot ? 'postgres' : null,
+      sharedRoot,
+    });
     expect(dirs.data.startsWith(root)).toBe(true);
     expect(dirs.run.length).toBeLessThan(90);
   });
@@ -79,7 +100,9 @@ describe('the server version', () => {
     const dir = path.join(scratch, 'old-cluster');
     mkdirSync(dir, { recursive: true });
     writeFileSync(path.join(dir, 'PG_VERSION'), '15\n');
-    expect(() => checkClusterMajor(dir, 17)).toThrow(/made by PostgreSQL 15.*runs PostgreSQL 17.*remove that folder.*pg_upgrade/s);
+    expect(() => checkClusterMajor(dir, 17)).toThrow(
+      /made by PostgreSQL 15.*runs PostgreSQL 17.*remove that folder.*pg_upgrade/s,
+    );
     expect(statSync(path.join(dir, 'PG_VERSION')).size).toBe(3);
     expect(() => checkClusterMajor(dir, 15)).not.toThrow();
   });
@@ -88,7 +111,8 @@ describe('the server version', () => {
 /** A cluster made outside the scratch folder (the kept folder, a short socket folder) goes with it. */
 function removeCluster(cluster: { dataDir: string; runDir: string }) {
   for (const dir of [cluster.dataDir, cluster.runDir]) rmSync(dir, { recursive: true, force: true });
-  if (cluster.dataDir.startsWith(SHARED_CLUSTER_ROOT)) rmSync(path.dirname(cluster.dataDir), { recursive: true, force: true });
+  if (cluster.dataDir.startsWith(SHARED_CLUSTER_ROOT))
+    rmSync(path.dirname(cluster.dataDir), { recursive: true, force: true });
 }
 
 describe('a real cluster from awkward checkouts', () => {
@@ -100,7 +124,13 @@ describe('a real cluster from awkward checkouts', () => {
     it(`initdb, start, query and stop ${label}`, async () => {
       const root = checkout(parent, mode, name);
       const port = await freePort();
-      const cluster = postgresCluster({ baseDir: path.join(root, '.data/test'), name: `t${port}`, port, forTests: true, checkoutRoot: root });
+      const cluster = postgresCluster({
+        baseDir: path.join(root, '.data/test'),
+        name: `t${port}`,
+        port,
+        forTests: true,
+        checkoutRoot: root,
+      });
       try {
         await cluster.start();
         const client = new pg.Client({ host: '127.0.0.1', port, user: 'kerfmark', database: 'postgres' });
@@ -119,7 +149,14 @@ describe('a real cluster from awkward checkouts', () => {
     const squatter = net.createServer().listen(0, '127.0.0.1');
     await new Promise((r) => squatter.once('listening', r));
     const { port } = squatter.address() as net.AddressInfo;
-    const cluster = postgresCluster({ baseDir: path.join(root, '.data/test'), name: `p${port}`, port, forTests: true, checkoutRoot: root, portVariable: 'KERFMARK_TEST_PG_PORT' });
+    const cluster = postgresCluster({
+      baseDir: path.join(root, '.data/test'),
+      name: `p${port}`,
+      port,
+      forTests: true,
+      checkoutRoot: root,
+      portVariable: 'KERFMARK_TEST_PG_PORT',
+    });
     try {
       await expect(cluster.start()).rejects.toThrow(`Port ${port} for PostgreSQL is already in use`);
       await expect(cluster.start()).rejects.toThrow('KERFMARK_TEST_PG_PORT');

@@ -17,7 +17,10 @@ export interface ClusterDirs {
 }
 
 function ids(user: string): { uid: number; gid: number } {
-  return { uid: Number(run('id', ['-u', user], { quiet: true }).trim()), gid: Number(run('id', ['-g', user], { quiet: true }).trim()) };
+  return {
+    uid: Number(run('id', ['-u', user], { quiet: true }).trim()),
+    gid: Number(run('id', ['-g', user], { quiet: true }).trim()),
+  };
 }
 
 /**
@@ -49,14 +52,21 @@ export function reachableBy(dir: string, user: string | null): boolean {
  * named for the checkout and the cluster, owned by that user all the way down. The socket folder
  * moves to a short one under the temp dir when its path would be too long for a Unix socket.
  */
-export function clusterDirs(opts: { baseDir: string; name: string; checkoutRoot: string; user: string | null; sharedRoot?: string }): ClusterDirs {
+export function clusterDirs(opts: {
+  baseDir: string;
+  name: string;
+  checkoutRoot: string;
+  user: string | null;
+  sharedRoot?: string;
+}): ClusterDirs {
   const key = createHash('sha256').update(opts.checkoutRoot).digest('hex').slice(0, 10);
   const local: ClusterDirs = { data: path.join(opts.baseDir, 'pg'), run: path.join(opts.baseDir, 'pg-run') };
   let dirs = local;
   try {
     mkdirSync(opts.baseDir, { recursive: true });
     ownedDir(local.data, opts.user);
-    if (!reachableBy(local.data, opts.user)) dirs = { ...shared(), movedBecause: `the ${opts.user} user cannot reach ${opts.baseDir}` };
+    if (!reachableBy(local.data, opts.user))
+      dirs = { ...shared(), movedBecause: `the ${opts.user} user cannot reach ${opts.baseDir}` };
   } catch (error) {
     dirs = { ...shared(), movedBecause: `${opts.baseDir} cannot be used (${(error as Error).message.split('\n')[0]})` };
   }

@@ -14,7 +14,9 @@ describe('the Node versions the project runs on', () => {
   // Node 20 (20.19 and later) and Node 22 LTS from 22.13, the lowest 22.x that eslint 10 accepts
   // (its engines: ^20.19.0 || ^22.13.0 || >=24, in package-lock.json).
   const root = read('package.json');
-  const lock = JSON.parse(readFileSync(path.join(repoRoot, 'package-lock.json'), 'utf8')) as { packages: Record<string, Manifest> };
+  const lock = JSON.parse(readFileSync(path.join(repoRoot, 'package-lock.json'), 'utf8')) as {
+    packages: Record<string, Manifest>;
+  };
 
   it('the root declares them, and the lock file records the same', () => {
     expect(root.engines?.node).toBe('>=20.19 <21 || >=22.13');
@@ -22,7 +24,9 @@ describe('the Node versions the project runs on', () => {
   });
 
   it('no workspace asks for anything else', () => {
-    const workspaces = Object.entries(lock.packages).filter(([key, entry]) => key && !key.includes('node_modules') && entry.name?.startsWith('@kerfmark/'));
+    const workspaces = Object.entries(lock.packages).filter(
+      ([key, entry]) => key && !key.includes('node_modules') && entry.name?.startsWith('@kerfmark/'),
+    );
     expect(workspaces.length).toBeGreaterThan(5);
     for (const [key] of workspaces) {
       const own = read(`${key}/package.json`).engines?.node;

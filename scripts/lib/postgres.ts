@@ -67,19 +67,49 @@ export interface PostgresCluster extends PostgresHandle {
  * a crash of the machine. pg_ctl runs without blocking the event loop, so a process may stop
  * and start its own cluster while it serves requests (the outage tests do).
  */
-export function postgresCluster(opts: { baseDir: string; name: string; port: number; forTests: boolean; checkoutRoot?: string; portVariable?: string }): PostgresCluster {
+export function postgresCluster(opts: {
+  baseDir: string;
+  name: string;
+  port: number;
+  forTests: boolean;
+  checkoutRoot?: string;
+  portVariable?: string;
+}): PostgresCluster {
   const { bin, major } = binDir();
-  const dirs = clusterDirs({ baseDir: opts.baseDir, name: opts.name, checkoutRoot: opts.checkoutRoot ?? repoRoot, user: RUN_AS });
+  const dirs = clusterDirs({
+    baseDir: opts.baseDir,
+    name: opts.name,
+    checkoutRoot: opts.checkoutRoot ?? repoRoot,
+    user: RUN_AS,
+  });
   if (dirs.movedBecause) console.log(`· PostgreSQL data for ${opts.name} is in ${dirs.data}: ${dirs.movedBecause}`);
   checkClusterMajor(dirs.data, major);
-  const pgCtl = (args: string[]) => execFileAsync(...asUser(RUN_AS, path.join(bin, 'pg_ctl'), ['-D', dirs.data, ...args]));
-  const running = () => pgCtl(['status']).then(() => true, () => false);
+  const pgCtl = (args: string[]) =>
+    execFileAsync(...asUser(RUN_AS, path.join(bin, 'pg_ctl'), ['-D', dirs.data, ...args]));
+  const running = () =>
+    pgCtl(['status']).then(
+      () => true,
+      () => false,
+    );
 
   if (!existsSync(path.join(dirs.data, 'PG_VERSION'))) {
     console.log(`· creating the PostgreSQL cluster in ${dirs.data}`);
-    run(...asUser(RUN_AS, path.join(bin, 'initdb'), ['-D', dirs.data, '-A', 'trust', '-U', 'kerfmark', '-E', 'UTF8', '--no-locale']), {
-      quiet: true,
-    });
+    run(
+      ...asUser(RUN_AS, path.join(bin, 'initdb'), [
+        '-D',
+        dirs.data,
+        '-A',
+        'trust',
+        '-U',
+        'kerfmark',
+        '-E',
+        'UTF8',
+        '--no-locale',
+      ]),
+      {
+        quiet: true,
+      },
+    );
   }
   return {
     port: opts.port,
@@ -99,7 +129,9 @@ export function postgresCluster(opts: { baseDir: string; name: string; port: num
         '-c random_page_cost=1.1',
         ...(opts.forTests ? ['-c fsync=off', '-c synchronous_commit=off', '-c full_page_writes=off'] : []),
       ].join(' ');
-      await pgCtl(['-l', path.join(dirs.run, 'postgres.log'), '-o', options, '-w', '-t', '30', 'start']).catch(failed('start'));
+      await pgCtl(['-l', path.join(dirs.run, 'postgres.log'), '-o', options, '-w', '-t', '30', 'start']).catch(
+        failed('start'),
+      );
     },
     async stop() {
       if (await running()) await pgCtl(['-m', 'fast', '-w', 'stop']).catch(failed('stop'));
@@ -119,7 +151,13 @@ function failed(what: string) {
 }
 
 export async function startPostgres(p: Profile, opts: { fresh?: boolean } = {}): Promise<PostgresHandle> {
-  const cluster = postgresCluster({ baseDir: p.dataDir, name: p.name, port: p.ports.postgres, forTests: p.name === 'test', portVariable: portVariable(p, 'postgres') });
+  const cluster = postgresCluster({
+    baseDir: p.dataDir,
+    name: p.name,
+    port: p.ports.postgres,
+    forTests: p.name === 'test',
+    portVariable: portVariable(p, 'postgres'),
+  });
   await cluster.start();
   await ensureDatabase(p.ports.postgres, p.database, opts.fresh ?? false);
   return { stop: () => cluster.stop() };

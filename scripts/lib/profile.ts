@@ -14,7 +14,15 @@ export interface Profile {
   bucket: string;
 }
 
-const PORT_VARIABLES = { app: 'PORT', postgres: 'PG_PORT', redis: 'REDIS_PORT', s3: 'S3_PORT', smtp: 'SMTP_PORT', mailUi: 'MAIL_PORT', vite: 'VITE_PORT' } as const;
+const PORT_VARIABLES = {
+  app: 'PORT',
+  postgres: 'PG_PORT',
+  redis: 'REDIS_PORT',
+  s3: 'S3_PORT',
+  smtp: 'SMTP_PORT',
+  mailUi: 'MAIL_PORT',
+  vite: 'VITE_PORT',
+} as const;
 
 /** The variable that moves one of a profile's ports, e.g. KERFMARK_TEST_REDIS_PORT. */
 export function portVariable(p: Pick<Profile, 'name'>, key: keyof Profile['ports']): string {
@@ -25,7 +33,8 @@ function port(envName: string, fallback: number): number {
   const value = process.env[envName];
   if (!value) return fallback;
   const n = Number(value);
-  if (!Number.isInteger(n) || n < 1 || n > 65535) throw new Error(`${envName} must be a port number from 1 to 65535, not "${value}"`);
+  if (!Number.isInteger(n) || n < 1 || n > 65535)
+    throw new Error(`${envName} must be a port number from 1 to 65535, not "${value}"`);
   return n;
 }
 
@@ -67,7 +76,8 @@ export function serviceEnv(p: Profile): Record<string, string> {
     MAIL_CATCHER_URL: `http://${host}:${p.ports.mailUi}`,
     MAIL_FROM: 'Kerfmark <no-reply@kerfmark.test>',
     // A per-checkout secret for local use only, marked by its prefix: production refuses it.
-    JWT_SECRET: LOCAL_JWT_SECRET_PREFIX + createHash('sha256').update(`kerfmark-local:${repoRoot}:${p.name}`).digest('hex'),
+    JWT_SECRET:
+      LOCAL_JWT_SECRET_PREFIX + createHash('sha256').update(`kerfmark-local:${repoRoot}:${p.name}`).digest('hex'),
     WEB_DIST: path.join(repoRoot, 'apps/web/dist'),
     DATA_DIR: p.dataDir,
   };

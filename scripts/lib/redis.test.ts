@@ -23,7 +23,9 @@ describe('the checkout’s Redis', () => {
     const { port } = foreign.address() as net.AddressInfo;
     try {
       const server = redisServer({ port, dir: path.join(scratch, 'foreign') });
-      await expect(server.start('KERFMARK_TEST_REDIS_PORT')).rejects.toThrow(`Port ${port} for Redis is already in use. Stop whatever holds it (another Kerfmark?) or set KERFMARK_TEST_REDIS_PORT.`);
+      await expect(server.start('KERFMARK_TEST_REDIS_PORT')).rejects.toThrow(
+        `Port ${port} for Redis is already in use. Stop whatever holds it (another Kerfmark?) or set KERFMARK_TEST_REDIS_PORT.`,
+      );
     } finally {
       foreign.close();
     }

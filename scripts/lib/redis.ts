@@ -45,14 +45,22 @@ export function redisServer(opts: { port: number; dir: string }): RedisServer {
       if (pidAlive(pidFile)) return;
       await assertPortFree(opts.port, 'Redis', variable);
       run(REDIS, [
-        '--port', String(opts.port),
-        '--bind', '127.0.0.1',
-        '--save', '',
-        '--appendonly', 'no',
-        '--daemonize', 'yes',
-        '--pidfile', pidFile,
-        '--dir', opts.dir,
-        '--logfile', path.join(opts.dir, 'redis.log'),
+        '--port',
+        String(opts.port),
+        '--bind',
+        '127.0.0.1',
+        '--save',
+        '',
+        '--appendonly',
+        'no',
+        '--daemonize',
+        'yes',
+        '--pidfile',
+        pidFile,
+        '--dir',
+        opts.dir,
+        '--logfile',
+        path.join(opts.dir, 'redis.log'),
       ]);
       // The daemon writes its pid file a moment after the fork: until then it is not known as ours.
       for (let waited = 0; !pidAlive(pidFile); waited += 50) {

@@ -23,7 +23,11 @@ function redisAnswers(port: number): Promise<boolean> {
  * Brings up a whole local Kerfmark for one profile: PostgreSQL, Redis, the S3 fake, the mail
  * catcher, migrations and demo data, the web build, the API and the worker.
  */
-export async function bringUp(p: Profile, supervisor: Supervisor, opts: { fresh: boolean; productionSweeps?: boolean }): Promise<Record<string, string>> {
+export async function bringUp(
+  p: Profile,
+  supervisor: Supervisor,
+  opts: { fresh: boolean; productionSweeps?: boolean },
+): Promise<Record<string, string>> {
   const env = serviceEnv(p);
   // Every port before anything starts; PostgreSQL's and Redis's are checked unless this checkout's own server runs there.
   await assertPortFree(p.ports.app, 'the app', portVariable(p, 'app'));
@@ -51,11 +55,15 @@ export async function bringUp(p: Profile, supervisor: Supervisor, opts: { fresh:
   if (applied.length) console.log(`  applied ${applied.length} migration(s)`);
 
   step('web app build');
-  execFileSync(path.join(repoRoot, 'node_modules/.bin/turbo'), ['run', 'build', '--filter=@kerfmark/web', '--output-logs=errors-only'], {
-    cwd: repoRoot,
-    stdio: 'inherit',
-    env: { ...process.env, TURBO_TELEMETRY_DISABLED: '1', DO_NOT_TRACK: '1' },
-  });
+  execFileSync(
+    path.join(repoRoot, 'node_modules/.bin/turbo'),
+    ['run', 'build', '--filter=@kerfmark/web', '--output-logs=errors-only'],
+    {
+      cwd: repoRoot,
+      stdio: 'inherit',
+      env: { ...process.env, TURBO_TELEMETRY_DISABLED: '1', DO_NOT_TRACK: '1' },
+    },
+  );
 
   await waitFor('the mail catcher', () => httpOk(`${env.MAIL_CATCHER_URL}/api/messages`));
 
@@ -64,7 +72,12 @@ export async function bringUp(p: Profile, supervisor: Supervisor, opts: { fresh:
   // Tests sweep every few seconds so that they need not wait; the benchmark keeps production's pace.
   const fast = p.name === 'test' && !opts.productionSweeps;
   const sweepMs = fast ? '2000' : '30000';
-  supervisor.start('worker', 'apps/worker/src/index.ts', { ...env, OUTBOX_SWEEP_MS: sweepMs, ANALYSIS_SWEEP_MS: sweepMs, REMINDER_SWEEP_MS: fast ? '3000' : '300000' });
+  supervisor.start('worker', 'apps/worker/src/index.ts', {
+    ...env,
+    OUTBOX_SWEEP_MS: sweepMs,
+    ANALYSIS_SWEEP_MS: sweepMs,
+    REMINDER_SWEEP_MS: fast ? '3000' : '300000',
+  });
   await waitFor('the API', () => httpOk(`${env.APP_URL}/api/health`), 60_000);
   return env;
 }

@@ -36,7 +36,11 @@ export class Supervisor {
   }
 
   spawn(name: string, cmd: string, args: string[], env: Record<string, string>): ChildProcess {
-    const child = spawn(cmd, args, { cwd: repoRoot, env: { ...process.env, ...env }, stdio: ['ignore', 'pipe', 'pipe'] });
+    const child = spawn(cmd, args, {
+      cwd: repoRoot,
+      env: { ...process.env, ...env },
+      stdio: ['ignore', 'pipe', 'pipe'],
+    });
     mkdirSync(this.logDir, { recursive: true });
     const log = createWriteStream(path.join(this.logDir, `${name}.log`), { flags: 'a' });
     for (const stream of [child.stdout, child.stderr]) {
@@ -47,7 +51,9 @@ export class Supervisor {
     }
     child.on('exit', (code, signal) => {
       if (this.stopping) return;
-      console.error(`\n${name} stopped unexpectedly (${signal ?? `exit ${code}`}); see ${path.join(this.logDir, `${name}.log`)}`);
+      console.error(
+        `\n${name} stopped unexpectedly (${signal ?? `exit ${code}`}); see ${path.join(this.logDir, `${name}.log`)}`,
+      );
       void this.stopAll(1);
     });
     this.children.push({ name, child });

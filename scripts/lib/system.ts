@@ -21,14 +21,21 @@ export function ensureDebianPackage(present: string | (() => boolean), pkg: stri
   const env = { ...process.env, DEBIAN_FRONTEND: 'noninteractive' };
   const lock = ['-o', `DPkg::Lock::Timeout=${APT_LOCK_WAIT_S}`];
   if (!aptUpdated) {
-    console.log(`· reading Debian's package lists (apt-get update; waits up to ${APT_LOCK_WAIT_S / 60} min if another install holds the lock)`);
+    console.log(
+      `· reading Debian's package lists (apt-get update; waits up to ${APT_LOCK_WAIT_S / 60} min if another install holds the lock)`,
+    );
     execFileSync('apt-get', [...lock, 'update', '-q'], { stdio: 'inherit', env });
     aptUpdated = true;
   }
   // Not quiet: apt's own lines (downloads, unpacking, setting up) are the progress of a long install.
-  console.log(`· installing ${pkg} for ${why.charAt(0).toLowerCase()}${why.slice(1)} (apt-get install ${pkg}; waits for the package lock if needed)`);
+  console.log(
+    `· installing ${pkg} for ${why.charAt(0).toLowerCase()}${why.slice(1)} (apt-get install ${pkg}; waits for the package lock if needed)`,
+  );
   execFileSync('apt-get', [...lock, 'install', '-y', pkg], { stdio: 'inherit', env });
-  if (!installed()) throw new Error(`apt-get installed ${pkg} but ${typeof present === 'string' ? present : 'its program'} is still missing`);
+  if (!installed())
+    throw new Error(
+      `apt-get installed ${pkg} but ${typeof present === 'string' ? present : 'its program'} is still missing`,
+    );
   console.log(`· ${pkg} installed`);
 }
 

@@ -17,9 +17,12 @@ export async function pickDate(p: Page, testId: string, date: Date, withTime: bo
   if (withTime) await panel.locator('.ant-picker-ok button').click();
 }
 
-
 /** A print buyer, signed in, posts a request through the four steps with the 8 × 5 in sleeve DXF. */
-export async function postRequest(p: Page, title: string, opts: { svg?: boolean; screenshots?: (name: string) => Promise<void> } = {}): Promise<number> {
+export async function postRequest(
+  p: Page,
+  title: string,
+  opts: { svg?: boolean; screenshots?: (name: string) => Promise<void> } = {},
+): Promise<number> {
   await p.goto(`${baseUrl}/requests/new`);
   await p.locator('[data-test=req-title]').fill(title);
   await p.locator('[data-test=req-job]').fill('LPC-E2E');
@@ -39,7 +42,11 @@ export async function postRequest(p: Page, title: string, opts: { svg?: boolean;
   await expect.poll(() => p.locator('[data-test=file-list]').innerText(), { timeout: 20_000 }).toContain('measured');
   if (opts.svg) {
     await input.setInputFiles(path.join(fixtures, 'tag-100x50mm.svg'));
-    await expect.poll(async () => (await p.locator('[data-test=file-list]').innerText()).match(/measured/g)?.length ?? 0, { timeout: 20_000 }).toBe(2);
+    await expect
+      .poll(async () => (await p.locator('[data-test=file-list]').innerText()).match(/measured/g)?.length ?? 0, {
+        timeout: 20_000,
+      })
+      .toBe(2);
     await p.locator('[data-test=file-list] >> text=sleeve-8x5.dxf').click();
   }
   await expect.poll(() => p.locator('[data-test=metrics]').innerText()).toContain('26.79 in');

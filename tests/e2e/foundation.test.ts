@@ -103,8 +103,14 @@ describe('sign-in and roles in the browser', () => {
     const invitee = await freshPage({ width: 820, height: 1000 });
     await invitee.goto(link);
     await expect.poll(() => invitee.locator('h2').textContent()).toContain('Brightline Rule & Die');
-    await invitee.locator('[data-test=new-password] input, input[data-test=new-password]').first().fill('noor chooses a password');
-    await invitee.locator('[data-test=confirm-password] input, input[data-test=confirm-password]').first().fill('noor chooses a password');
+    await invitee
+      .locator('[data-test=new-password] input, input[data-test=new-password]')
+      .first()
+      .fill('noor chooses a password');
+    await invitee
+      .locator('[data-test=confirm-password] input, input[data-test=confirm-password]')
+      .first()
+      .fill('noor chooses a password');
     await screenshot(invitee, '07-accept-invitation-tablet');
     await invitee.locator('[data-test=accept]').click();
     await invitee.waitForURL(`${baseUrl}/`);

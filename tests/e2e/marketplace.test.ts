@@ -32,8 +32,16 @@ async function bid(p: Page, amounts: string[], leadDays: number) {
 /** The PDF's first page as text, read back with pdfjs-dist (a general-purpose PDF library). */
 async function pdfText(path: string): Promise<string> {
   const { getDocument } = await import('pdfjs-dist/legacy/build/pdf.mjs');
-  const standardFontDataUrl = join(dirname(createRequire(import.meta.url).resolve('pdfjs-dist/package.json')), 'standard_fonts/');
-  const doc = await getDocument({ data: new Uint8Array(await readFile(path)), useSystemFonts: false, disableFontFace: true, standardFontDataUrl }).promise;
+  const standardFontDataUrl = join(
+    dirname(createRequire(import.meta.url).resolve('pdfjs-dist/package.json')),
+    'standard_fonts/',
+  );
+  const doc = await getDocument({
+    data: new Uint8Array(await readFile(path)),
+    useSystemFonts: false,
+    disableFontFace: true,
+    standardFontDataUrl,
+  }).promise;
   const page = await doc.getPage(1);
   const content = await page.getTextContent();
   return content.items.map((item) => ('str' in item ? item.str : '')).join(' ');
@@ -68,28 +76,49 @@ describe('the marketplace loop in the browser', () => {
     expect(await daniel.locator('body').innerText()).not.toContain('1,005');
     await daniel.locator('[data-test=close-bidding]').click();
     await daniel.locator('.ant-popconfirm .ant-btn-primary, .ant-popover .ant-btn-primary').last().click();
-    await expect.poll(() => daniel.locator('[data-test=comparison-table]').innerText()).toContain('Brightline Rule & Die');
+    await expect
+      .poll(() => daniel.locator('[data-test=comparison-table]').innerText())
+      .toContain('Brightline Rule & Die');
     const table = await daniel.locator('[data-test=comparison-table]').innerText();
     expect(table).toContain('$975.00');
     expect(table).toContain('+$30.00');
     await screenshot(daniel, '21-bid-comparison');
 
     // Award the dearer bid: a reason is required.
-    await daniel.locator('[data-test=comparison-table] tr', { hasText: 'Brightline' }).locator('button', { hasText: 'Award' }).click();
+    await daniel
+      .locator('[data-test=comparison-table] tr', { hasText: 'Brightline' })
+      .locator('button', { hasText: 'Award' })
+      .click();
     await daniel.locator('.ant-modal .ant-btn-primary').click();
     await expect.poll(() => daniel.locator('[data-test=award-error]').innerText()).toContain('write why');
     await daniel.locator('[data-test=award-reason]').fill('Ships five working days sooner; our need-by date is tight.');
     await screenshot(daniel, '22-award-reason');
     await daniel.locator('.ant-modal .ant-btn-primary').click();
-    await expect.poll(() => daniel.locator('[data-test=award-panel]').innerText()).toContain('Awarded to Brightline Rule & Die');
+    await expect
+      .poll(() => daniel.locator('[data-test=award-panel]').innerText())
+      .toContain('Awarded to Brightline Rule & Die');
 
     // Everybody is told; the PDF carries the awarded total.
     // E-mails go through the outbox and the worker: wait for them to reach the catcher.
     const subjects = async (to: string) =>
-      ((await (await fetch(`${process.env.MAIL_CATCHER_URL}/api/messages?to=${to}`)).json()) as Array<{ subject: string }>).map((m) => m.subject);
-    await expect.poll(() => subjects('grace@brightline.example'), { timeout: 20_000 }).toContain(`Awarded to you: ${title} (${await daniel.locator('[data-test=award-panel]').innerText().then((t) => /PO-\d{4}-\d{5}/.exec(t)![0])})`);
+      (
+        (await (await fetch(`${process.env.MAIL_CATCHER_URL}/api/messages?to=${to}`)).json()) as Array<{
+          subject: string;
+        }>
+      ).map((m) => m.subject);
+    await expect
+      .poll(() => subjects('grace@brightline.example'), { timeout: 20_000 })
+      .toContain(
+        `Awarded to you: ${title} (${await daniel
+          .locator('[data-test=award-panel]')
+          .innerText()
+          .then((t) => /PO-\d{4}-\d{5}/.exec(t)![0])})`,
+      );
     await expect.poll(() => subjects('chidi@okafor.example'), { timeout: 20_000 }).toContain(`Not awarded: ${title}`);
-    const [download] = await Promise.all([daniel.waitForEvent('download'), daniel.locator('[data-test=po-pdf]').click()]);
+    const [download] = await Promise.all([
+      daniel.waitForEvent('download'),
+      daniel.locator('[data-test=po-pdf]').click(),
+    ]);
     const text = await pdfText(await download.path());
     expect(text).toContain('$1,005.00');
     expect(text).toContain('Brightline Rule & Die');

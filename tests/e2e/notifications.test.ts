@@ -31,7 +31,14 @@ describe('deadlines and notifications in the browser', () => {
     await row.locator('button[role=switch]').click();
     await expect.poll(() => row.locator('button[role=switch]').getAttribute('aria-checked')).toBe('false');
     await p.reload();
-    await expect.poll(() => p.locator('[data-test=preferences] .pref', { hasText: 'Bids due in 24 hours' }).locator('button[role=switch]').getAttribute('aria-checked')).toBe('false');
+    await expect
+      .poll(() =>
+        p
+          .locator('[data-test=preferences] .pref', { hasText: 'Bids due in 24 hours' })
+          .locator('button[role=switch]')
+          .getAttribute('aria-checked'),
+      )
+      .toBe('false');
     await screenshot(p, '31-notifications');
   });
 });

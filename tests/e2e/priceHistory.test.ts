@@ -26,7 +26,10 @@ describe('price history in the browser', () => {
     await screenshot(p, '40-price-history');
 
     const csv = path.join(os.tmpdir(), `kerfmark-prices-${Date.now()}.csv`);
-    writeFileSync(csv, 'Date,Supplier,Die price,Rule length (in)\n2025-06-02,Harbour Dies,655.00,88.5\n2025-07-14,Harbour Dies,1210.00,190\n');
+    writeFileSync(
+      csv,
+      'Date,Supplier,Die price,Rule length (in)\n2025-06-02,Harbour Dies,655.00,88.5\n2025-07-14,Harbour Dies,1210.00,190\n',
+    );
     await p.locator('[data-test=import]').click();
     await p.locator('[data-test=import-drop] input[type=file]').setInputFiles(csv);
     await expect.poll(() => p.locator('[data-test=import-go]').innerText()).toContain('Import 2 rows');

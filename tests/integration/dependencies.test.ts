@@ -17,17 +17,28 @@ interface Manifest {
 }
 
 /** Workspaces whose non-test code runs in production: there, imports must be `dependencies`. */
-const RUNS_IN_PRODUCTION = new Set(['apps/api', 'apps/worker', 'packages/contracts', 'packages/dieline', 'packages/notices', 'packages/pricing', 'packages/stock', 'packages/storage']);
+const RUNS_IN_PRODUCTION = new Set([
+  'apps/api',
+  'apps/worker',
+  'packages/contracts',
+  'packages/dieline',
+  'packages/notices',
+  'packages/pricing',
+  'packages/stock',
+  'packages/storage',
+]);
 const SKIP_DIRS = new Set(['node_modules', 'dist', '.data', '.turbo', 'coverage', 'fixtures', 'bench-data']);
 const SOURCE = /\.(ts|mts|js|mjs|vue)$/;
 
 function workspaces(): string[] {
   const top = JSON.parse(readFileSync(path.join(root, 'package.json'), 'utf8')) as { workspaces: string[] };
-  return top.workspaces.flatMap((pattern) =>
-    pattern.endsWith('/*')
-      ? readdirSync(path.join(root, pattern.slice(0, -2))).map((name) => `${pattern.slice(0, -2)}/${name}`)
-      : [pattern],
-  ).filter((dir) => statSync(path.join(root, dir, 'package.json'), { throwIfNoEntry: false }));
+  return top.workspaces
+    .flatMap((pattern) =>
+      pattern.endsWith('/*')
+        ? readdirSync(path.join(root, pattern.slice(0, -2))).map((name) => `${pattern.slice(0, -2)}/${name}`)
+        : [pattern],
+    )
+    .filter((dir) => statSync(path.join(root, dir, 'package.json'), { throwIfNoEntry: false }));
 }
 
 function sourceFiles(dir: string, nested: string[]): string[] {
@@ -41,24 +52,30 @@ function sourceFiles(dir: string, nested: string[]): string[] {
 /** The package names a file imports: `import … from 'x'`, `import 'x'`, `import('x')`, `export … from 'x'`. */
 export function importedPackages(text: string): string[] {
   const names = new Set<string>();
-  const pattern = /^\s*(?:import|export)\b[^'"`;]*?from\s*['"]([^'"]+)['"]|^\s*import\s*['"]([^'"]+)['"]|\bimport\(\s*['"]([^'"]+)['"]\s*\)/gm;
+  const pattern =
+    /^\s*(?:import|export)\b[^'"`;]*?from\s*['"]([^'"]+)['"]|^\s*import\s*['"]([^'"]+)['"]|\bimport\(\s*['"]([^'"]+)['"]\s*\)/gm;
   for (const match of text.matchAll(pattern)) {
     const spec = match[1] ?? match[2] ?? match[3]!;
-    if (spec.startsWith('.') || spec.startsWith('/') || spec.startsWith('node:') || spec.startsWith('virtual:')) continue;
+    if (spec.startsWith('.') || spec.startsWith('/') || spec.startsWith('node:') || spec.startsWith('virtual:'))
+      continue;
     const name = spec.startsWith('@') ? spec.split('/').slice(0, 2).join('/') : spec.split('/')[0]!;
     if (!builtinModules.includes(name)) names.add(name);
   }
   return [...names];
 }
 
-const isTestCode = (file: string) => /\.test\.ts$|[/\\]testing[/\\]|[/\\]test[/\\]|[/\\]bench[/\\]|vitest\.config|vite\.config|eslint\.config/.test(file);
+const isTestCode = (file: string) =>
+  /\.test\.ts$|[/\\]testing[/\\]|[/\\]test[/\\]|[/\\]bench[/\\]|vitest\.config|vite\.config|eslint\.config/.test(file);
 
 describe('dependencies', () => {
   const dirs = ['.', ...workspaces()];
-  const manifests = new Map(dirs.map((dir) => [dir, JSON.parse(readFileSync(path.join(root, dir, 'package.json'), 'utf8')) as Manifest]));
+  const manifests = new Map(
+    dirs.map((dir) => [dir, JSON.parse(readFileSync(path.join(root, dir, 'package.json'), 'utf8')) as Manifest]),
+  );
 
   it('reads import forms the scan must see (arithmetic on a sample)', () => {
-    const sample = "import a from 'alpha';\nimport { b } from '@scope/beta/sub';\nimport 'gamma';\nexport { d } from 'delta';\nconst e = await import('epsilon');\nimport x from './local';\nimport fs from 'node:fs';\nimport path from 'path';";
+    const sample =
+      "import a from 'alpha';\nimport { b } from '@scope/beta/sub';\nimport 'gamma';\nexport { d } from 'delta';\nconst e = await import('epsilon');\nimport x from './local';\nimport fs from 'node:fs';\nimport path from 'path';";
     expect(importedPackages(sample).sort()).toEqual(['@scope/beta', 'alpha', 'delta', 'epsilon', 'gamma']);
   });
 
@@ -75,7 +92,8 @@ describe('dependencies', () => {
           const inDeps = name in (manifest.dependencies ?? {});
           const inDev = name in (manifest.devDependencies ?? {});
           if (!inDeps && !inDev) problems.push(`${rel} imports ${name}, which ${dir}/package.json does not declare`);
-          else if (!inDeps && RUNS_IN_PRODUCTION.has(dir) && !isTestCode(rel)) problems.push(`${rel} runs in production but ${name} is only a dev dependency of ${dir}`);
+          else if (!inDeps && RUNS_IN_PRODUCTION.has(dir) && !isTestCode(rel))
+            problems.push(`${rel} runs in production but ${name} is only a dev dependency of ${dir}`);
         }
       }
     }
@@ -94,9 +112,21 @@ describe('dependencies', () => {
   it('keeps the local fakes and the browser driver out of a production install', () => {
     // package-lock.json marks every package that only dev dependencies reach with "dev": true;
     // `npm ci --omit=dev` installs exactly the others.
-    const lock = JSON.parse(readFileSync(path.join(root, 'package-lock.json'), 'utf8')) as { packages: Record<string, { dev?: boolean }> };
-    const production = Object.entries(lock.packages).filter(([key, entry]) => key.includes('node_modules/') && !entry.dev).map(([key]) => key.split('node_modules/').pop()!);
-    for (const devOnly of ['s3rver', 'smtp-server', 'mailparser', 'playwright-core', 'vitest', 'supertest', 'ioredis-mock']) {
+    const lock = JSON.parse(readFileSync(path.join(root, 'package-lock.json'), 'utf8')) as {
+      packages: Record<string, { dev?: boolean }>;
+    };
+    const production = Object.entries(lock.packages)
+      .filter(([key, entry]) => key.includes('node_modules/') && !entry.dev)
+      .map(([key]) => key.split('node_modules/').pop()!);
+    for (const devOnly of [
+      's3rver',
+      'smtp-server',
+      'mailparser',
+      'playwright-core',
+      'vitest',
+      'supertest',
+      'ioredis-mock',
+    ]) {
       expect(production, devOnly).not.toContain(devOnly);
     }
     for (const runs of ['express', 'knex', 'bullmq', 'tsx', 'pdfkit']) expect(production, runs).toContain(runs);

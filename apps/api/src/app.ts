@@ -45,7 +45,8 @@ export function createApp(deps: AppDeps): Express {
       strictTransportSecurity: config.appUrl.startsWith('https:'),
     }),
   );
-  if (process.env.NODE_ENV !== 'test') app.use(
+  if (process.env.NODE_ENV !== 'test')
+    app.use(
       pinoHttp({
         logger,
         genReqId: (req) => req.id,

@@ -22,13 +22,39 @@ function problem(env: Record<string, string | undefined>): string {
 describe('the API configuration', () => {
   it('takes the defaults of a local run', () => {
     const config = loadConfig(base);
-    expect(config).toMatchObject({ production: false, host: '127.0.0.1', port: 4100, appUrl: 'http://127.0.0.1:4100', shutdownGraceMs: 10_000, trustProxy: 'loopback' });
-    expect(config.storage).toEqual({ bucket: 'kerfmark-files', region: 'us-east-1', endpoint: undefined, accessKeyId: undefined, secretAccessKey: undefined });
+    expect(config).toMatchObject({
+      production: false,
+      host: '127.0.0.1',
+      port: 4100,
+      appUrl: 'http://127.0.0.1:4100',
+      shutdownGraceMs: 10_000,
+      trustProxy: 'loopback',
+    });
+    expect(config.storage).toEqual({
+      bucket: 'kerfmark-files',
+      region: 'us-east-1',
+      endpoint: undefined,
+      accessKeyId: undefined,
+      secretAccessKey: undefined,
+    });
   });
 
   it('reads HOST, PORT and the numbers as given', () => {
-    const config = loadConfig({ ...base, HOST: '0.0.0.0', PORT: '8080', SHUTDOWN_GRACE_MS: '2500', MAX_UPLOAD_BYTES: '1048576', S3_ENDPOINT: 'http://s3.local:9000' });
-    expect(config).toMatchObject({ host: '0.0.0.0', port: 8080, appUrl: 'http://127.0.0.1:8080', shutdownGraceMs: 2500, maxUploadBytes: 1_048_576 });
+    const config = loadConfig({
+      ...base,
+      HOST: '0.0.0.0',
+      PORT: '8080',
+      SHUTDOWN_GRACE_MS: '2500',
+      MAX_UPLOAD_BYTES: '1048576',
+      S3_ENDPOINT: 'http://s3.local:9000',
+    });
+    expect(config).toMatchObject({
+      host: '0.0.0.0',
+      port: 8080,
+      appUrl: 'http://127.0.0.1:8080',
+      shutdownGraceMs: 2500,
+      maxUploadBytes: 1_048_576,
+    });
     expect(config.storage.endpoint).toBe('http://s3.local:9000');
   });
 
@@ -46,7 +72,13 @@ describe('the API configuration', () => {
   });
 
   it('names every malformed variable and what is wrong, never its value', () => {
-    const message = problem({ ...base, PORT: '80a', REDIS_URL: 'http://:hunter2@cache:6379', DATABASE_URL: 'mysql://db', BCRYPT_ROUNDS: '40' });
+    const message = problem({
+      ...base,
+      PORT: '80a',
+      REDIS_URL: 'http://:hunter2@cache:6379',
+      DATABASE_URL: 'mysql://db',
+      BCRYPT_ROUNDS: '40',
+    });
     expect(message).not.toContain('\n');
     expect(message).toContain('PORT must be a whole number');
     expect(message).toContain('REDIS_URL must start with redis:// or rediss://');
@@ -63,7 +95,9 @@ describe('the API configuration', () => {
     expect(problem({ ...production, JWT_SECRET: `${LOCAL_JWT_SECRET_PREFIX}${'a'.repeat(64)}` })).toBe(
       'Configuration: JWT_SECRET is the local development secret; set a random one in production',
     );
-    expect(problem({ ...production, JWT_SECRET: 'k'.repeat(31) })).toBe('Configuration: JWT_SECRET must be at least 32 characters in production');
+    expect(problem({ ...production, JWT_SECRET: 'k'.repeat(31) })).toBe(
+      'Configuration: JWT_SECRET must be at least 32 characters in production',
+    );
     expect(problem({ ...production, APP_URL: undefined })).toMatch(/^Configuration: APP_URL is not set/);
     expect(problem({ ...production, NODE_ENV: 'prod' })).toMatch(/NODE_ENV must be development, test or production/);
   });

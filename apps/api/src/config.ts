@@ -1,5 +1,14 @@
 import { z } from 'zod';
-import { envInt, envLogLevel, envNodeEnv, envRedisUrl, envStorage, envUrl, readEnv, storageSettings } from '@kerfmark/contracts';
+import {
+  envInt,
+  envLogLevel,
+  envNodeEnv,
+  envRedisUrl,
+  envStorage,
+  envUrl,
+  readEnv,
+  storageSettings,
+} from '@kerfmark/contracts';
 import type { StorageConfig } from '@kerfmark/storage';
 
 /**
@@ -31,7 +40,9 @@ const schema = z
     TRUST_PROXY: z
       .string()
       .default('loopback')
-      .transform((value) => (/^\d+$/.test(value) ? Number(value) : value === 'true' ? true : value === 'false' ? false : value)),
+      .transform((value) =>
+        /^\d+$/.test(value) ? Number(value) : value === 'true' ? true : value === 'false' ? false : value,
+      ),
     SHUTDOWN_GRACE_MS: envInt(10_000, 0),
     LOG_LEVEL: envLogLevel,
     ...envStorage,
@@ -39,12 +50,25 @@ const schema = z
   .superRefine((env, ctx) => {
     if (env.NODE_ENV !== 'production') return;
     if (env.JWT_SECRET.startsWith(LOCAL_JWT_SECRET_PREFIX)) {
-      ctx.addIssue({ code: 'custom', path: ['JWT_SECRET'], message: 'is the local development secret; set a random one in production' });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['JWT_SECRET'],
+        message: 'is the local development secret; set a random one in production',
+      });
     } else if (env.JWT_SECRET.length < MIN_PRODUCTION_SECRET) {
-      ctx.addIssue({ code: 'custom', path: ['JWT_SECRET'], message: `must be at least ${MIN_PRODUCTION_SECRET} characters in production` });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['JWT_SECRET'],
+        message: `must be at least ${MIN_PRODUCTION_SECRET} characters in production`,
+      });
     }
     // Links in e-mails and HSTS follow it: the local default would send users to 127.0.0.1.
-    if (!env.APP_URL) ctx.addIssue({ code: 'custom', path: ['APP_URL'], message: 'is not set (required in production: the public address of the app)' });
+    if (!env.APP_URL)
+      ctx.addIssue({
+        code: 'custom',
+        path: ['APP_URL'],
+        message: 'is not set (required in production: the public address of the app)',
+      });
   });
 
 /** Everything the API reads from its environment, read once at start-up. */

@@ -24,7 +24,16 @@ redis.on('error', (error) => logger.warn({ err: error.message }, 'redis unavaila
 const queues = createJobQueues(config.redisUrl, logger);
 const storage = createStorage(config.storage);
 
-const app = createApp({ config, knex, redis, logger, emails: queues.emails, analyses: queues.analyses, reminders: queues.reminders, storage });
+const app = createApp({
+  config,
+  knex,
+  redis,
+  logger,
+  emails: queues.emails,
+  analyses: queues.analyses,
+  reminders: queues.reminders,
+  storage,
+});
 const server = app.listen(config.port, config.host, () => {
   logger.info({ host: config.host, port: config.port }, `API listening on ${config.appUrl}`);
 });
@@ -36,7 +45,10 @@ server.on('error', (error) => {
 
 /** Answers what is in flight (up to SHUTDOWN_GRACE_MS), then closes the database, Redis and the queues. */
 async function shutdown(signal: string) {
-  logger.info({ signal, graceMs: config.shutdownGraceMs }, 'shutting down: no new connections, finishing requests in flight');
+  logger.info(
+    { signal, graceMs: config.shutdownGraceMs },
+    'shutting down: no new connections, finishing requests in flight',
+  );
   await closeServer(config.shutdownGraceMs);
   await Promise.allSettled([queues.close(), knex.destroy(), redis.quit()]);
   logger.info('shut down');

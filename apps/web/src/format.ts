@@ -3,7 +3,9 @@ import { inchesToMm } from '@kerfmark/dieline';
 
 /** Small display helpers shared by the views. Lengths arrive in inches. */
 export const inches = (value: number | null | undefined, digits = 2) =>
-  value === null || value === undefined ? '—' : `${value.toLocaleString('en-US', { maximumFractionDigits: digits, minimumFractionDigits: digits })} in`;
+  value === null || value === undefined
+    ? '—'
+    : `${value.toLocaleString('en-US', { maximumFractionDigits: digits, minimumFractionDigits: digits })} in`;
 
 export const millimetres = (inchValue: number | null | undefined, digits = 0) =>
   inchValue === null || inchValue === undefined
@@ -16,7 +18,8 @@ export const size = (w: number | null | undefined, h: number | null | undefined)
 /** A calendar date (YYYY-MM-DD) for people: "Fri, Dec 18, 2026". */
 export const calendarDate = (date: string | null | undefined) => (date ? formatCalendarDate(date) : '—');
 
-export const instant = (iso: string | null | undefined, timeZone: string) => (iso ? formatInZone(new Date(iso), timeZone) : '—');
+export const instant = (iso: string | null | undefined, timeZone: string) =>
+  iso ? formatInZone(new Date(iso), timeZone) : '—';
 
 export const statusColor: Record<RequestStatus, string> = {
   draft: 'default',

@@ -1,5 +1,14 @@
 import { z } from 'zod';
-import { envInt, envLogLevel, envNodeEnv, envRedisUrl, envStorage, envUrl, readEnv, storageSettings } from '@kerfmark/contracts';
+import {
+  envInt,
+  envLogLevel,
+  envNodeEnv,
+  envRedisUrl,
+  envStorage,
+  envUrl,
+  readEnv,
+  storageSettings,
+} from '@kerfmark/contracts';
 
 const schema = z
   .object({
@@ -20,7 +29,12 @@ const schema = z
   .superRefine((env, ctx) => {
     if (env.NODE_ENV !== 'production') return;
     // The links in every e-mail and reminder point there.
-    if (!env.APP_URL) ctx.addIssue({ code: 'custom', path: ['APP_URL'], message: 'is not set (required in production: the public address of the app)' });
+    if (!env.APP_URL)
+      ctx.addIssue({
+        code: 'custom',
+        path: ['APP_URL'],
+        message: 'is not set (required in production: the public address of the app)',
+      });
   });
 
 /** Everything the worker reads from its environment, read once at start-up; throws a ConfigError of one line. */

@@ -83,7 +83,9 @@ const dielineWorker = new Worker<AnalyseDielineJob>(
 /** Hands committed outbox rows to the e-mail worker; the outbox sweep covers a failed add. */
 function dispatchEmails(outboxIds: number[]) {
   for (const outboxId of outboxIds) {
-    emailQueue.add(jobNames.deliverEmail, { outboxId }, { jobId: deliverEmailJobId(outboxId), removeOnComplete: 1000 }).catch(() => undefined);
+    emailQueue
+      .add(jobNames.deliverEmail, { outboxId }, { jobId: deliverEmailJobId(outboxId), removeOnComplete: 1000 })
+      .catch(() => undefined);
   }
 }
 
@@ -95,7 +97,12 @@ const reminderWorker = new Worker<SendReminderJob | PlanRemindersJob>(
     if (job.name === jobNames.planReminders) return planRequestReminders(knex, reminderQueue, job.data.requestId);
     if (job.name === jobNames.sendReminder) {
       const { key, requestId } = job.data as SendReminderJob;
-      const { result, outboxIds } = await sendReminder(knex, { appUrl: config.appUrl, now: new Date() }, requestId, key);
+      const { result, outboxIds } = await sendReminder(
+        knex,
+        { appUrl: config.appUrl, now: new Date() },
+        requestId,
+        key,
+      );
       dispatchEmails(outboxIds);
       logger.info({ key, result }, 'reminder');
       return result;
@@ -112,11 +119,16 @@ const stopKeepingSchedules = await keepJobSchedulers(
     { queue: dielineQueue, id: 'dieline-analysis-sweep', name: jobNames.sweepAnalyses, every: config.analysisSweepMs },
     { queue: reminderQueue, id: 'reminder-sweep', name: jobNames.sweepReminders, every: config.reminderSweepMs },
   ],
-  { checkMs: config.scheduleCheckMs, onRestored: (id) => logger.warn({ sweep: id }, 'sweep schedule was lost with Redis: scheduled again') },
+  {
+    checkMs: config.scheduleCheckMs,
+    onRestored: (id) => logger.warn({ sweep: id }, 'sweep schedule was lost with Redis: scheduled again'),
+  },
 );
 
 for (const worker of [emailWorker, dielineWorker, reminderWorker]) {
-  worker.on('failed', (job, error) => logger.warn({ queue: worker.name, job: job?.id, err: error.message }, 'job failed'));
+  worker.on('failed', (job, error) =>
+    logger.warn({ queue: worker.name, job: job?.id, err: error.message }, 'job failed'),
+  );
   worker.on('error', (error) => logger.warn({ queue: worker.name, err: error.message }, 'worker error'));
 }
 logger.info('worker running: e-mail delivery, dieline analysis, deadline reminders and their sweeps');

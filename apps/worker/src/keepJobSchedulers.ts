@@ -15,7 +15,10 @@ export interface Sweep {
  * would run until the worker restarted, so the reminders, e-mails and analyses lost with Redis
  * would never catch up. A restored sweep runs at once. Returns a function that stops checking.
  */
-export async function keepJobSchedulers(sweeps: Sweep[], opts: { checkMs: number; onRestored?: (id: string) => void }): Promise<() => void> {
+export async function keepJobSchedulers(
+  sweeps: Sweep[],
+  opts: { checkMs: number; onRestored?: (id: string) => void },
+): Promise<() => void> {
   const schedule = (s: Sweep) => s.queue.upsertJobScheduler(s.id, { every: s.every }, { name: s.name });
   for (const sweep of sweeps) await schedule(sweep);
 
@@ -32,7 +35,13 @@ export async function keepJobSchedulers(sweeps: Sweep[], opts: { checkMs: number
   const next = () => {
     if (stopped) return;
     // One check at a time: while Redis is down a check waits for it, and the next starts after.
-    timer = setTimeout(() => void check().catch(() => undefined).finally(next), opts.checkMs);
+    timer = setTimeout(
+      () =>
+        void check()
+          .catch(() => undefined)
+          .finally(next),
+      opts.checkMs,
+    );
   };
   next();
   return () => {

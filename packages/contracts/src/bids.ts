@@ -35,7 +35,11 @@ export const BidInput = z.object({
     .max(20, 'At most 20 price lines')
     .refine((lines) => lines.some((l) => l.kind === 'die'), { error: 'Include the price of the die itself' }),
   currency: Currency,
-  leadDays: z.number({ error: 'Enter the lead time' }).int('Whole working days').min(1, 'At least 1 working day').max(120, 'At most 120 working days'),
+  leadDays: z
+    .number({ error: 'Enter the lead time' })
+    .int('Whole working days')
+    .min(1, 'At least 1 working day')
+    .max(120, 'At most 120 working days'),
   validUntil: calendarDate('Enter the date the price holds until'),
   notes: z.string().trim().max(4000, 'At most 4,000 characters').nullable().optional(),
 });
@@ -49,7 +53,11 @@ export const AwardInput = z.object({
   reason: z.string().trim().max(2000).optional(),
 });
 export const ShipInput = z.object({
-  trackingNote: z.string({ error: 'Add the carrier and tracking number' }).trim().min(2, 'Add the carrier and tracking number').max(500),
+  trackingNote: z
+    .string({ error: 'Add the carrier and tracking number' })
+    .trim()
+    .min(2, 'Add the carrier and tracking number')
+    .max(500),
 });
 export const ReceiveInput = z.object({
   condition: z.enum(['good', 'damaged'], { error: 'Say what condition the die arrived in' }),

@@ -29,17 +29,27 @@ describe('date fields', () => {
     expect(instant().safeParse(at).success).toBe(ok);
   });
 
-  it.each(['a\u0000b', 'next Tuesday', '', '2026-13-45T99:00:00Z'])('refuses %j as a format error, without throwing', (text) => {
-    // zod 4 runs the range refinement even after the format check failed.
-    const result = instant().safeParse(text);
-    expect(result.success).toBe(false);
-    expect(result.error!.issues[0]!.message).toBe('Enter a date and time');
-  });
+  it.each(['a\u0000b', 'next Tuesday', '', '2026-13-45T99:00:00Z'])(
+    'refuses %j as a format error, without throwing',
+    (text) => {
+      // zod 4 runs the range refinement even after the format check failed.
+      const result = instant().safeParse(text);
+      expect(result.success).toBe(false);
+      expect(result.error!.issues[0]!.message).toBe('Enter a date and time');
+    },
+  );
 
   it('holds in every schema that takes a date', () => {
     expect(DieRequestUpdate.safeParse({ needByDate: '0000-01-01' }).success).toBe(false);
     expect(DieRequestUpdate.safeParse({ bidDeadline: '0000-01-01T00:00:00Z' }).success).toBe(false);
     expect(PriceHistoryQuery.safeParse({ from: '0000-01-01' }).success).toBe(false);
-    expect(BidInput.safeParse({ lines: [{ kind: 'die', amountCents: 1 }], currency: 'USD', leadDays: 5, validUntil: '9999-12-31' }).success).toBe(false);
+    expect(
+      BidInput.safeParse({
+        lines: [{ kind: 'die', amountCents: 1 }],
+        currency: 'USD',
+        leadDays: 5,
+        validUntil: '9999-12-31',
+      }).success,
+    ).toBe(false);
   });
 });

@@ -13,7 +13,8 @@ const outOfRange = `Enter a date from ${earliestDate} to ${latestDate}`;
 export const dateInRange = (date: string) => date >= earliestDate && date <= latestDate;
 
 /** A calendar date, YYYY-MM-DD, from `earliestDate` to `latestDate`. */
-export const calendarDate = (error = 'Enter a date as YYYY-MM-DD') => z.iso.date({ error }).refine(dateInRange, { error: outOfRange });
+export const calendarDate = (error = 'Enter a date as YYYY-MM-DD') =>
+  z.iso.date({ error }).refine(dateInRange, { error: outOfRange });
 
 /** Whether an instant's UTC date is in the range; text that is no instant is left to the format check. */
 function instantInRange(text: string): boolean {
@@ -25,4 +26,5 @@ function instantInRange(text: string): boolean {
  * An instant with its offset, whose UTC date is from `earliestDate` to `latestDate`. zod 4 runs
  * a refinement even after the format check failed, so it must not assume a valid instant.
  */
-export const instant = (error = 'Enter a date and time') => z.iso.datetime({ offset: true, error }).refine(instantInRange, { error: outOfRange });
+export const instant = (error = 'Enter a date and time') =>
+  z.iso.datetime({ offset: true, error }).refine(instantInRange, { error: outOfRange });

@@ -25,7 +25,11 @@ export function formatInZone(instant: Date, timeZone: string, locale = 'en-US'):
 
 /** A calendar date (YYYY-MM-DD) for people: "Tue, Dec 8, 2026". A date has no zone to convert. */
 export function formatCalendarDate(date: string, locale = 'en-US'): string {
-  return new Intl.DateTimeFormat(locale, { weekday: 'short', month: 'short', day: 'numeric', year: 'numeric', timeZone: 'UTC' }).format(
-    new Date(`${date}T00:00:00Z`),
-  );
+  return new Intl.DateTimeFormat(locale, {
+    weekday: 'short',
+    month: 'short',
+    day: 'numeric',
+    year: 'numeric',
+    timeZone: 'UTC',
+  }).format(new Date(`${date}T00:00:00Z`));
 }

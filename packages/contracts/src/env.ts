@@ -39,9 +39,15 @@ export function envInt(fallback: number, min: number, max = Number.MAX_SAFE_INTE
     .default(fallback);
 }
 
-export const envNodeEnv = z.enum(['development', 'test', 'production'], { error: 'must be development, test or production' }).default('development');
+export const envNodeEnv = z
+  .enum(['development', 'test', 'production'], { error: 'must be development, test or production' })
+  .default('development');
 
-export const envLogLevel = z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent'], { error: 'must be fatal, error, warn, info, debug, trace or silent' }).default('info');
+export const envLogLevel = z
+  .enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent'], {
+    error: 'must be fatal, error, warn, info, debug, trace or silent',
+  })
+  .default('info');
 
 /** S3 (or an S3-compatible store): no endpoint means AWS itself; keys may come from the host's role. */
 export const envStorage = {
@@ -53,8 +59,20 @@ export const envStorage = {
 };
 
 /** The storage settings as the storage package takes them, from variables checked by `envStorage`. */
-export function storageSettings(e: { S3_ENDPOINT?: string; S3_BUCKET: string; S3_REGION: string; S3_ACCESS_KEY_ID?: string; S3_SECRET_ACCESS_KEY?: string }) {
-  return { endpoint: e.S3_ENDPOINT, bucket: e.S3_BUCKET, region: e.S3_REGION, accessKeyId: e.S3_ACCESS_KEY_ID, secretAccessKey: e.S3_SECRET_ACCESS_KEY };
+export function storageSettings(e: {
+  S3_ENDPOINT?: string;
+  S3_BUCKET: string;
+  S3_REGION: string;
+  S3_ACCESS_KEY_ID?: string;
+  S3_SECRET_ACCESS_KEY?: string;
+}) {
+  return {
+    endpoint: e.S3_ENDPOINT,
+    bucket: e.S3_BUCKET,
+    region: e.S3_REGION,
+    accessKeyId: e.S3_ACCESS_KEY_ID,
+    secretAccessKey: e.S3_SECRET_ACCESS_KEY,
+  };
 }
 
 export class ConfigError extends Error {}

@@ -18,7 +18,12 @@ describe('redisOptions', () => {
       db: 5,
     });
     // A password with no user is the default user's (Redis's requirepass).
-    expect(redisOptions('redis://:only-password@h:1/0')).toEqual({ host: 'h', port: 1, password: 'only-password', db: 0 });
+    expect(redisOptions('redis://:only-password@h:1/0')).toEqual({
+      host: 'h',
+      port: 1,
+      password: 'only-password',
+      db: 0,
+    });
   });
 
   it('turns on TLS for rediss://, checking the certificate against the host name', () => {

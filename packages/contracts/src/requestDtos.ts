@@ -115,7 +115,15 @@ export interface DieRequestDetail extends DieRequestSummary {
   /** What a die shop learns after the award: only whether it won. */
   outcome: 'won' | 'not_awarded' | null;
   /** The award: the printer sees it whole; the winning shop sees its purchase order. */
-  award: { id: number; poNumber: string; shopName: string | null; totalCents: number; currency: string; promisedShipDate: string; reason: string | null } | null;
+  award: {
+    id: number;
+    poNumber: string;
+    shopName: string | null;
+    totalCents: number;
+    currency: string;
+    promisedShipDate: string;
+    reason: string | null;
+  } | null;
   trackingNote: string | null;
   shippedAt: string | null;
   receivedAt: string | null;

@@ -47,7 +47,13 @@ export const requestTransitions: readonly Transition[] = [
   // No way back to open: once the printer has seen the bids, they are never sealed again.
   { from: 'bidding_closed', to: 'awarded', action: 'award', actor: 'printer', roles: ['purchasing', 'admin'] },
   { from: 'bidding_closed', to: 'cancelled', action: 'cancel', actor: 'printer', roles: ['purchasing', 'admin'] },
-  { from: 'awarded', to: 'in_production', action: 'start-production', actor: 'awarded_shop', roles: ['estimator', 'admin'] },
+  {
+    from: 'awarded',
+    to: 'in_production',
+    action: 'start-production',
+    actor: 'awarded_shop',
+    roles: ['estimator', 'admin'],
+  },
   { from: 'awarded', to: 'cancelled', action: 'cancel', actor: 'printer', roles: ['purchasing', 'admin'] },
   { from: 'in_production', to: 'shipped', action: 'ship', actor: 'awarded_shop', roles: ['estimator', 'admin'] },
   { from: 'shipped', to: 'received', action: 'receive', actor: 'printer', roles: ['buyer', 'purchasing', 'admin'] },
@@ -76,9 +82,11 @@ export type Visibility = z.infer<typeof Visibility>;
 const IsoDate = calendarDate();
 const Instant = instant();
 const Inches = (what: string) =>
-  z.number({ error: `Enter ${what} in inches` }).positive(`${what} must be more than 0`).max(120, `${what} is at most 120 in`);
-const optionalText = (max: number) =>
-  z.string().trim().max(max, `At most ${max} characters`).nullable().optional();
+  z
+    .number({ error: `Enter ${what} in inches` })
+    .positive(`${what} must be more than 0`)
+    .max(120, `${what} is at most 120 in`);
+const optionalText = (max: number) => z.string().trim().max(max, `At most ${max} characters`).nullable().optional();
 
 /**
  * Everything a buyer fills in; a draft may leave most of it empty, publishing needs it complete.
@@ -88,14 +96,32 @@ const optionalText = (max: number) =>
 const DieRequestFields = z.object({
   title: z.string({ error: 'Enter a title' }).trim().min(1, 'Enter a title').max(160, 'At most 160 characters'),
   jobReference: optionalText(60),
-  quantity: z.number({ error: 'Enter how many dies' }).int('A whole number of dies').min(1, 'At least 1 die').max(100, 'At most 100 dies'),
-  ups: z.number({ error: 'Enter the number of ups' }).int('A whole number of ups').min(1, 'At least 1 up').max(500, 'At most 500 ups'),
+  quantity: z
+    .number({ error: 'Enter how many dies' })
+    .int('A whole number of dies')
+    .min(1, 'At least 1 die')
+    .max(100, 'At most 100 dies'),
+  ups: z
+    .number({ error: 'Enter the number of ups' })
+    .int('A whole number of ups')
+    .min(1, 'At least 1 up')
+    .max(500, 'At most 500 ups'),
   pieceWidthIn: Inches('The finished width').nullable().optional(),
   pieceHeightIn: Inches('The finished height').nullable().optional(),
   stockName: optionalText(120),
   // Paperboard caliper: 0.001 in (1 pt) to 0.5 in covers folding carton to heavy corrugated.
-  caliperIn: z.number({ error: 'Enter the caliper' }).min(0.001, 'At least 0.001 in').max(0.5, 'At most 0.5 in').nullable().optional(),
-  stockWeightGsm: z.number({ error: 'Enter the stock weight' }).min(20, 'At least 20 g/m²').max(3000, 'At most 3,000 g/m²').nullable().optional(),
+  caliperIn: z
+    .number({ error: 'Enter the caliper' })
+    .min(0.001, 'At least 0.001 in')
+    .max(0.5, 'At most 0.5 in')
+    .nullable()
+    .optional(),
+  stockWeightGsm: z
+    .number({ error: 'Enter the stock weight' })
+    .min(20, 'At least 20 g/m²')
+    .max(3000, 'At most 3,000 g/m²')
+    .nullable()
+    .optional(),
   grain: Grain.nullable().optional(),
   stockKind: z.enum(['paper', 'paperboard', 'corrugated']),
   /** The weight as the buyer entered it, e.g. "80 lb cover"; stockWeightGsm holds it in g/m². */
@@ -104,7 +130,13 @@ const DieRequestFields = z.object({
   heavyInkOnFold: z.boolean().nullable().optional(),
   colourBreakOnFold: z.boolean().nullable().optional(),
   pressId: recordId(z.number(), 'Choose one of your presses').nullable().optional(),
-  runSheets: z.number({ error: 'Enter the sheets to run' }).int('A whole number of sheets').min(1).max(10_000_000).nullable().optional(),
+  runSheets: z
+    .number({ error: 'Enter the sheets to run' })
+    .int('A whole number of sheets')
+    .min(1)
+    .max(10_000_000)
+    .nullable()
+    .optional(),
   plannedLeadDays: z.number().int().min(1, 'At least 1 working day').max(60, 'At most 60 working days'),
   ruleTypes: z.array(RuleType).min(1, 'Choose at least one rule type').max(4),
   counterWanted: z.boolean(),
@@ -128,7 +160,9 @@ export const DieRequestCreate = DieRequestFields.extend({
   invitedShopIds: shape.invitedShopIds.default([]),
 });
 export type DieRequestCreate = z.input<typeof DieRequestCreate>;
-export const DieRequestUpdate = DieRequestFields.partial().refine((v) => Object.keys(v).length > 0, { error: 'Nothing to change' });
+export const DieRequestUpdate = DieRequestFields.partial().refine((v) => Object.keys(v).length > 0, {
+  error: 'Nothing to change',
+});
 export type DieRequestUpdate = z.input<typeof DieRequestUpdate>;
 
 /** What publishing needs on top of a draft: dates, stock and where the die goes. */
@@ -140,7 +174,10 @@ export const PublishReady = z
     bidDeadline: Instant,
     deliveryPostcode: z.string({ error: 'Enter the delivery postcode' }).min(3, 'Enter the delivery postcode'),
   })
-  .refine((v) => new Date(v.bidDeadline).getTime() > Date.now(), { error: 'The bid deadline must be in the future', path: ['bidDeadline'] })
+  .refine((v) => new Date(v.bidDeadline).getTime() > Date.now(), {
+    error: 'The bid deadline must be in the future',
+    path: ['bidDeadline'],
+  })
   .refine((v) => v.needByDate >= v.bidDeadline.slice(0, 10), {
     error: 'The need-by date cannot be before the bid deadline',
     path: ['needByDate'],
@@ -152,7 +189,9 @@ export const RequestListQuery = z.object({
   needByFrom: IsoDate.optional(),
   needByTo: IsoDate.optional(),
   q: z.string().trim().max(100).optional(),
-  sort: z.enum(['needByDate', '-needByDate', 'bidDeadline', '-bidDeadline', 'createdAt', '-createdAt', 'title']).default('-createdAt'),
+  sort: z
+    .enum(['needByDate', '-needByDate', 'bidDeadline', '-bidDeadline', 'createdAt', '-createdAt', 'title'])
+    .default('-createdAt'),
   page: z.coerce.number().int().min(1).max(10_000).default(1),
   pageSize: z.coerce.number().int().min(1).max(100).default(25),
 });
@@ -170,24 +209,48 @@ export const MarketplaceQuery = z.object({
   ruleTypes: z
     .string()
     .max(100)
-    .transform((s) => s.split(',').map((t) => t.trim()).filter(Boolean))
+    .transform((s) =>
+      s
+        .split(',')
+        .map((t) => t.trim())
+        .filter(Boolean),
+    )
     .pipe(z.array(RuleType))
     .optional(),
   hideDeclined: z
     .enum(['true', 'false'])
     .transform((v) => v === 'true')
     .default(true),
-  sort: z.enum(['bidDeadline', '-bidDeadline', 'needByDate', '-needByDate', 'ruleLength', '-ruleLength', 'distance', '-distance']).default('bidDeadline'),
+  sort: z
+    .enum([
+      'bidDeadline',
+      '-bidDeadline',
+      'needByDate',
+      '-needByDate',
+      'ruleLength',
+      '-ruleLength',
+      'distance',
+      '-distance',
+    ])
+    .default('bidDeadline'),
   page: z.coerce.number().int().min(1).max(10_000).default(1),
   pageSize: z.coerce.number().int().min(1).max(100).default(25),
 });
 export type MarketplaceQuery = z.input<typeof MarketplaceQuery>;
 
 export const QuestionCreate = z.object({
-  question: z.string({ error: 'Write your question' }).trim().min(3, 'Write your question').max(2000, 'At most 2,000 characters'),
+  question: z
+    .string({ error: 'Write your question' })
+    .trim()
+    .min(3, 'Write your question')
+    .max(2000, 'At most 2,000 characters'),
 });
 export const AnswerCreate = z.object({
-  answer: z.string({ error: 'Write the answer' }).trim().min(1, 'Write the answer').max(4000, 'At most 4,000 characters'),
+  answer: z
+    .string({ error: 'Write the answer' })
+    .trim()
+    .min(1, 'Write the answer')
+    .max(4000, 'At most 4,000 characters'),
 });
 export const LayerMapUpdate = z.object({
   layerMap: z.record(z.string().max(255), z.enum(['cut', 'crease', 'perf', 'kiss', 'other'])),

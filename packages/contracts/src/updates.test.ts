@@ -21,11 +21,16 @@ describe('update schemas', () => {
 describe('every update schema', () => {
   it('has no field with a default, at any exported *Update', async () => {
     const contracts: Record<string, unknown> = await import('./index');
-    const updates = Object.entries(contracts).filter(([name, value]) => name.endsWith('Update') && value instanceof z.ZodObject);
+    const updates = Object.entries(contracts).filter(
+      ([name, value]) => name.endsWith('Update') && value instanceof z.ZodObject,
+    );
     expect(updates.length).toBeGreaterThanOrEqual(5);
     for (const [name, schema] of updates) {
       for (const [field, type] of Object.entries((schema as z.ZodObject).shape)) {
-        expect(type instanceof z.ZodDefault || (type instanceof z.ZodOptional && type.unwrap() instanceof z.ZodDefault), `${name}.${field}`).toBe(false);
+        expect(
+          type instanceof z.ZodDefault || (type instanceof z.ZodOptional && type.unwrap() instanceof z.ZodDefault),
+          `${name}.${field}`,
+        ).toBe(false);
       }
     }
   });

@@ -25,8 +25,21 @@ function makeDxf(entities: number): string {
       d.line('CUT', x, y + 2, x, y),
       d.line('CREASE', x + 1, y, x + 1, y + 2),
       d.arc('PERF', x + 0.5, y + 1.5, 0.3, 0, 180),
-      d.lwpolyline('KISS CUT', [[x + 1.2, y + 1.2, 0.5], [x + 1.8, y + 1.2], [x + 1.8, y + 1.8]]),
-      d.lwpolyline('CUT', [[x + 0.2, y + 0.2], [x + 0.6, y + 0.2, 1], [x + 0.6, y + 0.4], [x + 0.2, y + 0.4, 1]], true),
+      d.lwpolyline('KISS CUT', [
+        [x + 1.2, y + 1.2, 0.5],
+        [x + 1.8, y + 1.2],
+        [x + 1.8, y + 1.8],
+      ]),
+      d.lwpolyline(
+        'CUT',
+        [
+          [x + 0.2, y + 0.2],
+          [x + 0.6, y + 0.2, 1],
+          [x + 0.6, y + 0.4],
+          [x + 0.2, y + 0.4, 1],
+        ],
+        true,
+      ),
       d.circle('CUT', x + 1.5, y + 0.5, 0.125),
       d.circle('CUT', x + 1.5, y + 0.8, 0.1),
     ];
@@ -55,11 +68,17 @@ const maxRssMb = process.resourceUsage().maxRSS / 1024; // maxRSS is in kilobyte
 
 const p = median(parseMs);
 const a = median(analyseMs);
-console.log(`dieline analysis benchmark: ${ENTITIES} entities, ${(text.length / 1048576).toFixed(1)} MB of DXF, median of ${RUNS} runs`);
+console.log(
+  `dieline analysis benchmark: ${ENTITIES} entities, ${(text.length / 1048576).toFixed(1)} MB of DXF, median of ${RUNS} runs`,
+);
 console.log(`  dxf-parser parse      ${p.toFixed(0)} ms`);
 console.log(`  analyseDieline        ${a.toFixed(0)} ms (parse included)`);
 console.log(`  ratio analyse/parse   ${(a / p).toFixed(2)}`);
 console.log(`  heap used ${(mem.heapUsed / 1048576).toFixed(0)} MB, peak RSS ${maxRssMb.toFixed(0)} MB`);
-console.log(`  check: ${metrics.punches} punches, ${metrics.joints} joints, ${metrics.bends} bends, ${metrics.length.total.toFixed(1)} in of rule`);
+console.log(
+  `  check: ${metrics.punches} punches, ${metrics.joints} joints, ${metrics.bends} bends, ${metrics.length.total.toFixed(1)} in of rule`,
+);
 // For the summary table of `npm run bench` (see scripts/lib/benchResults.ts).
-console.log(`@result ${JSON.stringify({ figure: `dieline analysis, ${ENTITIES.toLocaleString('en-US')} entities`, value: `${a.toFixed(0)} ms`, baseline: `parse ${p.toFixed(0)} ms`, ratio: a / p })}`);
+console.log(
+  `@result ${JSON.stringify({ figure: `dieline analysis, ${ENTITIES.toLocaleString('en-US')} entities`, value: `${a.toFixed(0)} ms`, baseline: `parse ${p.toFixed(0)} ms`, ratio: a / p })}`,
+);

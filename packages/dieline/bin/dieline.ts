@@ -16,7 +16,8 @@ import {
   type UnitName,
 } from '../src/index';
 
-const USAGE = 'usage: dieline FILE [--json] [--margin IN] [--map LAYER=TYPE]... [--units in|mm|cm|m|ft|px] [--press WxL]';
+const USAGE =
+  'usage: dieline FILE [--json] [--margin IN] [--map LAYER=TYPE]... [--units in|mm|cm|m|ft|px] [--press WxL]';
 
 class UsageError extends Error {}
 
@@ -57,7 +58,8 @@ function options(argv: string[]): { file: string; json: boolean; opts: AnalyseOp
     opts.layerMap = map as LayerMap;
   }
   if (values.units !== undefined) {
-    if (!(UNIT_NAMES as readonly string[]).includes(values.units)) throw new UsageError(`--units must be one of ${UNIT_NAMES.join(', ')}`);
+    if (!(UNIT_NAMES as readonly string[]).includes(values.units))
+      throw new UsageError(`--units must be one of ${UNIT_NAMES.join(', ')}`);
     opts.units = values.units as UnitName;
   }
   if (values.press !== undefined) {
@@ -73,10 +75,14 @@ function table(a: DielineAnalysis, file: string): string {
   const f = (v: number, digits = 3) => v.toFixed(digits);
   const rows: Array<[string, string]> = [
     ['file', file],
-    ['format', `${a.format.toUpperCase()}, drawing units ${a.drawingUnits.name}${a.drawingUnits.source === 'assumed' ? ' (assumed)' : ''}`],
-    ...(['cut', 'crease', 'perf', 'kiss', 'other', 'total'] as const).map(
-      (k): [string, string] => [`length ${k}`, `${f(m.length[k])} in   ${f(m.lengthMm[k], 1)} mm`],
-    ),
+    [
+      'format',
+      `${a.format.toUpperCase()}, drawing units ${a.drawingUnits.name}${a.drawingUnits.source === 'assumed' ? ' (assumed)' : ''}`,
+    ],
+    ...(['cut', 'crease', 'perf', 'kiss', 'other', 'total'] as const).map((k): [string, string] => [
+      `length ${k}`,
+      `${f(m.length[k])} in   ${f(m.lengthMm[k], 1)} mm`,
+    ]),
     ['curves', String(m.curves)],
     ['smallest radius', m.minRadius === null ? '-' : `${f(m.minRadius, 4)} in   ${f(m.minRadius * 25.4, 2)} mm`],
     ['bends', String(m.bends)],
@@ -91,7 +97,8 @@ function table(a: DielineAnalysis, file: string): string {
   const w = Math.max(...rows.map(([k]) => k.length));
   const lines = rows.map(([k, v]) => `${k.padEnd(w)}  ${v}`);
   lines.push('', 'layers:');
-  for (const l of m.layers) lines.push(`  ${l.name}  →  ${l.ruleType}  (${l.entities} entit${l.entities === 1 ? 'y' : 'ies'})`);
+  for (const l of m.layers)
+    lines.push(`  ${l.name}  →  ${l.ruleType}  (${l.entities} entit${l.entities === 1 ? 'y' : 'ies'})`);
   if (m.warnings.length > 0) lines.push('', 'warnings:', ...m.warnings.map((x) => `  - ${x}`));
   lines.push('', `complexity rule: ${COMPLEXITY_RULE}`);
   return `${lines.join('\n')}\n`;
@@ -104,7 +111,10 @@ function main(): number {
     file = parsed.file;
     const size = statSync(file).size;
     if (size > DEFAULT_LIMITS.maxBytes) {
-      throw new DielineError('TOO_LARGE', `The file is ${(size / 1048576).toFixed(1)} MB; the most accepted is ${DEFAULT_LIMITS.maxBytes / 1048576} MB.`);
+      throw new DielineError(
+        'TOO_LARGE',
+        `The file is ${(size / 1048576).toFixed(1)} MB; the most accepted is ${DEFAULT_LIMITS.maxBytes / 1048576} MB.`,
+      );
     }
     const result = analyseDieline(new Uint8Array(readFileSync(file)), parsed.opts);
     process.stdout.write(parsed.json ? `${JSON.stringify(result.metrics)}\n` : table(result, file));
@@ -121,7 +131,14 @@ function main(): number {
     }
     const e = err as NodeJS.ErrnoException;
     if (e && typeof e.code === 'string' && typeof e.message === 'string') {
-      const why = e.code === 'ENOENT' ? 'no such file' : e.code === 'EISDIR' ? 'is a folder, not a file' : e.code === 'EACCES' ? 'permission denied' : oneLine(e.message);
+      const why =
+        e.code === 'ENOENT'
+          ? 'no such file'
+          : e.code === 'EISDIR'
+            ? 'is a folder, not a file'
+            : e.code === 'EACCES'
+              ? 'permission denied'
+              : oneLine(e.message);
       process.stderr.write(`dieline: ${file || 'input'}: ${why}\n`);
       return 1;
     }

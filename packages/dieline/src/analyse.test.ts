@@ -20,7 +20,23 @@ describe('analyseDieline', () => {
   it('returns exactly the fields of the metrics contract', () => {
     const m = analyseDieline(boxMm(), { fileName: 'box-mm.dxf' }).metrics;
     expect(Object.keys(m).sort()).toEqual(
-      ['units', 'length', 'lengthMm', 'curves', 'minRadius', 'bends', 'joints', 'closedContours', 'punches', 'bbox', 'board', 'complexity', 'warnings', 'fitsPress', 'layers'].sort(),
+      [
+        'units',
+        'length',
+        'lengthMm',
+        'curves',
+        'minRadius',
+        'bends',
+        'joints',
+        'closedContours',
+        'punches',
+        'bbox',
+        'board',
+        'complexity',
+        'warnings',
+        'fitsPress',
+        'layers',
+      ].sort(),
     );
     expect(Object.keys(m.length)).toEqual(['cut', 'crease', 'perf', 'kiss', 'other', 'total']);
     expect(Object.keys(m.lengthMm)).toEqual(['cut', 'crease', 'perf', 'kiss', 'other', 'total']);
@@ -77,7 +93,9 @@ describe('analyseDieline', () => {
   });
 
   it('reports unpriced layers and drops zero-length segments', () => {
-    const m = analyseDieline(d.dxf([d.line('CUT', 0, 0, 1, 0), d.line('CUT', 3, 3, 3, 3), d.line('Dims', 0, 5, 9, 5)], { insunits: 1 })).metrics;
+    const m = analyseDieline(
+      d.dxf([d.line('CUT', 0, 0, 1, 0), d.line('CUT', 3, 3, 3, 3), d.line('Dims', 0, 5, 9, 5)], { insunits: 1 }),
+    ).metrics;
     expect(m.length).toMatchObject({ cut: 1, other: 9, total: 10 });
     expect(m.bbox).toEqual({ width: 1, height: 0 });
     expect(m.warnings).toContain('Dropped 1 zero-length segment.');
@@ -85,7 +103,9 @@ describe('analyseDieline', () => {
   });
 
   it('refuses PDF with a clear way forward', () => {
-    expect(err(() => analyseDieline('%PDF-1.4\n%âãÏÓ\n1 0 obj'))).toMatch(/^UNSUPPORTED_FORMAT: PDF dielines are not read: export the dieline .* as DXF or SVG/);
+    expect(err(() => analyseDieline('%PDF-1.4\n%âãÏÓ\n1 0 obj'))).toMatch(
+      /^UNSUPPORTED_FORMAT: PDF dielines are not read: export the dieline .* as DXF or SVG/,
+    );
   });
 
   it('refuses a drawing with nothing to measure', () => {
@@ -95,13 +115,27 @@ describe('analyseDieline', () => {
   it('refuses oversized input and bad options', () => {
     expect(err(() => analyseDieline(boxMm(), { limits: { maxBytes: 100 } }))).toMatch(/^TOO_LARGE/);
     expect(err(() => analyseDieline(boxMm(), { marginIn: -1 }))).toMatch(/^BAD_OPTION: The board margin/);
-    expect(err(() => analyseDieline(boxMm(), { press: { widthIn: 0, lengthIn: 30 } }))).toMatch(/^BAD_OPTION: The press/);
-    expect(err(() => analyseDieline(boxMm(), { layerMap: { CUT: 'cutting' as never } }))).toMatch(/^BAD_OPTION: Layer "CUT"/);
+    expect(err(() => analyseDieline(boxMm(), { press: { widthIn: 0, lengthIn: 30 } }))).toMatch(
+      /^BAD_OPTION: The press/,
+    );
+    expect(err(() => analyseDieline(boxMm(), { layerMap: { CUT: 'cutting' as never } }))).toMatch(
+      /^BAD_OPTION: Layer "CUT"/,
+    );
     expect(err(() => analyseDieline(boxMm(), { units: 'yd' as never }))).toMatch(/^BAD_OPTION: Unknown units/);
   });
 
   it('refuses a file past the segment limit', () => {
-    const file = d.dxf([d.lwpolyline('CUT', Array.from({ length: 30 }, (_, i): [number, number] => [i, i % 2]))], { insunits: 1 });
-    expect(err(() => analyseDieline(file, { limits: { maxSegments: 20 } }))).toMatch(/^TOO_MANY_ENTITIES: .*more than 20 lines, arcs and curves/);
+    const file = d.dxf(
+      [
+        d.lwpolyline(
+          'CUT',
+          Array.from({ length: 30 }, (_, i): [number, number] => [i, i % 2]),
+        ),
+      ],
+      { insunits: 1 },
+    );
+    expect(err(() => analyseDieline(file, { limits: { maxSegments: 20 } }))).toMatch(
+      /^TOO_MANY_ENTITIES: .*more than 20 lines, arcs and curves/,
+    );
   });
 });

@@ -76,7 +76,9 @@ export function analyseDieline(content: string | Uint8Array, opts: AnalyseOption
     );
   }
   const drawing =
-    format === 'dxf' ? readDxf(text, { resolve, limits, units: opts.units }) : readSvg(text, { resolve, limits, units: opts.units });
+    format === 'dxf'
+      ? readDxf(text, { resolve, limits, units: opts.units })
+      : readSvg(text, { resolve, limits, units: opts.units });
   if (drawing.paths.length === 0) {
     throw new DielineError('NO_GEOMETRY', 'The drawing has no lines, arcs or curves to measure.');
   }
@@ -135,7 +137,8 @@ function checkOptions(opts: AnalyseOptions): void {
   const bad = (what: string) => {
     throw new DielineError('BAD_OPTION', what);
   };
-  if (opts.format !== undefined && !(FORMATS as readonly string[]).includes(opts.format)) bad(`Unknown format "${opts.format}".`);
+  if (opts.format !== undefined && !(FORMATS as readonly string[]).includes(opts.format))
+    bad(`Unknown format "${opts.format}".`);
   if (opts.marginIn !== undefined && !(Number.isFinite(opts.marginIn) && opts.marginIn >= 0)) {
     bad('The board margin must be a number of inches, 0 or more.');
   }
@@ -145,9 +148,10 @@ function checkOptions(opts: AnalyseOptions): void {
       bad('The press sheet size must be two positive numbers of inches.');
     }
   }
-  if (opts.units !== undefined && !isUnitName(opts.units)) bad(`Unknown units "${String(opts.units)}"; use in, mm, cm, m, ft or px.`);
+  if (opts.units !== undefined && !isUnitName(opts.units))
+    bad(`Unknown units "${String(opts.units)}"; use in, mm, cm, m, ft or px.`);
   for (const [layer, type] of Object.entries(opts.layerMap ?? {})) {
-    if (!isRuleType(type)) bad(`Layer "${layer}" is mapped to "${String(type)}"; use cut, crease, perf, kiss or other.`);
+    if (!isRuleType(type))
+      bad(`Layer "${layer}" is mapped to "${String(type)}"; use cut, crease, perf, kiss or other.`);
   }
 }
-

@@ -9,10 +9,14 @@ import { describe, expect, it } from 'vitest';
 const root = fileURLToPath(new URL('../../..', import.meta.url));
 const fixture = (name: string) => fileURLToPath(new URL(`../fixtures/${name}`, import.meta.url));
 const run = (...args: string[]) =>
-  spawnSync(process.execPath, [join(root, 'node_modules/tsx/dist/cli.mjs'), join(root, 'packages/dieline/bin/dieline.ts'), ...args], {
-    cwd: root,
-    encoding: 'utf8',
-  });
+  spawnSync(
+    process.execPath,
+    [join(root, 'node_modules/tsx/dist/cli.mjs'), join(root, 'packages/dieline/bin/dieline.ts'), ...args],
+    {
+      cwd: root,
+      encoding: 'utf8',
+    },
+  );
 
 describe('dieline command', () => {
   it('prints one JSON object with the metrics fields', () => {
@@ -21,9 +25,23 @@ describe('dieline command', () => {
     const lines = r.stdout.trim().split('\n');
     expect(lines).toHaveLength(1);
     const m = JSON.parse(lines[0]!);
-    expect(Object.keys(m)).toEqual(
-      ['units', 'length', 'lengthMm', 'curves', 'minRadius', 'bends', 'joints', 'closedContours', 'punches', 'bbox', 'board', 'complexity', 'warnings', 'fitsPress', 'layers'],
-    );
+    expect(Object.keys(m)).toEqual([
+      'units',
+      'length',
+      'lengthMm',
+      'curves',
+      'minRadius',
+      'bends',
+      'joints',
+      'closedContours',
+      'punches',
+      'bbox',
+      'board',
+      'complexity',
+      'warnings',
+      'fitsPress',
+      'layers',
+    ]);
     expect(m.lengthMm.perf).toBeCloseTo(50, 9);
     expect(m.board.width).toBeCloseTo(100 / 25.4 + 1, 12); // 0.5 in margin each side
     expect(m.fitsPress).toBe(true);

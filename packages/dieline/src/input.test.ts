@@ -19,14 +19,20 @@ describe('decodeInput', () => {
   });
 
   it('refuses files over the size limit, saying the limit', () => {
-    expect(code(() => decodeInput(new Uint8Array(3 * 1048576), 2 * 1048576))).toMatch(/^TOO_LARGE: The file is 3\.0 MB; the most accepted is 2 MB/);
+    expect(code(() => decodeInput(new Uint8Array(3 * 1048576), 2 * 1048576))).toMatch(
+      /^TOO_LARGE: The file is 3\.0 MB; the most accepted is 2 MB/,
+    );
   });
 
   it('names images, archives and DWG files', () => {
-    expect(code(() => decodeInput(new Uint8Array([0x89, 0x50, 0x4e, 0x47, 13, 10]), 100))).toMatch(/^BINARY: .*PNG image/);
+    expect(code(() => decodeInput(new Uint8Array([0x89, 0x50, 0x4e, 0x47, 13, 10]), 100))).toMatch(
+      /^BINARY: .*PNG image/,
+    );
     expect(code(() => decodeInput(new Uint8Array([0x50, 0x4b, 3, 4, 0]), 100))).toMatch(/ZIP/);
     expect(code(() => decodeInput(new TextEncoder().encode('AC1027\0\0'), 100))).toMatch(/DWG/);
-    expect(code(() => decodeInput(new TextEncoder().encode('AutoCAD Binary DXF\r\n\x1a\0'), 100))).toMatch(/binary DXF/);
+    expect(code(() => decodeInput(new TextEncoder().encode('AutoCAD Binary DXF\r\n\x1a\0'), 100))).toMatch(
+      /binary DXF/,
+    );
   });
 
   it('refuses other binary data', () => {
@@ -52,7 +58,9 @@ describe('detectFormat', () => {
 
   it('says what it could not recognise', () => {
     expect(code(() => detectFormat('<html><body/></html>'))).toMatch(/^UNKNOWN_FORMAT: .*no <svg>/);
-    expect(code(() => detectFormat('hello', 'box.dxf'))).toMatch(/^MALFORMED: The file is named \.dxf but its content is not DXF/);
+    expect(code(() => detectFormat('hello', 'box.dxf'))).toMatch(
+      /^MALFORMED: The file is named \.dxf but its content is not DXF/,
+    );
     expect(code(() => detectFormat('hello'))).toMatch(/^UNKNOWN_FORMAT/);
   });
 });

@@ -30,7 +30,8 @@ export function decodeInput(content: string | Uint8Array, maxBytes: number): str
     text = content;
   } else {
     for (const [bytes, what] of MAGIC) {
-      if (bytes.every((b, i) => content[i] === b)) throw new DielineError('BINARY', `The file is ${what}, not a DXF, SVG or PDF dieline.`);
+      if (bytes.every((b, i) => content[i] === b))
+        throw new DielineError('BINARY', `The file is ${what}, not a DXF, SVG or PDF dieline.`);
     }
     if (startsWith(content, 'AutoCAD Binary DXF')) {
       throw new DielineError('BINARY', 'The file is a binary DXF; save it as an ASCII DXF and try again.');

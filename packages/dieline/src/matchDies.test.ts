@@ -8,7 +8,13 @@ const metrics = (cut: number, crease: number, bends: number, w = 8, h = 5) => ({
   punches: 1,
   bbox: { width: w, height: h },
 });
-const die = (over: Partial<DieShape> = {}): DieShape => ({ pieceWidthIn: 8, pieceHeightIn: 5, ups: 1, metrics: metrics(26, 8, 4), ...over });
+const die = (over: Partial<DieShape> = {}): DieShape => ({
+  pieceWidthIn: 8,
+  pieceHeightIn: 5,
+  ups: 1,
+  metrics: metrics(26, 8, 4),
+  ...over,
+});
 
 describe('matchDies', () => {
   it('scores the same die 1', () => {

@@ -14,7 +14,15 @@ export function emailLayout(opts: {
   action: { label: string; url: string };
   footer: string;
 }): EmailParts {
-  const text = [opts.greeting, '', ...opts.paragraphs.flatMap((p) => [p, '']), `${opts.action.label}: ${opts.action.url}`, '', '—', opts.footer].join('\n');
+  const text = [
+    opts.greeting,
+    '',
+    ...opts.paragraphs.flatMap((p) => [p, '']),
+    `${opts.action.label}: ${opts.action.url}`,
+    '',
+    '—',
+    opts.footer,
+  ].join('\n');
   const html = `<!doctype html><html><body style="margin:0;background:#f4f6f5;font-family:'Work Sans',Arial,sans-serif;color:#1f2a2e">
 <table role="presentation" width="100%" cellpadding="0" cellspacing="0"><tr><td align="center" style="padding:32px 16px">
 <table role="presentation" width="560" cellpadding="0" cellspacing="0" style="background:#ffffff;border-radius:8px;padding:32px">

@@ -4,7 +4,8 @@ import { fairPriceBand, fitPrice, pricePerInch, priceTrend } from '../src/index'
 import { syntheticDies } from '../src/testing/syntheticDies';
 
 const n = Number(process.argv[2] ?? 100_000);
-if (!Number.isSafeInteger(n) || n < 8) throw new RangeError(`Give a whole number of records of at least 8 (got ${process.argv[2]})`);
+if (!Number.isSafeInteger(n) || n < 8)
+  throw new RangeError(`Give a whole number of records of at least 8 (got ${process.argv[2]})`);
 
 const mib = (bytes: number) => `${(bytes / 2 ** 20).toFixed(1)} MiB`;
 const took: Record<string, number> = {};
@@ -30,4 +31,6 @@ console.log(`model ${fit.model}, n ${fit.n}, residual standard error ${fit.resid
 // maxRSS is the peak resident set size of the whole process (kibibytes on Linux), generation included.
 console.log(`peak resident memory ${mib(process.resourceUsage().maxRSS * 1024)}`);
 // For the summary table of `npm run bench` (see scripts/lib/benchResults.ts).
-console.log(`@result ${JSON.stringify({ figure: `price fit in memory, ${n.toLocaleString('en-US')} records`, value: `${took['fitPrice (both models)']!.toFixed(0)} ms` })}`);
+console.log(
+  `@result ${JSON.stringify({ figure: `price fit in memory, ${n.toLocaleString('en-US')} records`, value: `${took['fitPrice (both models)']!.toFixed(0)} ms` })}`,
+);

@@ -28,7 +28,10 @@ describe('fairPriceBand', () => {
     const X = records.map((r) => [1, r.ruleLengthIn, r.features]);
     const Xt = transpose(X);
     const xtxInverse = inv(multiply(Xt, X)) as number[][];
-    const beta = multiply(multiply(xtxInverse, Xt), records.map((r) => r.dieCents)) as number[];
+    const beta = multiply(
+      multiply(xtxInverse, Xt),
+      records.map((r) => r.dieCents),
+    ) as number[];
     const rss = records.reduce((sum, r, i) => sum + (r.dieCents - (multiply(X[i]!, beta) as number)) ** 2, 0);
     const x0 = [1, 240, 28];
     const predicted = multiply(x0, beta) as number;
@@ -87,19 +90,25 @@ describe('fairPriceBand', () => {
 
   it('never goes below zero, in whole cents, and flags an extrapolation', () => {
     // Dies of about 250 in at $1.00 an inch with $20 of noise: a 1-inch die's band reaches below 0.
-    const fit = enough(syntheticDies({ n: 30, seed: 17, baseCents: 0, perInchCents: 100, perFeatureCents: 0, noiseCents: 2_000 }));
+    const fit = enough(
+      syntheticDies({ n: 30, seed: 17, baseCents: 0, perInchCents: 100, perFeatureCents: 0, noiseCents: 2_000 }),
+    );
     const band = fairPriceBand(fit, { ruleLengthIn: 1, features: 0 });
     expect(band.lowCents).toBe(0);
-    for (const v of [band.lowCents, band.typicalCents, band.highCents]) expect(Number.isInteger(v) && v >= 0).toBe(true);
+    for (const v of [band.lowCents, band.typicalCents, band.highCents])
+      expect(Number.isInteger(v) && v >= 0).toBe(true);
     expect(band.extrapolated).toBe(true);
   });
 
   it('refuses a fit without enough data and bad dies or levels', () => {
     const fit = enough(syntheticDies({ n: 20, seed: 19 }));
     const notEnough: NotEnough = { enough: false, reason: 'few', needed: 8 };
-    expect(() => fairPriceBand(notEnough as unknown as PriceFit, { ruleLengthIn: 100, features: 1 })).toThrow(/enough data/);
+    expect(() => fairPriceBand(notEnough as unknown as PriceFit, { ruleLengthIn: 100, features: 1 })).toThrow(
+      /enough data/,
+    );
     expect(() => fairPriceBand(fit, { ruleLengthIn: 0, features: 1 })).toThrow(/ruleLengthIn/);
     expect(() => fairPriceBand(fit, { ruleLengthIn: 100, features: -2 })).toThrow(/features/);
-    for (const level of [0, 1, 80, Number.NaN]) expect(() => fairPriceBand(fit, { ruleLengthIn: 100, features: 1 }, level)).toThrow(/level/);
+    for (const level of [0, 1, 80, Number.NaN])
+      expect(() => fairPriceBand(fit, { ruleLengthIn: 100, features: 1 }, level)).toThrow(/level/);
   });
 });

@@ -18,11 +18,18 @@ export interface FairPriceBand {
  * prediction interval ŷ ± t(df) · s · √(1 + x0' (X'X)⁻¹ x0), back-transformed with exp for the
  * log model. Whole cents, never below zero.
  */
-export function fairPriceBand(fit: PriceFit, die: { ruleLengthIn: number; features: number }, level = 0.8): FairPriceBand {
-  if (fit?.enough !== true) throw new TypeError('A price fit with enough data is needed (fitPrice said it had too little)');
+export function fairPriceBand(
+  fit: PriceFit,
+  die: { ruleLengthIn: number; features: number },
+  level = 0.8,
+): FairPriceBand {
+  if (fit?.enough !== true)
+    throw new TypeError('A price fit with enough data is needed (fitPrice said it had too little)');
   const { ruleLengthIn, features } = die;
-  if (!(Number.isFinite(ruleLengthIn) && ruleLengthIn > 0)) throw new RangeError(`ruleLengthIn must be a length in inches above 0 (got ${ruleLengthIn})`);
-  if (!(Number.isFinite(features) && features >= 0)) throw new RangeError(`features must be a count of 0 or more (got ${features})`);
+  if (!(Number.isFinite(ruleLengthIn) && ruleLengthIn > 0))
+    throw new RangeError(`ruleLengthIn must be a length in inches above 0 (got ${ruleLengthIn})`);
+  if (!(Number.isFinite(features) && features >= 0))
+    throw new RangeError(`features must be a count of 0 or more (got ${features})`);
   if (!(level > 0 && level < 1)) throw new RangeError(`level must be strictly between 0 and 1 (got ${level})`);
 
   const x = fit.model === 'log' ? [Math.log(ruleLengthIn), features] : [ruleLengthIn, features];
@@ -39,6 +46,7 @@ export function fairPriceBand(fit: PriceFit, die: { ruleLengthIn: number; featur
     highCents: cents(predicted + halfWidth),
     level,
     currency: fit.currency,
-    extrapolated: ruleLengthIn < minLength || ruleLengthIn > maxLength || features < minFeatures || features > maxFeatures,
+    extrapolated:
+      ruleLengthIn < minLength || ruleLengthIn > maxLength || features < minFeatures || features > maxFeatures,
   };
 }

@@ -28,7 +28,10 @@ export function formatMoney({ cents, currency }: Money, locale = 'en-US'): strin
  * alone: no binary fraction is ever formed. Returns null for anything that is not an amount.
  */
 export function parseMoneyInput(text: string, minorDigits = 2): number | null {
-  const cleaned = text.trim().replace(/[,\s]/g, '').replace(/^[$€£¥]/, '');
+  const cleaned = text
+    .trim()
+    .replace(/[,\s]/g, '')
+    .replace(/^[$€£¥]/, '');
   const match = /^(\d+)(?:\.(\d*))?$/.exec(cleaned);
   if (!match) return null;
   const fraction = match[2] ?? '';

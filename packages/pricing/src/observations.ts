@@ -38,13 +38,19 @@ export function checkObservations(records: readonly PriceObservation[]): string 
   records.forEach((r, i) => {
     const bad = (what: string, value: unknown) => new RangeError(`Record ${i}: ${what} (got ${JSON.stringify(value)})`);
     if (typeof r !== 'object' || r === null) throw bad('not a price record', r);
-    if (!Number.isSafeInteger(r.dieCents) || r.dieCents <= 0) throw bad('dieCents must be a whole number of cents above 0', r.dieCents);
-    if (typeof r.currency !== 'string' || !/^[A-Z]{3}$/.test(r.currency)) throw bad('currency must be an ISO 4217 code such as USD', r.currency);
-    if (typeof r.ruleLengthIn !== 'number' || !Number.isFinite(r.ruleLengthIn) || r.ruleLengthIn <= 0) throw bad('ruleLengthIn must be a length in inches above 0', r.ruleLengthIn);
-    if (!Number.isSafeInteger(r.features) || r.features < 0) throw bad('features must be a whole count of 0 or more', r.features);
-    if (r.complexity !== 'simple' && r.complexity !== 'complex') throw bad("complexity must be 'simple' or 'complex'", r.complexity);
+    if (!Number.isSafeInteger(r.dieCents) || r.dieCents <= 0)
+      throw bad('dieCents must be a whole number of cents above 0', r.dieCents);
+    if (typeof r.currency !== 'string' || !/^[A-Z]{3}$/.test(r.currency))
+      throw bad('currency must be an ISO 4217 code such as USD', r.currency);
+    if (typeof r.ruleLengthIn !== 'number' || !Number.isFinite(r.ruleLengthIn) || r.ruleLengthIn <= 0)
+      throw bad('ruleLengthIn must be a length in inches above 0', r.ruleLengthIn);
+    if (!Number.isSafeInteger(r.features) || r.features < 0)
+      throw bad('features must be a whole count of 0 or more', r.features);
+    if (r.complexity !== 'simple' && r.complexity !== 'complex')
+      throw bad("complexity must be 'simple' or 'complex'", r.complexity);
     if (!goodDates.has(r.pricedOn)) {
-      if (typeof r.pricedOn !== 'string' || !isDate(r.pricedOn)) throw bad('pricedOn must be a date YYYY-MM-DD', r.pricedOn);
+      if (typeof r.pricedOn !== 'string' || !isDate(r.pricedOn))
+        throw bad('pricedOn must be a date YYYY-MM-DD', r.pricedOn);
       goodDates.add(r.pricedOn);
     }
     currencies.add(r.currency);

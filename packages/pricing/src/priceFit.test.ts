@@ -9,7 +9,12 @@ function enough(records: PriceObservation[]): PriceFit {
   return fit;
 }
 
-const die = (ruleLengthIn: number, features: number, dieCents: number, over: Partial<PriceObservation> = {}): PriceObservation => ({
+const die = (
+  ruleLengthIn: number,
+  features: number,
+  dieCents: number,
+  over: Partial<PriceObservation> = {},
+): PriceObservation => ({
   dieCents,
   currency: 'USD',
   ruleLengthIn,
@@ -46,7 +51,9 @@ describe('fitPrice on dies with a known price model', () => {
   });
 
   it('describes the fit in plain words', () => {
-    expect(fit.describe).toMatch(/^Linear model from 2000 dies in USD: price ≈ \$4\d\d\.\d\d \+ \$(2\.9\d|3\.0\d) per inch of rule \+ \$5\.\d\d per feature/);
+    expect(fit.describe).toMatch(
+      /^Linear model from 2000 dies in USD: price ≈ \$4\d\d\.\d\d \+ \$(2\.9\d|3\.0\d) per inch of rule \+ \$5\.\d\d per feature/,
+    );
     expect(fit.describe).toContain('leave-one-out');
     expect(MODEL_CHOICE_RULE).toContain('leave-one-out');
   });
@@ -71,7 +78,11 @@ describe('fitPrice with too little or unusable data', () => {
   const varied = syntheticDies({ n: 12, seed: 3 });
 
   it('says it needs 8 records by default', () => {
-    expect(fitPrice(varied.slice(0, 7))).toEqual({ enough: false, reason: '7 priced dies; a price fit needs at least 8', needed: 8 });
+    expect(fitPrice(varied.slice(0, 7))).toEqual({
+      enough: false,
+      reason: '7 priced dies; a price fit needs at least 8',
+      needed: 8,
+    });
     expect(fitPrice([])).toMatchObject({ enough: false, needed: 8 });
     expect(fitPrice(varied.slice(0, 8)).enough).toBe(true);
     expect(fitPrice(varied.slice(0, 8), { minRecords: 10 })).toMatchObject({ enough: false, needed: 10 });
@@ -84,7 +95,11 @@ describe('fitPrice with too little or unusable data', () => {
 
   it('says so when every die has the same rule length or the same feature count', () => {
     const sameLength = varied.map((r) => ({ ...r, ruleLengthIn: 200 }));
-    expect(fitPrice(sameLength)).toMatchObject({ enough: false, reason: expect.stringContaining('degenerate'), needed: 8 });
+    expect(fitPrice(sameLength)).toMatchObject({
+      enough: false,
+      reason: expect.stringContaining('degenerate'),
+      needed: 8,
+    });
     const sameFeatures = varied.map((r) => ({ ...r, features: 12 }));
     expect(fitPrice(sameFeatures)).toMatchObject({ enough: false, reason: expect.stringContaining('degenerate') });
   });
@@ -96,7 +111,10 @@ describe('fitPrice with too little or unusable data', () => {
 
   it('says so when one die alone sets a coefficient', () => {
     // Seven dies of 100 in and one of 200 in: the slope per inch rests on that one die.
-    const lopsided = [...[3, 5, 8, 9, 12, 15, 20].map((f, i) => die(100, f, 60_000 + 500 * f + 37 * i)), die(200, 10, 95_000)];
+    const lopsided = [
+      ...[3, 5, 8, 9, 12, 15, 20].map((f, i) => die(100, f, 60_000 + 500 * f + 37 * i)),
+      die(200, 10, 95_000),
+    ];
     expect(fitPrice(lopsided)).toMatchObject({ enough: false, reason: expect.stringContaining('One die alone') });
   });
 

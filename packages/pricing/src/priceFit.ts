@@ -67,7 +67,8 @@ const designs: Record<PriceModel, (r: PriceObservation) => { x: [number, number]
 /** Back to cents from the model's own scale. */
 const toCents: Record<PriceModel, (v: number) => number> = { linear: (v) => v, log: (v) => Math.exp(v) };
 
-const rms = (errors: readonly number[], divisor: number) => Math.sqrt(errors.reduce((sum, e) => sum + e * e, 0) / divisor);
+const rms = (errors: readonly number[], divisor: number) =>
+  Math.sqrt(errors.reduce((sum, e) => sum + e * e, 0) / divisor);
 
 function fitModel(model: PriceModel, records: readonly PriceObservation[]) {
   const rows = records.map(designs[model]);
@@ -95,7 +96,8 @@ const LEVERAGE_LIMIT = 1 - 1e-9;
  */
 export function fitPrice(records: readonly PriceObservation[], opts: PriceFitOptions = {}): PriceFit | NotEnough {
   const needed = opts.minRecords ?? DEFAULT_MIN_RECORDS;
-  if (!Number.isSafeInteger(needed) || needed < LEAST_MIN_RECORDS) throw new RangeError(`minRecords must be a whole number of at least ${LEAST_MIN_RECORDS} (got ${needed})`);
+  if (!Number.isSafeInteger(needed) || needed < LEAST_MIN_RECORDS)
+    throw new RangeError(`minRecords must be a whole number of at least ${LEAST_MIN_RECORDS} (got ${needed})`);
   const currency = checkObservations(records);
   if (currency === null || records.length < needed) {
     return { enough: false, reason: `${records.length} priced dies; a price fit needs at least ${needed}`, needed };
@@ -106,7 +108,12 @@ export function fitPrice(records: readonly PriceObservation[], opts: PriceFitOpt
   if (!linear.enough) return { ...linear, needed };
   if (!log.enough) return { ...log, needed };
   if ([...linear.leverages, ...log.leverages].some((h) => h > LEVERAGE_LIMIT)) {
-    return { enough: false, reason: 'One die alone sets a coefficient (its rule length or feature count is the only one of its kind); more varied dies are needed', needed };
+    return {
+      enough: false,
+      reason:
+        'One die alone sets a coefficient (its rule length or feature count is the only one of its kind); more varied dies are needed',
+      needed,
+    };
   }
 
   const model: PriceModel = log.looRmse < linear.looRmse ? 'log' : 'linear';
@@ -127,7 +134,10 @@ export function fitPrice(records: readonly PriceObservation[], opts: PriceFitOpt
     describe: '',
     sigma: fit.residualStandardError,
     unscaledCovariance: fit.unscaledCovariance,
-    observed: { ruleLengthIn: range(records.map((r) => r.ruleLengthIn)), features: range(records.map((r) => r.features)) },
+    observed: {
+      ruleLengthIn: range(records.map((r) => r.ruleLengthIn)),
+      features: range(records.map((r) => r.features)),
+    },
   };
   result.describe = describe(result);
   return result;

@@ -2,7 +2,12 @@ import { describe, expect, it } from 'vitest';
 import type { PriceObservation } from './observations';
 import { pricePerInch } from './pricePerInch';
 
-const die = (dieCents: number, ruleLengthIn: number, complexity: PriceObservation['complexity'] = 'simple', currency = 'USD'): PriceObservation => ({
+const die = (
+  dieCents: number,
+  ruleLengthIn: number,
+  complexity: PriceObservation['complexity'] = 'simple',
+  currency = 'USD',
+): PriceObservation => ({
   dieCents,
   currency,
   ruleLengthIn,
@@ -28,10 +33,18 @@ describe('pricePerInch', () => {
   });
 
   it('keeps simple and complex dies apart and says when a class has too few', () => {
-    const records = [...[3, 6, 7, 8, 8].map((v) => die(200 * v, 2)), die(5_000, 10, 'complex'), die(9_000, 10, 'complex')];
+    const records = [
+      ...[3, 6, 7, 8, 8].map((v) => die(200 * v, 2)),
+      die(5_000, 10, 'complex'),
+      die(9_000, 10, 'complex'),
+    ];
     const result = pricePerInch(records);
     expect(result.simple).toMatchObject({ enough: true, n: 5, medianCents: 700 });
-    expect(result.complex).toEqual({ enough: false, reason: '2 complex dies; price per inch needs at least 4', needed: 4 });
+    expect(result.complex).toEqual({
+      enough: false,
+      reason: '2 complex dies; price per inch needs at least 4',
+      needed: 4,
+    });
     expect(pricePerInch(records, { minPerClass: 2 }).complex).toMatchObject({ enough: true, n: 2, medianCents: 700 });
     expect(pricePerInch([]).simple).toMatchObject({ enough: false, needed: 4 });
   });

@@ -27,14 +27,20 @@ export const DEFAULT_MIN_PER_CLASS = 4;
  */
 export function pricePerInch(records: readonly PriceObservation[], opts: { minPerClass?: number } = {}): PricePerInch {
   const needed = opts.minPerClass ?? DEFAULT_MIN_PER_CLASS;
-  if (!Number.isSafeInteger(needed) || needed < 1) throw new RangeError(`minPerClass must be a whole number of at least 1 (got ${needed})`);
+  if (!Number.isSafeInteger(needed) || needed < 1)
+    throw new RangeError(`minPerClass must be a whole number of at least 1 (got ${needed})`);
   const currency = checkObservations(records);
   const spread = (complexity: PriceObservation['complexity']): PerInchSpread | NotEnough => {
     const perInch = records
       .filter((r) => r.complexity === complexity)
       .map((r) => r.dieCents / r.ruleLengthIn)
       .sort((a, b) => a - b);
-    if (perInch.length < needed) return { enough: false, reason: `${perInch.length} ${complexity} dies; price per inch needs at least ${needed}`, needed };
+    if (perInch.length < needed)
+      return {
+        enough: false,
+        reason: `${perInch.length} ${complexity} dies; price per inch needs at least ${needed}`,
+        needed,
+      };
     const at = (p: number) => Math.round(quantileSorted(perInch, p)!);
     return { enough: true, n: perInch.length, q1Cents: at(0.25), medianCents: at(0.5), q3Cents: at(0.75) };
   };

@@ -2,7 +2,11 @@ import { describe, expect, it } from 'vitest';
 import type { PriceObservation } from './observations';
 import { priceTrend } from './priceTrend';
 
-const die = (pricedOn: string, centsPerInch: number, complexity: PriceObservation['complexity'] = 'simple'): PriceObservation => ({
+const die = (
+  pricedOn: string,
+  centsPerInch: number,
+  complexity: PriceObservation['complexity'] = 'simple',
+): PriceObservation => ({
   dieCents: centsPerInch * 10,
   currency: 'USD',
   ruleLengthIn: 10,
@@ -54,7 +58,9 @@ describe('priceTrend', () => {
   });
 
   it('refuses mixed currencies and bad dates', () => {
-    expect(() => priceTrend([die('2026-01-01', 1), { ...die('2026-01-01', 1), currency: 'JPY' }])).toThrow(/mix currencies/);
+    expect(() => priceTrend([die('2026-01-01', 1), { ...die('2026-01-01', 1), currency: 'JPY' }])).toThrow(
+      /mix currencies/,
+    );
     expect(() => priceTrend([die('2026-1-1', 1)])).toThrow(/pricedOn/);
   });
 });

@@ -29,7 +29,10 @@ const quarterName = (index: number) => `${Math.floor(index / 4)}-Q${(index % 4) 
  * `comparedWith`). `complexity` keeps one class, so a shift between simple and complex dies is
  * not read as a price change. Throws on a bad record or mixed currencies.
  */
-export function priceTrend(records: readonly PriceObservation[], opts: { complexity?: PriceObservation['complexity'] } = {}): PriceTrend {
+export function priceTrend(
+  records: readonly PriceObservation[],
+  opts: { complexity?: PriceObservation['complexity'] } = {},
+): PriceTrend {
   const currency = checkObservations(records);
   const kept = opts.complexity ? records.filter((r) => r.complexity === opts.complexity) : records;
   const byQuarter = new Map<number, number[]>();

@@ -9,12 +9,17 @@ import { fitOls, newRowLeverage, type OlsFit } from './regression';
 // from xKDR/NISTTests.jl (MIT licence); see tests/reference/nist-strd/README.md.
 function readNist(name: string): { x: number[][]; y: number[] } {
   const url = new URL(`../../../tests/reference/nist-strd/${name}`, import.meta.url);
-  const rows = readFileSync(url, 'utf8').trim().split('\n').slice(1).map((line) => line.split(',').map(Number));
+  const rows = readFileSync(url, 'utf8')
+    .trim()
+    .split('\n')
+    .slice(1)
+    .map((line) => line.split(',').map(Number));
   return { x: rows.map((r) => r.slice(1)), y: rows.map((r) => r[0]!) };
 }
 
 const relative = (got: number, want: number) => Math.abs(got - want) / Math.abs(want);
-const maxRelative = (got: readonly number[], want: readonly number[]) => Math.max(...want.map((w, i) => relative(got[i]!, w)));
+const maxRelative = (got: readonly number[], want: readonly number[]) =>
+  Math.max(...want.map((w, i) => relative(got[i]!, w)));
 
 function fitted(x: number[][], y: number[]): OlsFit {
   const fit = fitOls(x, y);
@@ -45,8 +50,14 @@ describe('fitOls on NIST StRD Longley (certified values)', () => {
   const { x, y } = readNist('longley.csv');
   const fit = fitted(x, y);
   it('matches the certified coefficients and standard deviations', () => {
-    const certified = [-3482258.63459582, 15.0618722713733, -0.35819179292591e-1, -2.02022980381683, -1.03322686717359, -0.511041056535807e-1, 1829.15146461355];
-    const certifiedSd = [890420.383607373, 84.9149257747669, 0.334910077722432e-1, 0.488399681651699, 0.214274163161675, 0.22607320006937, 455.478499142212];
+    const certified = [
+      -3482258.63459582, 15.0618722713733, -0.35819179292591e-1, -2.02022980381683, -1.03322686717359,
+      -0.511041056535807e-1, 1829.15146461355,
+    ];
+    const certifiedSd = [
+      890420.383607373, 84.9149257747669, 0.334910077722432e-1, 0.488399681651699, 0.214274163161675, 0.22607320006937,
+      455.478499142212,
+    ];
     expect(maxRelative(fit.coefficients, certified)).toBeLessThan(NIST_TOLERANCE);
     expect(maxRelative(fit.standardErrors, certifiedSd)).toBeLessThan(NIST_TOLERANCE);
   });
@@ -82,7 +93,12 @@ describe('fitOls against mathjs on seeded random data', () => {
     expect(maxRelative(fit.coefficients, beta)).toBeLessThan(1e-9);
     const residuals = y.map((v, i) => v - (multiply(X[i]!, beta) as number));
     const s2 = residuals.reduce((sum, e) => sum + e * e, 0) / (200 - 4);
-    expect(maxRelative(fit.standardErrors, xtxInverse.map((row, j) => Math.sqrt(s2 * row[j]!)))).toBeLessThan(1e-9);
+    expect(
+      maxRelative(
+        fit.standardErrors,
+        xtxInverse.map((row, j) => Math.sqrt(s2 * row[j]!)),
+      ),
+    ).toBeLessThan(1e-9);
     expect(relative(fit.residualStandardError, Math.sqrt(s2))).toBeLessThan(1e-9);
   });
 
@@ -98,12 +114,30 @@ describe('fitOls against mathjs on seeded random data', () => {
 
 describe('fitOls with too little or degenerate data', () => {
   it('says how many observations it needs', () => {
-    expect(fitOls([[1], [2]], [1, 2])).toEqual({ enough: false, reason: expect.stringContaining('at least 3'), needed: 3 });
+    expect(fitOls([[1], [2]], [1, 2])).toEqual({
+      enough: false,
+      reason: expect.stringContaining('at least 3'),
+      needed: 3,
+    });
     expect(fitOls([], [])).toMatchObject({ enough: false, needed: 2 });
   });
   it('refuses a constant or collinear predictor', () => {
-    expect(fitOls([[5], [5], [5], [5]], [1, 2, 3, 4])).toMatchObject({ enough: false, reason: expect.stringContaining('degenerate') });
-    expect(fitOls([[1, 2], [2, 4], [3, 6], [4, 8], [5, 10]], [1, 3, 2, 5, 4])).toMatchObject({ enough: false, reason: expect.stringContaining('predictor 2') });
+    expect(fitOls([[5], [5], [5], [5]], [1, 2, 3, 4])).toMatchObject({
+      enough: false,
+      reason: expect.stringContaining('degenerate'),
+    });
+    expect(
+      fitOls(
+        [
+          [1, 2],
+          [2, 4],
+          [3, 6],
+          [4, 8],
+          [5, 10],
+        ],
+        [1, 3, 2, 5, 4],
+      ),
+    ).toMatchObject({ enough: false, reason: expect.stringContaining('predictor 2') });
   });
   it('refuses malformed input with a clear error', () => {
     expect(() => fitOls([[1], [2]], [1])).toThrow(/2 rows of predictors for 1 responses/);

@@ -44,7 +44,12 @@ export function fitOls(predictors: readonly (readonly number[])[], response: rea
     if (!row.every(Number.isFinite)) throw new RangeError(`Row ${i} has a predictor that is not a finite number`);
   });
   if (!response.every(Number.isFinite)) throw new RangeError('A response is not a finite number');
-  if (n < needed) return { enough: false, reason: `${n} observations for ${p} coefficients; least squares needs at least ${needed}`, needed };
+  if (n < needed)
+    return {
+      enough: false,
+      reason: `${n} observations for ${p} coefficients; least squares needs at least ${needed}`,
+      needed,
+    };
 
   const X = new Matrix(predictors.map((row) => [1, ...row]));
   const qr = new QrDecomposition(X);
@@ -57,7 +62,11 @@ export function fitOls(predictors: readonly (readonly number[])[], response: rea
     const columnLength = columnLengths[j]!;
     if (columnLength === 0 || Math.abs(R.get(j, j)) < RANK_TOLERANCE * columnLength) {
       const what = j === 0 ? 'the intercept' : `predictor ${j}`;
-      return { enough: false, reason: `The predictors are degenerate: ${what} is a linear combination of the others (or constant)`, needed };
+      return {
+        enough: false,
+        reason: `The predictors are degenerate: ${what} is a linear combination of the others (or constant)`,
+        needed,
+      };
     }
   }
 
@@ -101,6 +110,7 @@ export function fitOls(predictors: readonly (readonly number[])[], response: rea
  */
 export function newRowLeverage(fit: Pick<OlsFit, 'unscaledCovariance'>, predictors: readonly number[]): number {
   const x0 = Matrix.columnVector([1, ...predictors]);
-  if (x0.rows !== fit.unscaledCovariance.length) throw new RangeError(`Expected ${fit.unscaledCovariance.length - 1} predictors, got ${predictors.length}`);
+  if (x0.rows !== fit.unscaledCovariance.length)
+    throw new RangeError(`Expected ${fit.unscaledCovariance.length - 1} predictors, got ${predictors.length}`);
   return x0.transpose().mmul(new Matrix(fit.unscaledCovariance)).mmul(x0).get(0, 0);
 }

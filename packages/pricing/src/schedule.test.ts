@@ -32,16 +32,25 @@ describe('working days', () => {
     expect(workingDaysBetween('2026-12-31', '2027-12-31')).toBe(261);
     expect(workingDaysBetween('2027-12-31', '2026-12-31')).toBe(-261);
     // 1 January 2027 and 25 December 2027 (a Saturday: no working day lost) as holidays.
-    expect(workingDaysBetween('2026-12-31', '2027-12-31', new Set(['2027-01-01', '2027-12-25', 'not a date']))).toBe(260);
+    expect(workingDaysBetween('2026-12-31', '2027-12-31', new Set(['2027-01-01', '2027-12-25', 'not a date']))).toBe(
+      260,
+    );
   });
 
   it('counts back exactly what adding working days stepped over, day by day', () => {
-    const day = fc.integer({ min: 0, max: 3000 }).map((n) => new Date(Date.UTC(2025, 0, 1) + n * 86_400_000).toISOString().slice(0, 10));
+    const day = fc
+      .integer({ min: 0, max: 3000 })
+      .map((n) => new Date(Date.UTC(2025, 0, 1) + n * 86_400_000).toISOString().slice(0, 10));
     fc.assert(
-      fc.property(day, fc.integer({ min: -400, max: 400 }), fc.uniqueArray(day, { maxLength: 12 }), (start, n, holidays) => {
-        const set = new Set(holidays);
-        expect(workingDaysBetween(start, addWorkingDays(start, n, set), set)).toBe(n);
-      }),
+      fc.property(
+        day,
+        fc.integer({ min: -400, max: 400 }),
+        fc.uniqueArray(day, { maxLength: 12 }),
+        (start, n, holidays) => {
+          const set = new Set(holidays);
+          expect(workingDaysBetween(start, addWorkingDays(start, n, set), set)).toBe(n);
+        },
+      ),
       { seed: 2026, numRuns: 500 },
     );
   });
@@ -63,7 +72,13 @@ describe('die-cutting run and need-by date', () => {
     // Today Mon 7 Dec, lead 5 working days → die ready Mon 14 Dec. A 20-hour run is 3 shifts
     // of 8 hours; need-by Fri 18 Dec → latest arrival 3 working days before: Tue 15 Dec.
     const check = checkNeedBy({ today: '2026-12-07', needByDate: '2026-12-18', leadDays: 5, runHours: 20 });
-    expect(check).toEqual({ dieReadyBy: '2026-12-14', runDays: 3, latestArrival: '2026-12-15', slackDays: 1, ok: true });
+    expect(check).toEqual({
+      dieReadyBy: '2026-12-14',
+      runDays: 3,
+      latestArrival: '2026-12-15',
+      slackDays: 1,
+      ok: true,
+    });
   });
 
   it('flags a need-by date that is too close', () => {
@@ -78,7 +93,14 @@ describe('die-cutting run and need-by date', () => {
 describe('checkArrival', () => {
   it('judges a known ship date against the need-by date and the run', () => {
     // Ships Wed 16 Dec; a 16-hour run is 2 shifts; need-by Fri 18 Dec → latest arrival Wed 16 Dec.
-    expect(checkArrival({ needByDate: '2026-12-18', dieReadyBy: '2026-12-16', runHours: 16 })).toMatchObject({ latestArrival: '2026-12-16', slackDays: 0, ok: true });
-    expect(checkArrival({ needByDate: '2026-12-18', dieReadyBy: '2026-12-17', runHours: 16 })).toMatchObject({ slackDays: -1, ok: false });
+    expect(checkArrival({ needByDate: '2026-12-18', dieReadyBy: '2026-12-16', runHours: 16 })).toMatchObject({
+      latestArrival: '2026-12-16',
+      slackDays: 0,
+      ok: true,
+    });
+    expect(checkArrival({ needByDate: '2026-12-18', dieReadyBy: '2026-12-17', runHours: 16 })).toMatchObject({
+      slackDays: -1,
+      ok: false,
+    });
   });
 });

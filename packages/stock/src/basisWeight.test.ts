@@ -2,14 +2,21 @@ import { describe, expect, it } from 'vitest';
 import { BASIS_SIZES_IN, basisWeightToGsm, GRAMS_PER_POUND, gsmToBasisWeight, type PaperGrade } from './basisWeight';
 
 /** True when a and b agree to `digits` significant digits. */
-const agreesTo = (a: number, b: number, digits: number) => Math.abs(a - b) <= 0.5 * 10 ** (Math.floor(Math.log10(Math.abs(b))) - digits + 1);
+const agreesTo = (a: number, b: number, digits: number) =>
+  Math.abs(a - b) <= 0.5 * 10 ** (Math.floor(Math.log10(Math.abs(b))) - digits + 1);
 
 describe('basisWeightToGsm', () => {
   it('matches the published g/m² per pound of each grade to 5 significant digits', () => {
     // Published conversion tables (common practice) give g/m² per lb of basis weight:
     // text 25 × 38 in 1.48015; cover 20 × 26 in 2.70411; bristol 22.5 × 28.5 in 2.19281;
     // index 25.5 × 30.5 in 1.80796; bond 17 × 22 in 3.75973.
-    const table: Record<PaperGrade, number> = { text: 1.48015, cover: 2.70411, bristol: 2.19281, index: 1.80796, bond: 3.75973 };
+    const table: Record<PaperGrade, number> = {
+      text: 1.48015,
+      cover: 2.70411,
+      bristol: 2.19281,
+      index: 1.80796,
+      bond: 3.75973,
+    };
     for (const [grade, perPound] of Object.entries(table) as Array<[PaperGrade, number]>) {
       expect(agreesTo(basisWeightToGsm(1, grade), perPound, 5), `${grade}: ${basisWeightToGsm(1, grade)}`).toBe(true);
     }
@@ -38,7 +45,9 @@ describe('basisWeightToGsm', () => {
     // 5000 g/m² is the limit: arithmetic, 5000 / 2.70411 = 1849.03 lb cover.
     expect(basisWeightToGsm(1849, 'cover')).toBeLessThan(5000);
     expect(() => basisWeightToGsm(1850, 'cover')).toThrow(/at most 1849 lb cover/);
-    expect(() => basisWeightToGsm(50, 'card' as PaperGrade)).toThrow(/grade must be one of text, cover, bristol, index, bond/);
+    expect(() => basisWeightToGsm(50, 'card' as PaperGrade)).toThrow(
+      /grade must be one of text, cover, bristol, index, bond/,
+    );
   });
 });
 

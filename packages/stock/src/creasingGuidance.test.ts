@@ -36,16 +36,25 @@ describe('creasingGuidance', () => {
     const g = creasingGuidance({ caliperIn: halfMm, stockKind: 'paperboard' });
     expect(g.channelFactor).toBe(1.5);
     expect(g.warnings).toEqual([
-      { code: 'grain-not-given', text: 'The grain direction is not given, so the channel uses the wider factor (1.5); with the grain parallel to the crease it would be 1.3.' },
+      {
+        code: 'grain-not-given',
+        text: 'The grain direction is not given, so the channel uses the wider factor (1.5); with the grain parallel to the crease it would be 1.3.',
+      },
     ]);
-    expect(creasingGuidance({ caliperIn: halfMm, stockKind: 'paperboard', grainParallelToCrease: null }).channelFactor).toBe(1.5);
+    expect(
+      creasingGuidance({ caliperIn: halfMm, stockKind: 'paperboard', grainParallelToCrease: null }).channelFactor,
+    ).toBe(1.5);
   });
 
   it('treats paper like paperboard', () => {
     // Common practice gives factors for paperboard only; paper takes them. Arithmetic for 0.008 in
     // paper, grain parallel: 1.3 × 0.008 + 0.028 = 0.0384 in = 0.97536 mm → 0.98 mm; across: 1.5 × 0.008 + 0.028 = 0.04 in = 1.016 mm → 1.02 mm.
-    expect(creasingGuidance({ caliperIn: 0.008, stockKind: 'paper', grainParallelToCrease: true }).channelWidth).toEqual({ in: 0.038, mm: 0.98 });
-    expect(creasingGuidance({ caliperIn: 0.008, stockKind: 'paper', grainParallelToCrease: false }).channelWidth).toEqual({ in: 0.04, mm: 1.02 });
+    expect(
+      creasingGuidance({ caliperIn: 0.008, stockKind: 'paper', grainParallelToCrease: true }).channelWidth,
+    ).toEqual({ in: 0.038, mm: 0.98 });
+    expect(
+      creasingGuidance({ caliperIn: 0.008, stockKind: 'paper', grainParallelToCrease: false }).channelWidth,
+    ).toEqual({ in: 0.04, mm: 1.02 });
   });
 
   it('uses a 3 pt rule for heavier board', () => {
@@ -69,33 +78,75 @@ describe('creasingGuidance', () => {
     expect(parallel.channelFactor).toBe(1.8);
     expect(parallel.channelWidth.mm).toBe(4.28);
     // Arithmetic: 6 pt = 0.084 in × 25.4 = 2.1336 mm → 2.13 mm.
-    expect(creasingGuidance({ caliperIn: 0.16, stockKind: 'corrugated', grainParallelToCrease: false }).rule).toEqual({ points: 6, thickness: { in: 0.084, mm: 2.13 } });
+    expect(creasingGuidance({ caliperIn: 0.16, stockKind: 'corrugated', grainParallelToCrease: false }).rule).toEqual({
+      points: 6,
+      thickness: { in: 0.084, mm: 2.13 },
+    });
   });
 
   it('takes the cutting rule height given', () => {
     // Arithmetic: 0.918 − 0.020 = 0.898 in = 22.8092 mm → 22.81 mm.
-    const g = creasingGuidance({ caliperIn: 0.02, stockKind: 'paperboard', grainParallelToCrease: true, ruleHeightIn: 0.918 });
+    const g = creasingGuidance({
+      caliperIn: 0.02,
+      stockKind: 'paperboard',
+      grainParallelToCrease: true,
+      ruleHeightIn: 0.918,
+    });
     expect(g.creasingRuleHeight).toEqual({ in: 0.898, mm: 22.81 });
   });
 
   it('warns when the nearest rule is closer than about 3/32 in (2.4 mm)', () => {
     // Common practice: rules closer than about 3/32 in (2.4 mm) are hard to make. Arithmetic: 3/32 in = 0.09375 in.
-    const close = creasingGuidance({ caliperIn: 0.02, stockKind: 'paperboard', grainParallelToCrease: true, nearestRuleGapIn: 0.08 });
+    const close = creasingGuidance({
+      caliperIn: 0.02,
+      stockKind: 'paperboard',
+      grainParallelToCrease: true,
+      nearestRuleGapIn: 0.08,
+    });
     expect(close.warnings).toEqual([
-      { code: 'rules-too-close', text: 'The nearest rule is 2.03 mm away: rules closer than about 3/32 in (2.4 mm) are hard to make.' },
+      {
+        code: 'rules-too-close',
+        text: 'The nearest rule is 2.03 mm away: rules closer than about 3/32 in (2.4 mm) are hard to make.',
+      },
     ]);
-    expect(creasingGuidance({ caliperIn: 0.02, stockKind: 'paperboard', grainParallelToCrease: true, nearestRuleGapIn: 0.09375 }).warnings).toEqual([]);
-    expect(creasingGuidance({ caliperIn: 0.02, stockKind: 'paperboard', grainParallelToCrease: true, nearestRuleGapIn: null }).warnings).toEqual([]);
+    expect(
+      creasingGuidance({
+        caliperIn: 0.02,
+        stockKind: 'paperboard',
+        grainParallelToCrease: true,
+        nearestRuleGapIn: 0.09375,
+      }).warnings,
+    ).toEqual([]);
+    expect(
+      creasingGuidance({
+        caliperIn: 0.02,
+        stockKind: 'paperboard',
+        grainParallelToCrease: true,
+        nearestRuleGapIn: null,
+      }).warnings,
+    ).toEqual([]);
   });
 
   it('refuses bad input, naming the field', () => {
     expect(() => creasingGuidance({ caliperIn: 0, stockKind: 'paperboard' })).toThrow(/caliperIn must be more than 0/);
     expect(() => creasingGuidance({ caliperIn: 0.6, stockKind: 'paperboard' })).toThrow(/caliperIn .* at most 0.5 in/);
-    expect(() => creasingGuidance({ caliperIn: Number.NaN, stockKind: 'paperboard' })).toThrow(/caliperIn must be a number/);
-    expect(() => creasingGuidance({ caliperIn: 0.02, stockKind: 'card' as StockKind })).toThrow(/stockKind must be one of/);
-    expect(() => creasingGuidance({ caliperIn: 0.02, stockKind: 'paper', grainParallelToCrease: 'yes' as unknown as boolean })).toThrow(/grainParallelToCrease/);
-    expect(() => creasingGuidance({ caliperIn: 0.3, stockKind: 'corrugated', ruleHeightIn: 0.25 })).toThrow(/ruleHeightIn must be more than 0.3/);
-    expect(() => creasingGuidance({ caliperIn: 0.02, stockKind: 'paperboard', ruleHeightIn: 4 })).toThrow(/ruleHeightIn .* at most 3 in/);
-    expect(() => creasingGuidance({ caliperIn: 0.02, stockKind: 'paperboard', nearestRuleGapIn: -1 })).toThrow(/nearestRuleGapIn must be more than 0/);
+    expect(() => creasingGuidance({ caliperIn: Number.NaN, stockKind: 'paperboard' })).toThrow(
+      /caliperIn must be a number/,
+    );
+    expect(() => creasingGuidance({ caliperIn: 0.02, stockKind: 'card' as StockKind })).toThrow(
+      /stockKind must be one of/,
+    );
+    expect(() =>
+      creasingGuidance({ caliperIn: 0.02, stockKind: 'paper', grainParallelToCrease: 'yes' as unknown as boolean }),
+    ).toThrow(/grainParallelToCrease/);
+    expect(() => creasingGuidance({ caliperIn: 0.3, stockKind: 'corrugated', ruleHeightIn: 0.25 })).toThrow(
+      /ruleHeightIn must be more than 0.3/,
+    );
+    expect(() => creasingGuidance({ caliperIn: 0.02, stockKind: 'paperboard', ruleHeightIn: 4 })).toThrow(
+      /ruleHeightIn .* at most 3 in/,
+    );
+    expect(() => creasingGuidance({ caliperIn: 0.02, stockKind: 'paperboard', nearestRuleGapIn: -1 })).toThrow(
+      /nearestRuleGapIn must be more than 0/,
+    );
   });
 });

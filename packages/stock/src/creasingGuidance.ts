@@ -68,8 +68,15 @@ export function creasingGuidance(input: CreasingInput): CreasingGuidance {
   if (parallel !== null && typeof parallel !== 'boolean') {
     throw new RangeError(`grainParallelToCrease must be true, false or not given (got ${String(parallel)})`);
   }
-  const ruleHeightIn = checkNumber('ruleHeightIn', input.ruleHeightIn ?? CUTTING_RULE_HEIGHT_IN, { above: caliperIn, atMost: MAX_RULE_HEIGHT_IN, unit: 'in' });
-  const gapIn = input.nearestRuleGapIn == null ? null : checkNumber('nearestRuleGapIn', input.nearestRuleGapIn, { above: 0, atMost: MAX_RULE_GAP_IN, unit: 'in' });
+  const ruleHeightIn = checkNumber('ruleHeightIn', input.ruleHeightIn ?? CUTTING_RULE_HEIGHT_IN, {
+    above: caliperIn,
+    atMost: MAX_RULE_HEIGHT_IN,
+    unit: 'in',
+  });
+  const gapIn =
+    input.nearestRuleGapIn == null
+      ? null
+      : checkNumber('nearestRuleGapIn', input.nearestRuleGapIn, { above: 0, atMost: MAX_RULE_GAP_IN, unit: 'in' });
 
   const points = creasingRuleFor(caliperIn, stockKind);
   const thicknessIn = RULE_THICKNESS_IN[points];

@@ -3,14 +3,24 @@ import { GUIDANCE_NOTE } from './guidanceNote';
 import { HEAVY_STOCK_CALIPER_IN, HEAVY_STOCK_GSM, scoringAdvice, type ScoringInput } from './scoringAdvice';
 
 const codes = (input: ScoringInput) => scoringAdvice(input).reasons.map((r) => r.code);
-const lightAlongGrain: ScoringInput = { stockWeightGsm: 120, foldAcrossGrain: false, heavyInkOnFold: false, colourBreakOnFold: false };
+const lightAlongGrain: ScoringInput = {
+  stockWeightGsm: 120,
+  foldAcrossGrain: false,
+  heavyInkOnFold: false,
+  colourBreakOnFold: false,
+};
 
 describe('scoringAdvice', () => {
   it('scores a fold across the grain', () => {
     // Common practice: folds across the grain crack and should be scored.
     const advice = scoringAdvice({ ...lightAlongGrain, foldAcrossGrain: true });
     expect(advice.verdict).toBe('score');
-    expect(advice.reasons).toEqual([{ code: 'across-grain', text: 'The fold runs across the grain, where the fibres crack unless the fold is scored first.' }]);
+    expect(advice.reasons).toEqual([
+      {
+        code: 'across-grain',
+        text: 'The fold runs across the grain, where the fibres crack unless the fold is scored first.',
+      },
+    ]);
   });
 
   it('scores heavy ink coverage or a colour break on the fold', () => {
@@ -41,7 +51,12 @@ describe('scoringAdvice', () => {
   });
 
   it('gives every reason that calls for scoring', () => {
-    const advice = scoringAdvice({ stockWeightGsm: 300, foldAcrossGrain: true, heavyInkOnFold: true, colourBreakOnFold: true });
+    const advice = scoringAdvice({
+      stockWeightGsm: 300,
+      foldAcrossGrain: true,
+      heavyInkOnFold: true,
+      colourBreakOnFold: true,
+    });
     expect(advice.reasons.map((r) => r.code)).toEqual(['across-grain', 'heavy-stock', 'heavy-ink', 'colour-break']);
   });
 
@@ -70,7 +85,9 @@ describe('scoringAdvice', () => {
 
   it('says unknown when nothing is given', () => {
     expect(scoringAdvice({}).verdict).toBe('unknown');
-    expect(codes({ caliperIn: null, stockWeightGsm: null, grain: null, foldAcrossGrain: null, stockKind: 'paper' })).toEqual(['nothing-given']);
+    expect(
+      codes({ caliperIn: null, stockWeightGsm: null, grain: null, foldAcrossGrain: null, stockKind: 'paper' }),
+    ).toEqual(['nothing-given']);
   });
 
   it('carries the guidance note on every answer', () => {
@@ -87,7 +104,9 @@ describe('scoringAdvice', () => {
     expect(() => scoringAdvice({ stockWeightGsm: 6000 })).toThrow(/stockWeightGsm .* at most 5000 g\/m²/);
     expect(() => scoringAdvice({ caliperIn: -0.01 })).toThrow(/caliperIn must be more than 0/);
     expect(() => scoringAdvice({ caliperIn: Number.NaN })).toThrow(/caliperIn must be a number/);
-    expect(() => scoringAdvice({ foldAcrossGrain: 'yes' as unknown as boolean })).toThrow(/foldAcrossGrain must be true, false or not given/);
+    expect(() => scoringAdvice({ foldAcrossGrain: 'yes' as unknown as boolean })).toThrow(
+      /foldAcrossGrain must be true, false or not given/,
+    );
     expect(() => scoringAdvice({ heavyInkOnFold: 1 as unknown as boolean })).toThrow(/heavyInkOnFold/);
     expect(() => scoringAdvice({ grain: 'cross' as 'long' })).toThrow(/grain must be long or short/);
     expect(() => scoringAdvice({ stockKind: 'card' as 'paper' })).toThrow(/stockKind must be one of/);

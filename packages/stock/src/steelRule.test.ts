@@ -31,6 +31,8 @@ describe('creasingRuleFor', () => {
   it('refuses a bad caliper or stock kind', () => {
     expect(() => creasingRuleFor(0, 'paperboard')).toThrow(/caliperIn must be more than 0/);
     expect(() => creasingRuleFor(0.6, 'corrugated')).toThrow(/caliperIn must be more than 0 and at most 0.5 in/);
-    expect(() => creasingRuleFor(0.02, 'card' as StockKind)).toThrow(/stockKind must be one of paper, paperboard, corrugated/);
+    expect(() => creasingRuleFor(0.02, 'card' as StockKind)).toThrow(
+      /stockKind must be one of paper, paperboard, corrugated/,
+    );
   });
 });

@@ -16,9 +16,18 @@ export const CUTTING_RULE_HEIGHT_IN = 0.937;
  * single-wall E and B flute) takes a 4 pt rule, thicker corrugated a 6 pt rule.
  */
 const BANDS: Readonly<Record<StockKind, ReadonlyArray<{ upToIn: number; points: RulePoints }>>> = {
-  paper: [{ upToIn: 0.024, points: 2 }, { upToIn: Infinity, points: 3 }],
-  paperboard: [{ upToIn: 0.024, points: 2 }, { upToIn: Infinity, points: 3 }],
-  corrugated: [{ upToIn: 0.125, points: 4 }, { upToIn: Infinity, points: 6 }],
+  paper: [
+    { upToIn: 0.024, points: 2 },
+    { upToIn: Infinity, points: 3 },
+  ],
+  paperboard: [
+    { upToIn: 0.024, points: 2 },
+    { upToIn: Infinity, points: 3 },
+  ],
+  corrugated: [
+    { upToIn: 0.125, points: 4 },
+    { upToIn: Infinity, points: 6 },
+  ],
 };
 
 /** The creasing rule, in points, the trade would usually pick for this caliper and stock. */

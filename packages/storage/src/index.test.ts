@@ -26,7 +26,7 @@ describe('storage on the S3 fake', () => {
     const res = await fetch(url);
     expect(res.status).toBe(200);
     expect(await res.text()).toBe('0\nEOF\n');
-    expect(res.headers.get('content-disposition')).toContain("carton%20front.dxf");
+    expect(res.headers.get('content-disposition')).toContain('carton%20front.dxf');
     await new Promise((r) => setTimeout(r, 2100));
     expect((await fetch(url)).status).toBe(403);
   });

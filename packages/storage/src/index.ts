@@ -54,7 +54,15 @@ export function createStorage(config: StorageConfig): Storage {
 
   return {
     async put(key, body, contentType) {
-      await client.send(new PutObjectCommand({ Bucket, Key: key, Body: body, ContentType: contentType, ContentLength: body.byteLength }));
+      await client.send(
+        new PutObjectCommand({
+          Bucket,
+          Key: key,
+          Body: body,
+          ContentType: contentType,
+          ContentLength: body.byteLength,
+        }),
+      );
     },
     async get(key) {
       const result = await client.send(new GetObjectCommand({ Bucket, Key: key }));

@@ -97,7 +97,15 @@ export async function up(knex: Knex): Promise<void> {
 }
 
 export async function down(knex: Knex): Promise<void> {
-  for (const table of ['email_outbox', 'audit_log', 'revoked_tokens', 'presses', 'invitations', 'users', 'organisations']) {
+  for (const table of [
+    'email_outbox',
+    'audit_log',
+    'revoked_tokens',
+    'presses',
+    'invitations',
+    'users',
+    'organisations',
+  ]) {
     await knex.schema.dropTableIfExists(table);
   }
 }

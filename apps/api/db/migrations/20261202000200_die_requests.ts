@@ -7,9 +7,10 @@ export async function up(knex: Knex): Promise<void> {
     t.integer('created_by').references('users.id').onDelete('SET NULL');
     t.text('title').notNullable();
     t.text('job_reference');
-    t.text('status').notNullable().defaultTo('draft').checkIn([
-      'draft', 'open', 'bidding_closed', 'awarded', 'in_production', 'shipped', 'received', 'cancelled',
-    ]);
+    t.text('status')
+      .notNullable()
+      .defaultTo('draft')
+      .checkIn(['draft', 'open', 'bidding_closed', 'awarded', 'in_production', 'shipped', 'received', 'cancelled']);
     t.integer('quantity').notNullable().defaultTo(1);
     t.integer('ups').notNullable().defaultTo(1);
     t.decimal('piece_width_in', 8, 3);
@@ -58,7 +59,9 @@ export async function up(knex: Knex): Promise<void> {
     t.timestamp('uploaded_at', { useTz: true }).notNullable().defaultTo(knex.fn.now());
     t.index(['request_id']);
   });
-  await knex.raw("CREATE INDEX dieline_files_waiting ON dieline_files (uploaded_at) WHERE analysis_status IN ('pending', 'analysing')");
+  await knex.raw(
+    "CREATE INDEX dieline_files_waiting ON dieline_files (uploaded_at) WHERE analysis_status IN ('pending', 'analysing')",
+  );
 
   await knex.schema.createTable('request_invitations', (t) => {
     t.integer('request_id').notNullable().references('die_requests.id').onDelete('CASCADE');

@@ -131,11 +131,28 @@ export async function up(knex: Knex): Promise<void> {
 }
 
 export async function down(knex: Knex): Promise<void> {
-  for (const table of ['price_records', 'notifications', 'awards', 'request_declines', 'shop_holidays', 'bid_revisions', 'bids']) {
+  for (const table of [
+    'price_records',
+    'notifications',
+    'awards',
+    'request_declines',
+    'shop_holidays',
+    'bid_revisions',
+    'bids',
+  ]) {
     await knex.schema.dropTableIfExists(table);
   }
   await knex.raw('DROP SEQUENCE IF EXISTS purchase_order_numbers');
   await knex.schema.alterTable('die_requests', (t) => {
-    t.dropColumns('bidding_closed_at', 'closed_early', 'production_started_at', 'shipped_at', 'tracking_note', 'received_at', 'received_condition', 'received_notes');
+    t.dropColumns(
+      'bidding_closed_at',
+      'closed_early',
+      'production_started_at',
+      'shipped_at',
+      'tracking_note',
+      'received_at',
+      'received_condition',
+      'received_notes',
+    );
   });
 }

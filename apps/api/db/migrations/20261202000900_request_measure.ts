@@ -35,7 +35,9 @@ export async function up(knex: Knex): Promise<void> {
 
 export async function down(knex: Knex): Promise<void> {
   await knex.raw('drop trigger if exists dieline_files_measure on dieline_files');
-  await knex.raw('drop function if exists dieline_files_measure(); drop function if exists refresh_request_measure(integer)');
+  await knex.raw(
+    'drop function if exists dieline_files_measure(); drop function if exists refresh_request_measure(integer)',
+  );
   await knex.schema.alterTable('die_requests', (t) => {
     t.dropColumn('measured_rule_in');
     t.dropColumn('measured_complexity');

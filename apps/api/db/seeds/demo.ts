@@ -40,9 +40,30 @@ export const demoOrganisations: DemoOrg[] = [
       { email: 'priya@larkspur.example', name: 'Priya Raman', role: 'admin' },
     ],
     presses: [
-      { name: 'Platen 1 (22 × 30)', kind: 'platen', maxSheetWidthIn: 22, maxSheetLengthIn: 30, typicalSpeedSph: 4000, maxSpeedSph: 5500 },
-      { name: 'Flatbed A (28 × 40)', kind: 'flatbed', maxSheetWidthIn: 28, maxSheetLengthIn: 40, typicalSpeedSph: 5000, maxSpeedSph: 7800 },
-      { name: 'Old platen (20 × 28)', kind: 'platen', maxSheetWidthIn: 20, maxSheetLengthIn: 28, typicalSpeedSph: 2000, maxSpeedSph: 2800 },
+      {
+        name: 'Platen 1 (22 × 30)',
+        kind: 'platen',
+        maxSheetWidthIn: 22,
+        maxSheetLengthIn: 30,
+        typicalSpeedSph: 4000,
+        maxSpeedSph: 5500,
+      },
+      {
+        name: 'Flatbed A (28 × 40)',
+        kind: 'flatbed',
+        maxSheetWidthIn: 28,
+        maxSheetLengthIn: 40,
+        typicalSpeedSph: 5000,
+        maxSpeedSph: 7800,
+      },
+      {
+        name: 'Old platen (20 × 28)',
+        kind: 'platen',
+        maxSheetWidthIn: 20,
+        maxSheetLengthIn: 28,
+        typicalSpeedSph: 2000,
+        maxSpeedSph: 2800,
+      },
     ],
   },
   {
@@ -56,7 +77,14 @@ export const demoOrganisations: DemoOrg[] = [
       { email: 'ruth@tidewater.example', name: 'Ruth Adeyemi', role: 'admin' },
     ],
     presses: [
-      { name: 'Flatbed 1 (23 × 29)', kind: 'flatbed', maxSheetWidthIn: 23, maxSheetLengthIn: 29, typicalSpeedSph: 4500, maxSpeedSph: 6000 },
+      {
+        name: 'Flatbed 1 (23 × 29)',
+        kind: 'flatbed',
+        maxSheetWidthIn: 23,
+        maxSheetLengthIn: 29,
+        typicalSpeedSph: 4500,
+        maxSpeedSph: 6000,
+      },
     ],
   },
   {
@@ -111,7 +139,22 @@ const demoRequests: DemoRequest[] = [
     title: 'Straight tuck-end carton, 2 up',
     status: 'open',
     press: 'Platen 1 (22 × 30)',
-    fields: { quantity: 1, ups: 2, pieceWidthIn: 2.5, pieceHeightIn: 6, stockName: '18 pt C1S SBS board', caliperIn: 0.018, stockWeightGsm: 300, grain: 'long', runSheets: 12000, ruleTypes: ['cut', 'crease'], counterWanted: true, deliveryAddress: '2200 N Clybourn Ave, Chicago IL', deliveryPostcode: '60614', notes: 'Nicks at the glue flap corners only, please.' },
+    fields: {
+      quantity: 1,
+      ups: 2,
+      pieceWidthIn: 2.5,
+      pieceHeightIn: 6,
+      stockName: '18 pt C1S SBS board',
+      caliperIn: 0.018,
+      stockWeightGsm: 300,
+      grain: 'long',
+      runSheets: 12000,
+      ruleTypes: ['cut', 'crease'],
+      counterWanted: true,
+      deliveryAddress: '2200 N Clybourn Ave, Chicago IL',
+      deliveryPostcode: '60614',
+      notes: 'Nicks at the glue flap corners only, please.',
+    },
     deadlineDays: 5,
     needByDays: 21,
     dieline: { name: 'tuck-end-carton-2up.dxf', content: tuckEndCarton },
@@ -122,7 +165,18 @@ const demoRequests: DemoRequest[] = [
     title: 'Rounded label sheet, 12 up, kiss cut',
     status: 'open',
     press: 'Platen 1 (22 × 30)',
-    fields: { quantity: 2, ups: 12, pieceWidthIn: 3.5, pieceHeightIn: 1.5, stockName: '60 lb semi-gloss label stock', caliperIn: 0.006, runSheets: 5000, ruleTypes: ['cut', 'kiss'], ejectionRubberWanted: false, deliveryPostcode: '60614' },
+    fields: {
+      quantity: 2,
+      ups: 12,
+      pieceWidthIn: 3.5,
+      pieceHeightIn: 1.5,
+      stockName: '60 lb semi-gloss label stock',
+      caliperIn: 0.006,
+      runSheets: 5000,
+      ruleTypes: ['cut', 'kiss'],
+      ejectionRubberWanted: false,
+      deliveryPostcode: '60614',
+    },
     deadlineDays: 2,
     // Tight on purpose: five working days of lead time and the run do not fit in six days.
     needByDays: 6,
@@ -135,7 +189,17 @@ const demoRequests: DemoRequest[] = [
     title: 'Door hanger with perforated coupon',
     status: 'draft',
     press: 'Old platen (20 × 28)',
-    fields: { quantity: 1, ups: 1, pieceWidthIn: 4.25, pieceHeightIn: 12, stockName: '14 pt C2S cover', caliperIn: 0.014, runSheets: 20000, ruleTypes: ['cut', 'perf'], deliveryPostcode: '60614' },
+    fields: {
+      quantity: 1,
+      ups: 1,
+      pieceWidthIn: 4.25,
+      pieceHeightIn: 12,
+      stockName: '14 pt C2S cover',
+      caliperIn: 0.014,
+      runSheets: 20000,
+      ruleTypes: ['cut', 'perf'],
+      deliveryPostcode: '60614',
+    },
     deadlineDays: 6,
     needByDays: 12,
     dieline: { name: 'door-hanger.dxf', content: doorHanger },
@@ -146,7 +210,15 @@ const demoRequests: DemoRequest[] = [
     title: 'Retail carton for tea, 2 up',
     status: 'open',
     press: 'Flatbed 1 (23 × 29)',
-    fields: { quantity: 1, ups: 2, stockName: '20 pt SBS', caliperIn: 0.02, runSheets: 30000, ruleTypes: ['cut', 'crease'], deliveryPostcode: '23510' },
+    fields: {
+      quantity: 1,
+      ups: 2,
+      stockName: '20 pt SBS',
+      caliperIn: 0.02,
+      runSheets: 30000,
+      ruleTypes: ['cut', 'crease'],
+      deliveryPostcode: '23510',
+    },
     deadlineDays: 4,
     needByDays: 25,
     dieline: { name: 'tea-carton.dxf', content: tuckEndCarton },
@@ -159,7 +231,15 @@ const atDays = (days: number) => new Date(Date.now() + days * 86_400_000);
 async function storeDemoDieline(
   knex: Knex,
   storage: Storage,
-  file: { requestId: number; uploadedBy: number; fileName: string; content: string; metrics: unknown; preview: unknown; uploadedAt?: Date },
+  file: {
+    requestId: number;
+    uploadedBy: number;
+    fileName: string;
+    content: string;
+    metrics: unknown;
+    preview: unknown;
+    uploadedAt?: Date;
+  },
 ): Promise<void> {
   const s3Key = `requests/${file.requestId}/demo/${file.fileName}`;
   await storage.put(s3Key, new TextEncoder().encode(file.content), 'application/dxf');
@@ -212,20 +292,82 @@ async function seedRequests(knex: Knex, storage: Storage): Promise<void> {
       const shop = await knex('organisations').where({ name: shopName }).first();
       await knex('requestInvitations').insert({ requestId: id, shopId: shop.id });
     }
-    await storeDemoDieline(knex, storage, { requestId: id, uploadedBy: buyer.id, fileName: demo.dieline.name, content, metrics, preview });
-    await knex('auditLog').insert({ organisationId: org.id, actorUserId: buyer.id, entity: 'die_request', entityId: id, action: 'created', detail: JSON.stringify({ demo: true }) });
+    await storeDemoDieline(knex, storage, {
+      requestId: id,
+      uploadedBy: buyer.id,
+      fileName: demo.dieline.name,
+      content,
+      metrics,
+      preview,
+    });
+    await knex('auditLog').insert({
+      organisationId: org.id,
+      actorUserId: buyer.id,
+      entity: 'die_request',
+      entityId: id,
+      action: 'created',
+      detail: JSON.stringify({ demo: true }),
+    });
   }
 }
 
 // Past dies that Larkspur bought and received: awarded bids, purchase orders and the price
 // history they left. Prices are invented for the demo.
 const pastDies = [
-  { title: 'Pizza box, 1 up', shop: 'Brightline Rule & Die', dieline: tuckEndCarton, dieCents: 118_500, extrasCents: 14_000, monthsAgo: 11, lateDays: 0 },
-  { title: 'Shelf talker with perforation', shop: 'Okafor Steel Rule Dies', dieline: doorHanger, dieCents: 42_000, extrasCents: 3_500, monthsAgo: 9, lateDays: 2 },
-  { title: 'Sample-pack label sheet', shop: 'Cedar Bend Die Works', dieline: labelSheet, dieCents: 64_500, extrasCents: 5_000, monthsAgo: 7, lateDays: 0 },
-  { title: 'Folding carton for candles', shop: 'Brightline Rule & Die', dieline: tuckEndCarton, dieCents: 109_000, extrasCents: 12_500, monthsAgo: 5, lateDays: 0 },
-  { title: 'Hang tag, 12 up', shop: 'Okafor Steel Rule Dies', dieline: labelSheet, dieCents: 71_000, extrasCents: 4_000, monthsAgo: 3, lateDays: 0 },
-  { title: 'Hotel door hanger', shop: 'Cedar Bend Die Works', dieline: doorHanger, dieCents: 39_500, extrasCents: 3_500, monthsAgo: 2, lateDays: 1 },
+  {
+    title: 'Pizza box, 1 up',
+    shop: 'Brightline Rule & Die',
+    dieline: tuckEndCarton,
+    dieCents: 118_500,
+    extrasCents: 14_000,
+    monthsAgo: 11,
+    lateDays: 0,
+  },
+  {
+    title: 'Shelf talker with perforation',
+    shop: 'Okafor Steel Rule Dies',
+    dieline: doorHanger,
+    dieCents: 42_000,
+    extrasCents: 3_500,
+    monthsAgo: 9,
+    lateDays: 2,
+  },
+  {
+    title: 'Sample-pack label sheet',
+    shop: 'Cedar Bend Die Works',
+    dieline: labelSheet,
+    dieCents: 64_500,
+    extrasCents: 5_000,
+    monthsAgo: 7,
+    lateDays: 0,
+  },
+  {
+    title: 'Folding carton for candles',
+    shop: 'Brightline Rule & Die',
+    dieline: tuckEndCarton,
+    dieCents: 109_000,
+    extrasCents: 12_500,
+    monthsAgo: 5,
+    lateDays: 0,
+  },
+  {
+    title: 'Hang tag, 12 up',
+    shop: 'Okafor Steel Rule Dies',
+    dieline: labelSheet,
+    dieCents: 71_000,
+    extrasCents: 4_000,
+    monthsAgo: 3,
+    lateDays: 0,
+  },
+  {
+    title: 'Hotel door hanger',
+    shop: 'Cedar Bend Die Works',
+    dieline: doorHanger,
+    dieCents: 39_500,
+    extrasCents: 3_500,
+    monthsAgo: 2,
+    lateDays: 1,
+  },
 ];
 
 /** Open bids from two shops on the demo tuck-end carton, so a board and a comparison have content. */
@@ -250,35 +392,124 @@ async function seedHistory(knex: Knex, storage: Storage): Promise<void> {
     const total = past.dieCents + past.extrasCents;
     const [{ id: requestId }] = await knex('dieRequests')
       .insert({
-        organisationId: org.id, createdBy: purchasing.id, title: past.title, jobReference: `LPC-2${3100 + i}`, status: 'received',
-        quantity: 1, ups: 1, stockName: '18 pt SBS', caliperIn: 0.018, ruleTypes: ['cut', 'crease'], pressId: press.id,
-        needByDate: day(atDays(-past.monthsAgo * 30 + 14)), bidDeadline: atDays(-past.monthsAgo * 30 - 3), deliveryPostcode: '60614',
-        publishedAt: atDays(-past.monthsAgo * 30 - 10), biddingClosedAt: atDays(-past.monthsAgo * 30 - 3),
-        shippedAt: atDays(-past.monthsAgo * 30 + 7 + past.lateDays), receivedAt: atDays(-past.monthsAgo * 30 + 9 + past.lateDays), receivedCondition: 'good',
+        organisationId: org.id,
+        createdBy: purchasing.id,
+        title: past.title,
+        jobReference: `LPC-2${3100 + i}`,
+        status: 'received',
+        quantity: 1,
+        ups: 1,
+        stockName: '18 pt SBS',
+        caliperIn: 0.018,
+        ruleTypes: ['cut', 'crease'],
+        pressId: press.id,
+        needByDate: day(atDays(-past.monthsAgo * 30 + 14)),
+        bidDeadline: atDays(-past.monthsAgo * 30 - 3),
+        deliveryPostcode: '60614',
+        publishedAt: atDays(-past.monthsAgo * 30 - 10),
+        biddingClosedAt: atDays(-past.monthsAgo * 30 - 3),
+        shippedAt: atDays(-past.monthsAgo * 30 + 7 + past.lateDays),
+        receivedAt: atDays(-past.monthsAgo * 30 + 9 + past.lateDays),
+        receivedCondition: 'good',
         createdAt: atDays(-past.monthsAgo * 30 - 12),
       })
       .returning('id');
     const uploadedAt = atDays(-past.monthsAgo * 30 - 12);
-    await storeDemoDieline(knex, storage, { requestId, uploadedBy: purchasing.id, fileName: `${past.dieline.name.replace(/[A-Z]/g, (c) => `-${c.toLowerCase()}`)}.dxf`, content, metrics, preview, uploadedAt });
-    const lines = [{ kind: 'die', description: 'Steel-rule die', amountCents: past.dieCents }, { kind: 'shipping', description: 'Ground', amountCents: past.extrasCents }];
+    await storeDemoDieline(knex, storage, {
+      requestId,
+      uploadedBy: purchasing.id,
+      fileName: `${past.dieline.name.replace(/[A-Z]/g, (c) => `-${c.toLowerCase()}`)}.dxf`,
+      content,
+      metrics,
+      preview,
+      uploadedAt,
+    });
+    const lines = [
+      { kind: 'die', description: 'Steel-rule die', amountCents: past.dieCents },
+      { kind: 'shipping', description: 'Ground', amountCents: past.extrasCents },
+    ];
     const [{ id: bidId }] = await knex('bids')
-      .insert({ requestId, shopId: shop.id, status: 'submitted', revision: 1, lines: JSON.stringify(lines), currency: 'USD', totalCents: total, dieCents: past.dieCents, leadDays: 5, promisedShipDate: day(promised), validUntil: day(atDays(-past.monthsAgo * 30 + 30)), submittedAt: atDays(-past.monthsAgo * 30 - 5) })
+      .insert({
+        requestId,
+        shopId: shop.id,
+        status: 'submitted',
+        revision: 1,
+        lines: JSON.stringify(lines),
+        currency: 'USD',
+        totalCents: total,
+        dieCents: past.dieCents,
+        leadDays: 5,
+        promisedShipDate: day(promised),
+        validUntil: day(atDays(-past.monthsAgo * 30 + 30)),
+        submittedAt: atDays(-past.monthsAgo * 30 - 5),
+      })
       .returning('id');
-    await knex('bidRevisions').insert({ bidId, revision: 1, action: 'submitted', lines: JSON.stringify(lines), currency: 'USD', totalCents: total, leadDays: 5, promisedShipDate: day(promised), validUntil: day(atDays(-past.monthsAgo * 30 + 30)), createdBy: estimator.id, createdAt: atDays(-past.monthsAgo * 30 - 5) });
+    await knex('bidRevisions').insert({
+      bidId,
+      revision: 1,
+      action: 'submitted',
+      lines: JSON.stringify(lines),
+      currency: 'USD',
+      totalCents: total,
+      leadDays: 5,
+      promisedShipDate: day(promised),
+      validUntil: day(atDays(-past.monthsAgo * 30 + 30)),
+      createdBy: estimator.id,
+      createdAt: atDays(-past.monthsAgo * 30 - 5),
+    });
     const { nextval } = (await knex.raw("SELECT nextval('purchase_order_numbers') AS nextval")).rows[0];
     const [{ id: awardId }] = await knex('awards')
-      .insert({ requestId, bidId, shopId: shop.id, revision: 1, totalCents: total, dieCents: past.dieCents, currency: 'USD', leadDays: 5, promisedShipDate: day(promised), awardedBy: purchasing.id, awardedAt, poNumber: `PO-${awardedAt.getUTCFullYear()}-${String(nextval).padStart(5, '0')}` })
+      .insert({
+        requestId,
+        bidId,
+        shopId: shop.id,
+        revision: 1,
+        totalCents: total,
+        dieCents: past.dieCents,
+        currency: 'USD',
+        leadDays: 5,
+        promisedShipDate: day(promised),
+        awardedBy: purchasing.id,
+        awardedAt,
+        poNumber: `PO-${awardedAt.getUTCFullYear()}-${String(nextval).padStart(5, '0')}`,
+      })
       .returning('id');
     // The received die went into storage: rack, impressions run since, a life the buyer set.
     await knex('libraryDies').insert({
-      organisationId: org.id, name: `${past.title} (LPC-2${3100 + i})`, requestId, ups: 1, ruleTypes: ['cut', 'crease'], pressId: press.id,
-      storageLocation: `Rack ${String.fromCharCode(65 + (i % 3))}-${10 + i}`, impressions: [182_000, 64_500, 12_000, 240_000, 31_000, 8_000][i] ?? 0,
-      impressionLimit: 250_000, lastUsedOn: day(atDays(-past.monthsAgo * 10)), metrics: JSON.stringify(metrics), preview: JSON.stringify(preview),
+      organisationId: org.id,
+      name: `${past.title} (LPC-2${3100 + i})`,
+      requestId,
+      ups: 1,
+      ruleTypes: ['cut', 'crease'],
+      pressId: press.id,
+      storageLocation: `Rack ${String.fromCharCode(65 + (i % 3))}-${10 + i}`,
+      impressions: [182_000, 64_500, 12_000, 240_000, 31_000, 8_000][i] ?? 0,
+      impressionLimit: 250_000,
+      lastUsedOn: day(atDays(-past.monthsAgo * 10)),
+      metrics: JSON.stringify(metrics),
+      preview: JSON.stringify(preview),
     });
     await knex('priceRecords').insert({
-      organisationId: org.id, requestId, awardId, shopId: shop.id, shopName: shop.name, totalCents: total, dieCents: past.dieCents, currency: 'USD', pricedOn: day(awardedAt),
-      ruleLengthIn: pricedLength(metrics.length), cutIn: metrics.length.cut, creaseIn: metrics.length.crease, perfIn: metrics.length.perf, kissIn: metrics.length.kiss,
-      bends: metrics.bends, curves: metrics.curves, joints: metrics.joints, punches: metrics.punches, boardAreaSqIn: metrics.board.width * metrics.board.height, complexity: metrics.complexity,
+      organisationId: org.id,
+      requestId,
+      awardId,
+      shopId: shop.id,
+      shopName: shop.name,
+      totalCents: total,
+      dieCents: past.dieCents,
+      currency: 'USD',
+      pricedOn: day(awardedAt),
+      ruleLengthIn: pricedLength(metrics.length),
+      cutIn: metrics.length.cut,
+      creaseIn: metrics.length.crease,
+      perfIn: metrics.length.perf,
+      kissIn: metrics.length.kiss,
+      bends: metrics.bends,
+      curves: metrics.curves,
+      joints: metrics.joints,
+      punches: metrics.punches,
+      boardAreaSqIn: metrics.board.width * metrics.board.height,
+      complexity: metrics.complexity,
     });
   }
   // Two years of earlier dies the buyer kept in a spreadsheet, as if imported: invented prices
@@ -289,7 +520,9 @@ async function seedHistory(knex: Knex, storage: Storage): Promise<void> {
   const imported = Array.from({ length: 48 }, (_, i) => {
     const ruleLengthIn = Math.round(40 + rand() * 320);
     // One die in three is intricate: many bends per inch of rule, so the analysis calls it complex.
-    const bends = Math.round(rand() * ruleLengthIn * (i % 3 === 0 ? 0.6 : 0.3) + (i % 3 === 0 ? ruleLengthIn * 0.9 : 0));
+    const bends = Math.round(
+      rand() * ruleLengthIn * (i % 3 === 0 ? 0.6 : 0.3) + (i % 3 === 0 ? ruleLengthIn * 0.9 : 0),
+    );
     const curves = Math.round(rand() * 20);
     const joints = Math.round(rand() * 30);
     const punches = Math.round(rand() * 6);
@@ -297,7 +530,21 @@ async function seedHistory(knex: Knex, storage: Storage): Promise<void> {
     const complexity = features / ruleLengthIn > 1 ? 'complex' : 'simple';
     const dieCents = Math.round((18_000 + 420 * ruleLengthIn + 650 * features) * (0.9 + rand() * 0.2) * (1 + i / 480));
     const pricedOn = day(atDays(-730 + i * 14));
-    return { organisationId: org.id, shopName: shops[i % shops.length], totalCents: dieCents + 3_500, dieCents, currency: 'USD', pricedOn, ruleLengthIn, bends, curves, joints, punches, complexity, source: 'import' };
+    return {
+      organisationId: org.id,
+      shopName: shops[i % shops.length],
+      totalCents: dieCents + 3_500,
+      dieCents,
+      currency: 'USD',
+      pricedOn,
+      ruleLengthIn,
+      bends,
+      curves,
+      joints,
+      punches,
+      complexity,
+      source: 'import',
+    };
   });
   await knex('priceRecords').insert(imported);
 
@@ -305,14 +552,41 @@ async function seedHistory(knex: Knex, storage: Storage): Promise<void> {
     const request = await knex('dieRequests').where({ jobReference: demo.jobReference }).first();
     const shop = await knex('organisations').where({ name: demo.shop }).first();
     const estimator = await knex('users').where({ organisationId: shop.id, role: 'estimator' }).first();
-    const lines = [{ kind: 'die', description: 'Steel-rule die on 5/8 in board', amountCents: demo.dieCents }, { kind: 'counter', description: 'Phenolic counter', amountCents: 18_000 }, { kind: 'shipping', description: 'Ground', amountCents: 4_500 }];
+    const lines = [
+      { kind: 'die', description: 'Steel-rule die on 5/8 in board', amountCents: demo.dieCents },
+      { kind: 'counter', description: 'Phenolic counter', amountCents: 18_000 },
+      { kind: 'shipping', description: 'Ground', amountCents: 4_500 },
+    ];
     const total = demo.dieCents + 22_500;
     const shipDate = addWorkingDays(new Date().toISOString().slice(0, 10), demo.leadDays);
     const validUntil = atDays(45).toISOString().slice(0, 10);
     const [{ id: bidId }] = await knex('bids')
-      .insert({ requestId: request.id, shopId: shop.id, status: 'submitted', revision: 1, lines: JSON.stringify(lines), currency: 'USD', totalCents: total, dieCents: demo.dieCents, leadDays: demo.leadDays, promisedShipDate: shipDate, validUntil })
+      .insert({
+        requestId: request.id,
+        shopId: shop.id,
+        status: 'submitted',
+        revision: 1,
+        lines: JSON.stringify(lines),
+        currency: 'USD',
+        totalCents: total,
+        dieCents: demo.dieCents,
+        leadDays: demo.leadDays,
+        promisedShipDate: shipDate,
+        validUntil,
+      })
       .returning('id');
-    await knex('bidRevisions').insert({ bidId, revision: 1, action: 'submitted', lines: JSON.stringify(lines), currency: 'USD', totalCents: total, leadDays: demo.leadDays, promisedShipDate: shipDate, validUntil, createdBy: estimator.id });
+    await knex('bidRevisions').insert({
+      bidId,
+      revision: 1,
+      action: 'submitted',
+      lines: JSON.stringify(lines),
+      currency: 'USD',
+      totalCents: total,
+      leadDays: demo.leadDays,
+      promisedShipDate: shipDate,
+      validUntil,
+      createdBy: estimator.id,
+    });
   }
 }
 

@@ -25,7 +25,8 @@ describe('request status transitions', () => {
     for (const status of requestStatuses) {
       for (const action of actions) {
         const listed = requestTransitions.some((t) => t.from === status && t.action === action);
-        if (!listed) expect(transitionRefusal(purchasing, to(status), action).refusal?.message).toMatch(/cannot be moved/);
+        if (!listed)
+          expect(transitionRefusal(purchasing, to(status), action).refusal?.message).toMatch(/cannot be moved/);
       }
     }
     expect(openActions(purchasing, to('received'), NOW)).toEqual(['answer']);
@@ -37,7 +38,10 @@ describe('request status transitions', () => {
   });
 
   it('checks the side and the role: another shop’s job is a 404', () => {
-    expect(transitionRefusal(buyer, to('open'), 'close-bidding').refusal).toMatchObject({ status: 403, message: /Only purchasing, admin/ });
+    expect(transitionRefusal(buyer, to('open'), 'close-bidding').refusal).toMatchObject({
+      status: 403,
+      message: /Only purchasing, admin/,
+    });
     expect(transitionRefusal(otherPrinter, to('draft'), 'publish').refusal).toMatchObject({ status: 403 });
     expect(transitionRefusal(loser, to('awarded'), 'start-production').refusal).toMatchObject({ status: 404 });
     expect(transitionRefusal(purchasing, to('in_production'), 'ship').refusal).toMatchObject({ status: 403 });
@@ -48,7 +52,14 @@ describe('the actions open now', () => {
   it('lists the buttons each user may press', () => {
     expect(openActions(buyer, facts('draft'), NOW).sort()).toEqual(['answer', 'cancel', 'edit', 'publish']);
     expect(openActions(buyer, facts('open'), NOW).sort()).toEqual(['answer', 'cancel', 'edit', 'move-deadline-later']);
-    expect(openActions(purchasing, facts('open'), NOW).sort()).toEqual(['answer', 'cancel', 'close-bidding', 'edit', 'move-deadline-earlier', 'move-deadline-later']);
+    expect(openActions(purchasing, facts('open'), NOW).sort()).toEqual([
+      'answer',
+      'cancel',
+      'close-bidding',
+      'edit',
+      'move-deadline-earlier',
+      'move-deadline-later',
+    ]);
     expect(openActions(winner, to('awarded'), NOW)).toEqual(['start-production']);
     expect(openActions(loser, to('awarded'), NOW)).toEqual([]);
   });
@@ -62,11 +73,17 @@ describe('the actions open now', () => {
 
   it('award: purchasing, once bids are opened by the clock or by closing early; never on a cancelled request', () => {
     expect(actionRefusal(buyer, pastDeadline('open'), 'award', NOW)?.status).toBe(403);
-    expect(actionRefusal(purchasing, facts('open'), 'award', NOW)).toMatchObject({ status: 409, message: /still sealed/ });
+    expect(actionRefusal(purchasing, facts('open'), 'award', NOW)).toMatchObject({
+      status: 409,
+      message: /still sealed/,
+    });
     expect(actionRefusal(purchasing, pastDeadline('open'), 'award', NOW)).toBeNull();
     expect(actionRefusal(purchasing, facts('bidding_closed'), 'award', NOW)).toBeNull();
     expect(actionRefusal(purchasing, facts('cancelled'), 'award', NOW)?.status).toBe(409);
-    expect(actionRefusal(purchasing, to('awarded'), 'award', NOW)).toMatchObject({ status: 409, message: /already been awarded/ });
+    expect(actionRefusal(purchasing, to('awarded'), 'award', NOW)).toMatchObject({
+      status: 409,
+      message: /already been awarded/,
+    });
   });
 
   it('edits stop at the deadline: the bids rest on the request as it was', () => {

@@ -22,14 +22,25 @@ export type RequestAction =
 const notFound: Refusal = { status: 404, message: 'That die request was not found.' };
 
 /** The transition-table rule: the move exists from this status, and the right side and role make it. */
-export function transitionRefusal(actor: Actor, f: RequestFacts, action: string): { transition?: Transition; refusal?: Refusal } {
+export function transitionRefusal(
+  actor: Actor,
+  f: RequestFacts,
+  action: string,
+): { transition?: Transition; refusal?: Refusal } {
   const transition = findTransition(f.status, action);
-  if (!transition) return { refusal: { status: 409, message: `A request that is ${requestStatusLabels[f.status].toLowerCase()} cannot be moved that way.` } };
+  if (!transition)
+    return {
+      refusal: {
+        status: 409,
+        message: `A request that is ${requestStatusLabels[f.status].toLowerCase()} cannot be moved that way.`,
+      },
+    };
   const side = transition.actor === 'printer' ? isOwner(actor, f) : isAwardedShop(actor, f);
   // Another shop's job is none of a shop's business: the same 404 as a record it cannot see.
   if (!side && transition.actor === 'awarded_shop' && actor.orgKind === 'die_shop') return { refusal: notFound };
   if (!side) return { refusal: { status: 403, message: 'Your organisation cannot make this change.' } };
-  if (!transition.roles.includes(actor.role)) return { refusal: { status: 403, message: `Only ${transition.roles.join(', ')} users can do this.` } };
+  if (!transition.roles.includes(actor.role))
+    return { refusal: { status: 403, message: `Only ${transition.roles.join(', ')} users can do this.` } };
   return { transition };
 }
 
@@ -42,25 +53,43 @@ export function actionRefusal(actor: Actor, f: RequestFacts, action: RequestActi
   const owner = isOwner(actor, f);
   const open = biddingOpen(f, now);
   const printerOnly = (ok: boolean, message: string): Refusal | null =>
-    !owner ? { status: 403, message: 'Only the printer that posted the request can do this.' } : ok ? null : { status: 409, message };
+    !owner
+      ? { status: 403, message: 'Only the printer that posted the request can do this.' }
+      : ok
+        ? null
+        : { status: 409, message };
   const shopOnly = (ok: boolean, message: string): Refusal | null =>
-    actor.orgKind !== 'die_shop' ? { status: 403, message: 'Only die shops can do this.' } : ok ? null : { status: 409, message };
+    actor.orgKind !== 'die_shop'
+      ? { status: 403, message: 'Only die shops can do this.' }
+      : ok
+        ? null
+        : { status: 409, message };
   switch (action) {
     case 'edit':
       // After the deadline the bids rest on the request as it was.
-      return printerOnly(f.status === 'draft' || open, 'Only a draft, or an open request before its deadline, can be changed.');
+      return printerOnly(
+        f.status === 'draft' || open,
+        'Only a draft, or an open request before its deadline, can be changed.',
+      );
     case 'move-deadline-later':
       return printerOnly(open, 'Bidding has closed: the deadline can no longer move.');
     case 'move-deadline-earlier':
-      if (owner && !isPurchasing(actor)) return { status: 403, message: 'Only purchasing can bring a bid deadline forward.' };
+      if (owner && !isPurchasing(actor))
+        return { status: 403, message: 'Only purchasing can bring a bid deadline forward.' };
       return printerOnly(open, 'Bidding has closed: the deadline can no longer move.');
     case 'answer':
       return printerOnly(true, '');
     case 'bid':
-      return shopOnly(open && !isBidder(actor, f), open ? 'Your shop has already bid on this request: revise that bid instead.' : 'This request is not open for bids.');
+      return shopOnly(
+        open && !isBidder(actor, f),
+        open
+          ? 'Your shop has already bid on this request: revise that bid instead.'
+          : 'This request is not open for bids.',
+      );
     case 'revise':
     case 'withdraw':
-      if (actor.orgKind === 'die_shop' && !isBidder(actor, f)) return { status: 404, message: 'That bid was not found.' };
+      if (actor.orgKind === 'die_shop' && !isBidder(actor, f))
+        return { status: 404, message: 'That bid was not found.' };
       return shopOnly(open, 'Bidding on this request has closed.');
     case 'ask':
       return shopOnly(open, 'Questions close with bidding.');
@@ -84,7 +113,15 @@ export function actionRefusal(actor: Actor, f: RequestFacts, action: RequestActi
 
 const ACTIONS: RequestAction[] = [
   ...new Set(requestTransitions.map((t) => t.action as StatusAction)),
-  'edit', 'move-deadline-later', 'move-deadline-earlier', 'answer', 'bid', 'revise', 'withdraw', 'ask', 'decline',
+  'edit',
+  'move-deadline-later',
+  'move-deadline-earlier',
+  'answer',
+  'bid',
+  'revise',
+  'withdraw',
+  'ask',
+  'decline',
 ];
 
 /** The actions open to the actor on the request now: the web app's buttons. */

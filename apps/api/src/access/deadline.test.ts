@@ -11,7 +11,8 @@ describe('moving an open request’s bid deadline', () => {
   const open = facts('open'); // deadline a week away
 
   it('later: its buyer or purchasing', () => {
-    for (const who of [buyer, purchasing, admin]) expect(deadlineMoveRefusal(who, open, at(14 * 24 * HOUR), NOW)).toBeNull();
+    for (const who of [buyer, purchasing, admin])
+      expect(deadlineMoveRefusal(who, open, at(14 * 24 * HOUR), NOW)).toBeNull();
   });
 
   it('earlier: purchasing only, and never to less than 24 hours from now', () => {

@@ -25,7 +25,11 @@ export function deadlineMoveRefusal(actor: Actor, f: RequestFacts, to: Date | nu
   if (to.getTime() >= from) return null;
   if (!isPurchasing(actor)) return { status: 403, message: 'Only purchasing can bring a bid deadline forward.' };
   if (to.getTime() < now.getTime() + MIN_DEADLINE_NOTICE_MS) {
-    return { status: 400, message: 'An earlier deadline must leave the shops at least 24 hours.', field: 'bidDeadline' };
+    return {
+      status: 400,
+      message: 'An earlier deadline must leave the shops at least 24 hours.',
+      field: 'bidDeadline',
+    };
   }
   return null;
 }

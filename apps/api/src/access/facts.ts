@@ -34,4 +34,5 @@ export const isAwardedShop = (actor: Actor, f: Pick<RequestFacts, 'awardedShopId
   actor.orgKind === 'die_shop' && f.awardedShopId !== null && actor.organisationId === f.awardedShopId;
 
 /** Purchasing's powers at a printer: its purchasing users and its admins. */
-export const isPurchasing = (actor: Actor) => actor.orgKind === 'printer' && (actor.role === 'purchasing' || actor.role === 'admin');
+export const isPurchasing = (actor: Actor) =>
+  actor.orgKind === 'printer' && (actor.role === 'purchasing' || actor.role === 'admin');

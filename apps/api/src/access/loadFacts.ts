@@ -42,5 +42,12 @@ export async function loadFacts(
     trx('awards').where({ requestId }).first('shopId'),
   ]);
   const ids = (rows: Array<{ shopId: number }>) => rows.map((r) => r.shopId);
-  return { request, facts: factsOf(request, { invitedShopIds: ids(invited), bidderShopIds: ids(bidders), awardedShopId: award?.shopId ?? null }) };
+  return {
+    request,
+    facts: factsOf(request, {
+      invitedShopIds: ids(invited),
+      bidderShopIds: ids(bidders),
+      awardedShopId: award?.shopId ?? null,
+    }),
+  };
 }

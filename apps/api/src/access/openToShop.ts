@@ -12,7 +12,9 @@ interface Conditions {
  */
 export function openToShop(knex: Knex, shopId: number, table = 'die_requests') {
   return (q: Conditions) =>
-    q.where(`${table}.visibility`, 'public').orWhereIn(`${table}.id`, knex('request_invitations').where('shop_id', shopId).select('request_id'));
+    q
+      .where(`${table}.visibility`, 'public')
+      .orWhereIn(`${table}.id`, knex('request_invitations').where('shop_id', shopId).select('request_id'));
 }
 
 /**
@@ -21,5 +23,8 @@ export function openToShop(knex: Knex, shopId: number, table = 'die_requests') {
  */
 export function biddableByShop(knex: Knex, shopId: number, table = 'die_requests') {
   return (q: Knex.QueryBuilder) =>
-    q.where(`${table}.status`, 'open').where(`${table}.bid_deadline`, '>', knex.fn.now()).where(openToShop(knex, shopId, table));
+    q
+      .where(`${table}.status`, 'open')
+      .where(`${table}.bid_deadline`, '>', knex.fn.now())
+      .where(openToShop(knex, shopId, table));
 }

@@ -7,13 +7,27 @@ import { primaryFile, toFileDto, toPressDto, toSummary } from '../services/reque
 
 /** The parts of a request's page that differ by audience; the presenters fill them in. */
 export type AudienceFields =
-  | 'deliveryAddress' | 'invitedShops' | 'questions' | 'allowedActions' | 'isOwner' | 'biddingOpen' | 'myBid' | 'outcome'
-  | 'award' | 'trackingNote' | 'receivedAt' | 'receivedCondition' | 'lateFlaggedAt';
+  | 'deliveryAddress'
+  | 'invitedShops'
+  | 'questions'
+  | 'allowedActions'
+  | 'isOwner'
+  | 'biddingOpen'
+  | 'myBid'
+  | 'outcome'
+  | 'award'
+  | 'trackingNote'
+  | 'receivedAt'
+  | 'receivedCondition'
+  | 'lateFlaggedAt';
 
 /** What every audience that may see a request sees of it: the job, the stock, the press, the dieline. */
 export function requestFields(request: DieRequest, actor: AuthUser): Omit<DieRequestDetail, AudienceFields> {
   const file = primaryFile(request.files);
-  const board = file?.analysisStatus === 'done' ? (file.metrics as { board?: { width: number; height: number } } | null)?.board : undefined;
+  const board =
+    file?.analysisStatus === 'done'
+      ? (file.metrics as { board?: { width: number; height: number } } | null)?.board
+      : undefined;
   const press = request.press ?? null;
   const fits =
     board && press
@@ -22,7 +36,15 @@ export function requestFields(request: DieRequest, actor: AuthUser): Omit<DieReq
       : null;
   const hours = press && request.runSheets ? runHours(request.runSheets, press.typicalSpeedSph) : null;
   const needBy = request.needByDate
-    ? { runHours: hours, ...checkNeedBy({ today: todayIn(actor.timeZone), needByDate: request.needByDate, leadDays: request.plannedLeadDays, runHours: hours ?? 0 }) }
+    ? {
+        runHours: hours,
+        ...checkNeedBy({
+          today: todayIn(actor.timeZone),
+          needByDate: request.needByDate,
+          leadDays: request.plannedLeadDays,
+          runHours: hours ?? 0,
+        }),
+      }
     : null;
   return {
     ...toSummary(request),

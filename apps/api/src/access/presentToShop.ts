@@ -14,7 +14,13 @@ const MAKING: readonly string[] = ['in_production', 'shipped', 'received'];
  * after the award only whether it won; the winner also gets its terms, the delivery address and
  * the die's way there. Never another shop's anything, nor the invited shops.
  */
-export function presentToShop(request: DieRequest, facts: RequestFacts, actor: AuthUser, myBid: BidDto | null, now: Date): DieRequestDetail {
+export function presentToShop(
+  request: DieRequest,
+  facts: RequestFacts,
+  actor: AuthUser,
+  myBid: BidDto | null,
+  now: Date,
+): DieRequestDetail {
   const parts = visibleParts(actor, facts, now);
   const award = request.award ?? null;
   const won = parts.award === 'own-terms';
@@ -27,7 +33,9 @@ export function presentToShop(request: DieRequest, facts: RequestFacts, actor: A
     shippedAt: parts.delivery ? fields.shippedAt : null,
     deliveryAddress: parts.delivery ? request.deliveryAddress : null,
     invitedShops: [],
-    questions: (request.questions ?? []).filter((q) => q.answer !== null || q.shopId === actor.organisationId).map((q) => questionDto(actor, q)),
+    questions: (request.questions ?? [])
+      .filter((q) => q.answer !== null || q.shopId === actor.organisationId)
+      .map((q) => questionDto(actor, q)),
     allowedActions: openActions(actor, facts, now),
     isOwner: false,
     biddingOpen: biddingOpen(facts, now),
@@ -35,7 +43,15 @@ export function presentToShop(request: DieRequest, facts: RequestFacts, actor: A
     outcome: parts.award === 'none' ? null : won ? 'won' : 'not_awarded',
     award:
       award && won
-        ? { id: award.id, poNumber: award.poNumber, shopName: null, totalCents: award.totalCents, currency: award.currency, promisedShipDate: award.promisedShipDate, reason: null }
+        ? {
+            id: award.id,
+            poNumber: award.poNumber,
+            shopName: null,
+            totalCents: award.totalCents,
+            currency: award.currency,
+            promisedShipDate: award.promisedShipDate,
+            reason: null,
+          }
         : null,
     trackingNote: parts.delivery ? request.trackingNote : null,
     receivedAt: parts.delivery ? (request.receivedAt?.toISOString() ?? null) : null,

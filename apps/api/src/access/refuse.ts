@@ -7,7 +7,12 @@ const CODES = { 400: 'validation_failed', 403: 'forbidden', 404: 'not_found', 40
 
 /** A refusal as the API answers it. */
 export function refuse(refusal: Refusal, code?: string): HttpError {
-  return new HttpError(refusal.status, code ?? CODES[refusal.status], refusal.message, refusal.field ? { [refusal.field]: refusal.message } : undefined);
+  return new HttpError(
+    refusal.status,
+    code ?? CODES[refusal.status],
+    refusal.message,
+    refusal.field ? { [refusal.field]: refusal.message } : undefined,
+  );
 }
 
 /** Throws unless the actor may take the action on the request now. */

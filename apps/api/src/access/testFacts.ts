@@ -7,7 +7,11 @@ export const NOW = new Date('2026-12-02T12:00:00Z');
 export const HOUR = 3_600_000;
 
 export const printer = (role: Role, organisationId = 10): Actor => ({ organisationId, orgKind: 'printer', role });
-export const shop = (organisationId: number, role: Role = 'estimator'): Actor => ({ organisationId, orgKind: 'die_shop', role });
+export const shop = (organisationId: number, role: Role = 'estimator'): Actor => ({
+  organisationId,
+  orgKind: 'die_shop',
+  role,
+});
 
 export const facts = (status: RequestStatus, over: Partial<RequestFacts> = {}): RequestFacts => ({
   organisationId: 10,
@@ -22,4 +26,5 @@ export const facts = (status: RequestStatus, over: Partial<RequestFacts> = {}): 
 });
 
 /** The request of `facts(status)` once its deadline passed by the clock. */
-export const pastDeadline = (status: RequestStatus, over: Partial<RequestFacts> = {}) => facts(status, { bidDeadline: new Date(NOW.getTime() - HOUR), ...over });
+export const pastDeadline = (status: RequestStatus, over: Partial<RequestFacts> = {}) =>
+  facts(status, { bidDeadline: new Date(NOW.getTime() - HOUR), ...over });

@@ -20,8 +20,18 @@ describe('visibleTo and maySee', () => {
     const made: number[] = [];
     const make = async (status: RequestStatus, opts: { visibility?: 'public' | 'invited'; bid?: boolean } = {}) => {
       const { id } = await createOpenRequest(w);
-      if (opts.bid) expect((await request(app).post(`/api/requests/${id}/bids`).set('Authorization', `Bearer ${w.tokens.estimator}`).send(bidBody(50_000))).status).toBe(201);
-      await DieRequest.query().patch({ status, visibility: opts.visibility ?? 'public' }).findById(id);
+      if (opts.bid)
+        expect(
+          (
+            await request(app)
+              .post(`/api/requests/${id}/bids`)
+              .set('Authorization', `Bearer ${w.tokens.estimator}`)
+              .send(bidBody(50_000))
+          ).status,
+        ).toBe(201);
+      await DieRequest.query()
+        .patch({ status, visibility: opts.visibility ?? 'public' })
+        .findById(id);
       await knex('requestInvitations').insert({ requestId: id, shopId: invited.shop.id });
       made.push(id);
     };

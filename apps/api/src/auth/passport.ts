@@ -61,7 +61,9 @@ export function createPassport(secret: string, knex: Knex): passport.PassportSta
         void (async () => {
           // One round trip per request: the user, the organisation and whether the token was
           // revoked. Plain SQL, as it runs before every route.
-          const { rows } = await knex.raw<{ rows: SignedInRow[] }>(SIGNED_IN_SQL, [claims.jti, Number(claims.sub)]).options({ prepare: true });
+          const { rows } = await knex
+            .raw<{ rows: SignedInRow[] }>(SIGNED_IN_SQL, [claims.jti, Number(claims.sub)])
+            .options({ prepare: true });
           const user = rows[0];
           if (!user || user.revoked || user.status !== 'active') return done(null, false);
           done(null, {

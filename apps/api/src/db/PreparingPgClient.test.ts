@@ -9,7 +9,12 @@ if (!process.env.DATABASE_URL) throw new Error('DATABASE_URL is not set: run the
 let knex: Knex;
 const table = `prepared_${randomUUID().slice(0, 8)}`;
 /** The statements this connection holds, as PostgreSQL lists them. */
-const prepared = async () => (await knex.raw<{ rows: Array<{ name: string; statement: string }> }>('select name, statement from pg_prepared_statements')).rows;
+const prepared = async () =>
+  (
+    await knex.raw<{ rows: Array<{ name: string; statement: string }> }>(
+      'select name, statement from pg_prepared_statements',
+    )
+  ).rows;
 
 beforeAll(async () => {
   knex = knexFactory({ client: PreparingPgClient, connection: process.env.DATABASE_URL, pool: { min: 1, max: 1 } });
@@ -42,7 +47,9 @@ describe('prepared statements', () => {
   });
 
   it('prepares marked raw SQL too', async () => {
-    const { rows } = await knex.raw<{ rows: Array<{ count: number }> }>(`select count(*)::int as count from ${table} where name <> ?`, ['none']).options({ prepare: true });
+    const { rows } = await knex
+      .raw<{ rows: Array<{ count: number }> }>(`select count(*)::int as count from ${table} where name <> ?`, ['none'])
+      .options({ prepare: true });
     expect(rows[0]!.count).toBe(2);
     expect((await prepared()).some((s) => s.statement.includes('count(*)::int'))).toBe(true);
   });

@@ -20,6 +20,8 @@ export async function migrateLatest(knex: Knex): Promise<string[]> {
 export async function pendingMigrations(knex: Knex, directory = migrationsDir): Promise<string[]> {
   const files = (await readdir(directory)).filter((name) => name.endsWith('.ts')).sort();
   const hasTable = await knex.schema.hasTable('knex_migrations');
-  const applied = new Set(hasTable ? (await knex('knex_migrations').select('name')).map((row: { name: string }) => row.name) : []);
+  const applied = new Set(
+    hasTable ? (await knex('knex_migrations').select('name')).map((row: { name: string }) => row.name) : [],
+  );
   return files.filter((name) => !applied.has(name));
 }

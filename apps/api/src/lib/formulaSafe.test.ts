@@ -13,7 +13,8 @@ describe('formulaSafe', () => {
   ])('quotes %j', (text, safe) => expect(formulaSafe(text)).toBe(safe));
 
   it('leaves ordinary text as it is', () => {
-    for (const text of ['Brightline Rule & Die', 'Łódź Wykrojniki', 'a=b', '', '3M']) expect(formulaSafe(text)).toBe(text);
+    for (const text of ['Brightline Rule & Die', 'Łódź Wykrojniki', 'a=b', '', '3M'])
+      expect(formulaSafe(text)).toBe(text);
     expect(formulaSafe(null)).toBe('');
   });
 });

@@ -21,7 +21,8 @@ export function createJobQueues(redisUrl: string, logger: Logger) {
   const emailQueue = new Queue<DeliverEmailJob>(queueNames.email, { connection });
   const dielineQueue = new Queue<AnalyseDielineJob>(queueNames.dieline, { connection });
   const reminderQueue = new Queue<PlanRemindersJob>(queueNames.reminders, { connection });
-  for (const queue of [emailQueue, dielineQueue, reminderQueue]) queue.on('error', (error) => logger.warn({ err: error.message }, 'job queue unavailable'));
+  for (const queue of [emailQueue, dielineQueue, reminderQueue])
+    queue.on('error', (error) => logger.warn({ err: error.message }, 'job queue unavailable'));
   const keep = { removeOnComplete: 1000, removeOnFail: 5000 };
 
   const emails: EmailDispatcher = {
@@ -36,7 +37,16 @@ export function createJobQueues(redisUrl: string, logger: Logger) {
   const analyses: AnalysisDispatcher = {
     analyse(fileId, run) {
       dielineQueue
-        .add(jobNames.analyseDieline, { fileId }, { jobId: analyseDielineJobId(fileId, run), attempts: 3, backoff: { type: 'exponential', delay: 2000 }, ...keep })
+        .add(
+          jobNames.analyseDieline,
+          { fileId },
+          {
+            jobId: analyseDielineJobId(fileId, run),
+            attempts: 3,
+            backoff: { type: 'exponential', delay: 2000 },
+            ...keep,
+          },
+        )
         .catch((error: unknown) => logger.warn({ err: error, fileId }, 'analysis left for the sweep'));
     },
   };

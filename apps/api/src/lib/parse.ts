@@ -24,7 +24,9 @@ export function parse<S extends z.ZodType>(schema: S, input: unknown): z.output<
     // A NUL byte or half a character passes zod's checks but not the database.
     const field = unstorableField(result.data);
     if (field !== undefined) {
-      throw new HttpError(400, 'validation_failed', `Check these fields: ${field}.`, { [field]: 'Remove the control or broken character' });
+      throw new HttpError(400, 'validation_failed', `Check these fields: ${field}.`, {
+        [field]: 'Remove the control or broken character',
+      });
     }
     return result.data;
   }

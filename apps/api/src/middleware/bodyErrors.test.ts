@@ -11,23 +11,50 @@ const json = JSON.stringify({ email: 'nobody@test.example', password: 'whatever'
 // Over real HTTP: supertest re-encodes a Buffer sent as JSON, which would corrupt even a good gzip body.
 let base: string;
 let server: ReturnType<typeof app.listen>;
-beforeAll(() => new Promise<void>((resolve) => (server = app.listen(0, '127.0.0.1', () => {
-  base = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
-  resolve();
-}))));
+beforeAll(
+  () =>
+    new Promise<void>(
+      (resolve) =>
+        (server = app.listen(0, '127.0.0.1', () => {
+          base = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
+          resolve();
+        })),
+    ),
+);
 afterAll(() => new Promise<void>((resolve) => server.close(() => resolve())));
 
 async function post(path: string, headers: Record<string, string>, body: Buffer | string) {
   const res = await fetch(base + path, { method: 'POST', headers, body });
-  return { status: res.status, body: (await res.json()) as { error: { code: string; message: string; requestId: string } } };
+  return {
+    status: res.status,
+    body: (await res.json()) as { error: { code: string; message: string; requestId: string } },
+  };
 }
 
 describe('bodies the parser cannot read', () => {
   const cases: Array<[string, Record<string, string>, Buffer | string, number, string]> = [
     ['an unknown charset', { 'Content-Type': 'application/json; charset=klingon' }, json, 415, 'unsupported_charset'],
-    ['an unknown Content-Encoding', { 'Content-Type': 'application/json', 'Content-Encoding': 'zstd-of-our-own' }, json, 415, 'unsupported_encoding'],
-    ['a corrupt gzip body', { 'Content-Type': 'application/json', 'Content-Encoding': 'gzip' }, Buffer.concat([gzipSync(json).subarray(0, 12), Buffer.from('not gzip at all')]), 400, 'unreadable_body'],
-    ['a corrupt deflate body', { 'Content-Type': 'application/json', 'Content-Encoding': 'deflate' }, Buffer.from('plainly not deflate'), 400, 'unreadable_body'],
+    [
+      'an unknown Content-Encoding',
+      { 'Content-Type': 'application/json', 'Content-Encoding': 'zstd-of-our-own' },
+      json,
+      415,
+      'unsupported_encoding',
+    ],
+    [
+      'a corrupt gzip body',
+      { 'Content-Type': 'application/json', 'Content-Encoding': 'gzip' },
+      Buffer.concat([gzipSync(json).subarray(0, 12), Buffer.from('not gzip at all')]),
+      400,
+      'unreadable_body',
+    ],
+    [
+      'a corrupt deflate body',
+      { 'Content-Type': 'application/json', 'Content-Encoding': 'deflate' },
+      Buffer.from('plainly not deflate'),
+      400,
+      'unreadable_body',
+    ],
     ['malformed JSON', { 'Content-Type': 'application/json' }, '{"email": ', 400, 'malformed_json'],
   ];
   for (const path of ['/api/auth/login', '/api/requests', '/api/presses']) {
@@ -53,8 +80,15 @@ describe('bodies the parser cannot read', () => {
   }, 60_000);
 
   it('still reads a body that is gzipped or deflated properly', async () => {
-    for (const [encoding, body] of [['gzip', gzipSync(json)], ['deflate', deflateSync(json)]] as const) {
-      const res = await post('/api/auth/login', { 'Content-Type': 'application/json', 'Content-Encoding': encoding }, body);
+    for (const [encoding, body] of [
+      ['gzip', gzipSync(json)],
+      ['deflate', deflateSync(json)],
+    ] as const) {
+      const res = await post(
+        '/api/auth/login',
+        { 'Content-Type': 'application/json', 'Content-Encoding': encoding },
+        body,
+      );
       expect(res.status, `${encoding}: ${JSON.stringify(res.body)}`).toBe(401); // read, then refused as a wrong sign-in
     }
   });

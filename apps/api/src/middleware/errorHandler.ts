@@ -18,7 +18,8 @@ const UNAVAILABLE_CODES = new Set([
 
 // "is not queryable": pg refuses a client whose connection broke; knex reports it from the
 // ROLLBACK it tries after a query failed mid-transaction (the server has rolled back already).
-const UNAVAILABLE_MESSAGE = /Connection terminated|connection is closed|Timeout acquiring a connection|is not queryable/i;
+const UNAVAILABLE_MESSAGE =
+  /Connection terminated|connection is closed|Timeout acquiring a connection|is not queryable/i;
 
 function isUnavailable(error: unknown, depth = 0): boolean {
   if (!error || typeof error !== 'object' || depth > 3) return false;
@@ -40,10 +41,22 @@ function sendError(req: Request, res: Response, status: number, error: Record<st
 const BODY_ERRORS: Record<string, { status: number; code: string; message: string }> = {
   'entity.too.large': { status: 413, code: 'payload_too_large', message: 'The request body is too large.' },
   'entity.parse.failed': { status: 400, code: 'malformed_json', message: 'The request body is not valid JSON.' },
-  'charset.unsupported': { status: 415, code: 'unsupported_charset', message: 'The request body’s charset is not one Kerfmark reads; send UTF-8.' },
-  'encoding.unsupported': { status: 415, code: 'unsupported_encoding', message: 'The request body’s Content-Encoding is not one Kerfmark reads; send it plain, gzip or deflate.' },
+  'charset.unsupported': {
+    status: 415,
+    code: 'unsupported_charset',
+    message: 'The request body’s charset is not one Kerfmark reads; send UTF-8.',
+  },
+  'encoding.unsupported': {
+    status: 415,
+    code: 'unsupported_encoding',
+    message: 'The request body’s Content-Encoding is not one Kerfmark reads; send it plain, gzip or deflate.',
+  },
 };
-const UNREADABLE = { status: 400, code: 'unreadable_body', message: 'The request body could not be read (a broken compressed body, or one cut short).' };
+const UNREADABLE = {
+  status: 400,
+  code: 'unreadable_body',
+  message: 'The request body could not be read (a broken compressed body, or one cut short).',
+};
 // zlib's codes for a compressed body that is not what its Content-Encoding says.
 const ZLIB_CODES = new Set(['Z_DATA_ERROR', 'Z_BUF_ERROR', 'Z_STREAM_ERROR', 'Z_NEED_DICT']);
 
@@ -53,7 +66,8 @@ function bodyError(error: unknown): { status: number; code: string; message: str
   if (typeof e?.type === 'string' && BODY_ERRORS[e.type]) return BODY_ERRORS[e.type];
   if (typeof e?.code === 'string' && ZLIB_CODES.has(e.code)) return UNREADABLE;
   // Any other 4xx the body reader raises (aborted, size mismatch, stream errors).
-  if (typeof e?.type === 'string' && typeof e.status === 'number' && e.status >= 400 && e.status < 500) return { ...UNREADABLE, status: e.status };
+  if (typeof e?.type === 'string' && typeof e.status === 'number' && e.status >= 400 && e.status < 500)
+    return { ...UNREADABLE, status: e.status };
   return undefined;
 }
 
@@ -62,7 +76,12 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
     if (res.headersSent) return;
     if (error instanceof HttpError) {
       if (error.headers) res.set(error.headers);
-      sendError(req, res, error.status, { code: error.code, message: error.message, fields: error.fields, details: error.details });
+      sendError(req, res, error.status, {
+        code: error.code,
+        message: error.message,
+        fields: error.fields,
+        details: error.details,
+      });
       return;
     }
     const unreadable = bodyError(error);
@@ -72,13 +91,20 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
     }
     // The router's own: a path parameter with a broken %-escape (e.g. /api/requests/%E0%A4%A).
     if (error instanceof URIError && (error as { status?: number }).status === 400) {
-      sendError(req, res, 400, { code: 'bad_path', message: 'The address has a broken %-escape in it.', fields: { path: 'Not a valid address' } });
+      sendError(req, res, 400, {
+        code: 'bad_path',
+        message: 'The address has a broken %-escape in it.',
+        fields: { path: 'Not a valid address' },
+      });
       return;
     }
     if (isUnavailable(error)) {
       logger.warn({ err: error, reqId: req.id }, 'a backing service is unavailable');
       res.set('Retry-After', '5');
-      sendError(req, res, 503, { code: 'service_unavailable', message: 'Kerfmark is briefly unavailable. Try again in a few seconds.' });
+      sendError(req, res, 503, {
+        code: 'service_unavailable',
+        message: 'Kerfmark is briefly unavailable. Try again in a few seconds.',
+      });
       return;
     }
     logger.error({ err: error, reqId: req.id }, 'unhandled error');

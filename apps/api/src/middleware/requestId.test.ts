@@ -51,8 +51,14 @@ describe('request ids', () => {
     expect(unauthorised.status).toBe(401);
     expect(unauthorised.body.error.requestId).toBe(unauthorised.headers['x-request-id']);
     expect(unauthorised.body.error.requestId).toMatch(UUID);
-    const malformed = await request(app).post('/api/auth/login').set('Content-Type', 'application/json').send('{"email":');
+    const malformed = await request(app)
+      .post('/api/auth/login')
+      .set('Content-Type', 'application/json')
+      .send('{"email":');
     expect(malformed.status).toBe(400);
-    expect(malformed.body.error).toMatchObject({ code: 'malformed_json', requestId: malformed.headers['x-request-id'] });
+    expect(malformed.body.error).toMatchObject({
+      code: 'malformed_json',
+      requestId: malformed.headers['x-request-id'],
+    });
   });
 });

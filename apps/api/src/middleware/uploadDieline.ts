@@ -13,12 +13,30 @@ export function uploadDieline(maxBytes: number): RequestHandler {
     upload(req, res, (error: unknown) => {
       if (error instanceof multer.MulterError) {
         if (error.code === 'LIMIT_FILE_SIZE') {
-          return next(new HttpError(413, 'file_too_large', `The file is larger than ${mb} MB. Simplify the drawing or split it, and try again.`));
+          return next(
+            new HttpError(
+              413,
+              'file_too_large',
+              `The file is larger than ${mb} MB. Simplify the drawing or split it, and try again.`,
+            ),
+          );
         }
-        return next(new HttpError(400, 'bad_upload', `The upload was not understood (${error.message}). Send one file in the field "file".`));
+        return next(
+          new HttpError(
+            400,
+            'bad_upload',
+            `The upload was not understood (${error.message}). Send one file in the field "file".`,
+          ),
+        );
       }
-      if (error) return next(new HttpError(400, 'bad_upload', 'The upload was cut short or is not a valid form upload. Try again.'));
-      if (!req.file) return next(new HttpError(400, 'validation_failed', 'Choose a dieline file to upload.', { file: 'Choose a file' }));
+      if (error)
+        return next(
+          new HttpError(400, 'bad_upload', 'The upload was cut short or is not a valid form upload. Try again.'),
+        );
+      if (!req.file)
+        return next(
+          new HttpError(400, 'validation_failed', 'Choose a dieline file to upload.', { file: 'Choose a file' }),
+        );
       next();
     });
   };

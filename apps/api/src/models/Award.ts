@@ -25,8 +25,16 @@ export class Award extends Model {
 
   static override get relationMappings() {
     return {
-      shop: { relation: Model.BelongsToOneRelation, modelClass: Organisation, join: { from: 'awards.shopId', to: 'organisations.id' } },
-      request: { relation: Model.BelongsToOneRelation, modelClass: DieRequest, join: { from: 'awards.requestId', to: 'die_requests.id' } },
+      shop: {
+        relation: Model.BelongsToOneRelation,
+        modelClass: Organisation,
+        join: { from: 'awards.shopId', to: 'organisations.id' },
+      },
+      request: {
+        relation: Model.BelongsToOneRelation,
+        modelClass: DieRequest,
+        join: { from: 'awards.requestId', to: 'die_requests.id' },
+      },
     };
   }
 }

@@ -28,7 +28,11 @@ export class Bid extends Model {
 
   static override get relationMappings() {
     return {
-      shop: { relation: Model.BelongsToOneRelation, modelClass: Organisation, join: { from: 'bids.shopId', to: 'organisations.id' } },
+      shop: {
+        relation: Model.BelongsToOneRelation,
+        modelClass: Organisation,
+        join: { from: 'bids.shopId', to: 'organisations.id' },
+      },
     };
   }
 }

@@ -27,15 +27,28 @@ export class DielineFile extends Model {
   static override modifiers = {
     /** Every column but the preview geometry, which is large and fetched on its own. */
     byUpload(query: QueryBuilder<DielineFile>) {
-      query
-        .select(DielineFile.listColumns.map((c) => `dieline_files.${c}`))
-        .orderBy('uploadedAt');
+      query.select(DielineFile.listColumns.map((c) => `dieline_files.${c}`)).orderBy('uploadedAt');
     },
   };
 
   static readonly listColumns = [
-    'id', 'request_id', 'uploaded_by', 'file_name', 'format', 'content_type', 'byte_size', 'sha256', 's3_key',
-    'is_primary', 'analysis_status', 'analysis_error', 'metrics', 'layer_map', 'analysis_attempts', 'analysed_at', 'uploaded_at',
+    'id',
+    'request_id',
+    'uploaded_by',
+    'file_name',
+    'format',
+    'content_type',
+    'byte_size',
+    'sha256',
+    's3_key',
+    'is_primary',
+    'analysis_status',
+    'analysis_error',
+    'metrics',
+    'layer_map',
+    'analysis_attempts',
+    'analysed_at',
+    'uploaded_at',
   ];
 
   static override get jsonAttributes() {

@@ -40,7 +40,12 @@ const printers = (status: number, except: Partial<ForEach<number>> = {}): ForEac
   ...except,
 });
 /** A die shops' route: both shop roles get `status`; printers get 403. */
-const shops = (status: number): ForEach<number> => ({ ...everyone(status), buyer: 403, purchasing: 403, printerAdmin: 403 });
+const shops = (status: number): ForEach<number> => ({
+  ...everyone(status),
+  buyer: 403,
+  purchasing: 403,
+  printerAdmin: 403,
+});
 /** An admins' route, in either kind of organisation. */
 const admins = (status: number): ForEach<number> => ({ ...everyone(403), printerAdmin: status, shopAdmin: status });
 
@@ -49,7 +54,12 @@ const member = (actor: Actor) => (actor === 'anonymous' ? 'buyer' : actor);
 
 // Two invented past dies, in the columns `priceMapping` names.
 const priceCsv = 'Date,Supplier,Die price,Rule length (in)\n2026-03-16,Shop A,612.50,88\n2026-05-04,Shop B,455.00,61\n';
-const priceMapping = { pricedOn: 'Date', shopName: 'Supplier', diePrice: 'Die price', ruleLengthIn: 'Rule length (in)' };
+const priceMapping = {
+  pricedOn: 'Date',
+  shopName: 'Supplier',
+  diePrice: 'Die price',
+  ruleLengthIn: 'Rule length (in)',
+};
 
 /** What the cases act on, made for each world in `setUp`. */
 interface Fixtures {
@@ -102,7 +112,10 @@ const cases: RouteCase[] = [
   { name: 'GET /api/health/ready', send: () => request(app).get('/api/health/ready'), expect: everyone(200, 200) },
   {
     name: 'POST /api/auth/login',
-    send: (w, actor) => request(app).post('/api/auth/login').send({ email: w.users[member(actor)].email, password: PASSWORD }),
+    send: (w, actor) =>
+      request(app)
+        .post('/api/auth/login')
+        .send({ email: w.users[member(actor)].email, password: PASSWORD }),
     expect: everyone(200, 200),
   },
   { name: 'GET /api/me', send: () => request(app).get('/api/me'), expect: everyone(200) },
@@ -112,14 +125,20 @@ const cases: RouteCase[] = [
     send: (_w, actor) =>
       request(app)
         .post('/api/users')
-        .send({ email: `new-${unique()}@test.example`, name: 'New Person', role: actor === 'shopAdmin' ? 'estimator' : 'buyer' }),
+        .send({
+          email: `new-${unique()}@test.example`,
+          name: 'New Person',
+          role: actor === 'shopAdmin' ? 'estimator' : 'buyer',
+        }),
     expect: admins(201),
   },
   {
     name: 'PATCH /api/users/:id',
     send: (w, actor) =>
       request(app)
-        .patch(`/api/users/${actor === 'shopAdmin' || actor === 'estimator' ? w.users.estimator.id : w.users.purchasing.id}`)
+        .patch(
+          `/api/users/${actor === 'shopAdmin' || actor === 'estimator' ? w.users.estimator.id : w.users.purchasing.id}`,
+        )
         .send({ role: actor === 'shopAdmin' || actor === 'estimator' ? 'estimator' : 'purchasing' }),
     expect: admins(200),
   },
@@ -128,12 +147,18 @@ const cases: RouteCase[] = [
   { name: 'GET /api/invitations', send: () => request(app).get('/api/invitations'), expect: admins(200) },
   {
     name: 'GET /api/invitations/preview',
-    send: (w) => request(app).get('/api/invitations/preview').query({ token: fx(w).previewToken }),
+    send: (w) =>
+      request(app)
+        .get('/api/invitations/preview')
+        .query({ token: fx(w).previewToken }),
     expect: everyone(200, 200),
   },
   {
     name: 'POST /api/invitations/accept',
-    send: (w, actor) => request(app).post('/api/invitations/accept').send({ token: fx(w).acceptToken[actor], password: 'a long enough password' }),
+    send: (w, actor) =>
+      request(app)
+        .post('/api/invitations/accept')
+        .send({ token: fx(w).acceptToken[actor], password: 'a long enough password' }),
     expect: everyone(201, 201),
   },
   {
@@ -151,32 +176,48 @@ const cases: RouteCase[] = [
   {
     name: 'POST /api/presses',
     send: () =>
-      request(app).post('/api/presses').send({
-        name: `Press ${unique()}`,
-        kind: 'platen',
-        maxSheetWidthIn: 22,
-        maxSheetLengthIn: 30,
-        typicalSpeedSph: 4000,
-        maxSpeedSph: 5000,
-      }),
+      request(app)
+        .post('/api/presses')
+        .send({
+          name: `Press ${unique()}`,
+          kind: 'platen',
+          maxSheetWidthIn: 22,
+          maxSheetLengthIn: 30,
+          typicalSpeedSph: 4000,
+          maxSpeedSph: 5000,
+        }),
     expect: printers(201, { buyer: 403, purchasing: 403 }),
   },
   {
     name: 'PATCH /api/presses/:id',
-    send: (w) => request(app).patch(`/api/presses/${fx(w).press}`).send({ typicalSpeedSph: 3500 }),
+    send: (w) =>
+      request(app)
+        .patch(`/api/presses/${fx(w).press}`)
+        .send({ typicalSpeedSph: 3500 }),
     expect: printers(200, { buyer: 403, purchasing: 403 }),
   },
 
   { name: 'GET /api/me/dashboard', send: () => request(app).get('/api/me/dashboard'), expect: everyone(200) },
   { name: 'GET /api/me/preferences', send: () => request(app).get('/api/me/preferences'), expect: everyone(200) },
-  { name: 'PUT /api/me/preferences', send: () => request(app).put('/api/me/preferences').send({ email: { bids_ready: false } }), expect: everyone(200) },
+  {
+    name: 'PUT /api/me/preferences',
+    send: () =>
+      request(app)
+        .put('/api/me/preferences')
+        .send({ email: { bids_ready: false } }),
+    expect: everyone(200),
+  },
   { name: 'GET /api/notifications', send: () => request(app).get('/api/notifications'), expect: everyone(200) },
   {
     name: 'POST /api/notifications/:id/read (the caller’s own notice)',
     send: (w, actor) => request(app).post(`/api/notifications/${fx(w).notice[actor]}/read`),
     expect: everyone(204),
   },
-  { name: 'POST /api/notifications/read-all', send: () => request(app).post('/api/notifications/read-all'), expect: everyone(204) },
+  {
+    name: 'POST /api/notifications/read-all',
+    send: () => request(app).post('/api/notifications/read-all'),
+    expect: everyone(204),
+  },
 
   // The die library.
   { name: 'GET /api/library', send: () => request(app).get('/api/library'), expect: everyone(200) },
@@ -192,12 +233,18 @@ const cases: RouteCase[] = [
   },
   {
     name: 'PATCH /api/library/:id (a die of the caller’s organisation)',
-    send: (w, actor) => request(app).patch(`/api/library/${fx(w).ownDie[actor]}`).send({ storageLocation: 'Rack B4' }),
+    send: (w, actor) =>
+      request(app)
+        .patch(`/api/library/${fx(w).ownDie[actor]}`)
+        .send({ storageLocation: 'Rack B4' }),
     expect: everyone(200),
   },
   {
     name: 'POST /api/library/:id/runs',
-    send: (w) => request(app).post(`/api/library/${fx(w).printerDie}/runs`).send({ runOn: inDays(-1), impressions: 1_200 }),
+    send: (w) =>
+      request(app)
+        .post(`/api/library/${fx(w).printerDie}/runs`)
+        .send({ runOn: inDays(-1), impressions: 1_200 }),
     expect: printers(201),
   },
 
@@ -205,7 +252,10 @@ const cases: RouteCase[] = [
   { name: 'GET /api/requests', send: () => request(app).get('/api/requests'), expect: printers(200) },
   {
     name: 'POST /api/requests',
-    send: () => request(app).post('/api/requests').send({ title: `Access ${unique()}`, quantity: 1, ups: 1, ruleTypes: ['cut'] }),
+    send: () =>
+      request(app)
+        .post('/api/requests')
+        .send({ title: `Access ${unique()}`, quantity: 1, ups: 1, ruleTypes: ['cut'] }),
     expect: printers(201),
   },
   {
@@ -215,73 +265,152 @@ const cases: RouteCase[] = [
   },
   {
     name: 'PATCH /api/requests/:id',
-    send: (w) => request(app).patch(`/api/requests/${fx(w).draft}`).send({ notes: 'Nicks on the long sides only.' }),
+    send: (w) =>
+      request(app)
+        .patch(`/api/requests/${fx(w).draft}`)
+        .send({ notes: 'Nicks on the long sides only.' }),
     expect: printers(200),
   },
-  { name: 'POST /api/requests/:id/publish', send: (w, actor) => request(app).post(`/api/requests/${fx(w).toPublish[actor]}/publish`), expect: printers(200) },
+  {
+    name: 'POST /api/requests/:id/publish',
+    send: (w, actor) => request(app).post(`/api/requests/${fx(w).toPublish[actor]}/publish`),
+    expect: printers(200),
+  },
   {
     name: 'POST /api/requests/:id/cancel',
-    send: (w, actor) => request(app).post(`/api/requests/${fx(w).toCancel[actor]}/cancel`).send({ reason: 'The job moved to next quarter.' }),
+    send: (w, actor) =>
+      request(app)
+        .post(`/api/requests/${fx(w).toCancel[actor]}/cancel`)
+        .send({ reason: 'The job moved to next quarter.' }),
     expect: printers(200),
   },
   {
     name: 'POST /api/requests/:id/files',
-    send: (w) => request(app).post(`/api/requests/${fx(w).draft}/files`).attach('file', Buffer.from(rectangleSvg), 'label.svg'),
+    send: (w) =>
+      request(app)
+        .post(`/api/requests/${fx(w).draft}/files`)
+        .attach('file', Buffer.from(rectangleSvg), 'label.svg'),
     expect: printers(201),
   },
-  { name: 'GET /api/requests/:id/fair-price', send: (w) => request(app).get(`/api/requests/${fx(w).open}/fair-price`), expect: printers(200) },
-  { name: 'GET /api/requests/:id/library-matches', send: (w) => request(app).get(`/api/requests/${fx(w).open}/library-matches`), expect: printers(200) },
+  {
+    name: 'GET /api/requests/:id/fair-price',
+    send: (w) => request(app).get(`/api/requests/${fx(w).open}/fair-price`),
+    expect: printers(200),
+  },
+  {
+    name: 'GET /api/requests/:id/library-matches',
+    send: (w) => request(app).get(`/api/requests/${fx(w).open}/library-matches`),
+    expect: printers(200),
+  },
   {
     name: 'POST /api/requests/:id/questions',
-    send: (w) => request(app).post(`/api/requests/${fx(w).open}/questions`).send({ question: 'Does the grain run across the tuck flap?' }),
+    send: (w) =>
+      request(app)
+        .post(`/api/requests/${fx(w).open}/questions`)
+        .send({ question: 'Does the grain run across the tuck flap?' }),
     expect: shops(201),
   },
   {
     name: 'POST /api/requests/:id/questions/:questionId/answer',
-    send: (w) => request(app).post(`/api/requests/${fx(w).open}/questions/${fx(w).question}/answer`).send({ answer: 'Yes, across the flap.' }),
+    send: (w) =>
+      request(app)
+        .post(`/api/requests/${fx(w).open}/questions/${fx(w).question}/answer`)
+        .send({ answer: 'Yes, across the flap.' }),
     expect: printers(200),
   },
 
   // Dieline files.
-  { name: 'GET /api/files/:id (on an open request)', send: (w) => request(app).get(`/api/files/${fx(w).openFile}`), expect: everyone(200) },
+  {
+    name: 'GET /api/files/:id (on an open request)',
+    send: (w) => request(app).get(`/api/files/${fx(w).openFile}`),
+    expect: everyone(200),
+  },
   {
     name: 'GET /api/files/:id (on a draft: another organisation’s record)',
     send: (w) => request(app).get(`/api/files/${fx(w).draftFile}`),
     expect: printers(200, { estimator: 404, shopAdmin: 404 }),
   },
-  { name: 'GET /api/files/:id/preview', send: (w) => request(app).get(`/api/files/${fx(w).openFile}/preview`), expect: everyone(200) },
-  { name: 'GET /api/files/:id/download', send: (w) => request(app).get(`/api/files/${fx(w).openFile}/download`), expect: everyone(200) },
-  { name: 'POST /api/files/:id/primary', send: (w) => request(app).post(`/api/files/${fx(w).draftFile}/primary`), expect: printers(200) },
   {
-    name: 'PUT /api/files/:id/layers',
-    send: (w) => request(app).put(`/api/files/${fx(w).draftFile}/layers`).send({ layerMap: { cut: 'cut' } }),
+    name: 'GET /api/files/:id/preview',
+    send: (w) => request(app).get(`/api/files/${fx(w).openFile}/preview`),
+    expect: everyone(200),
+  },
+  {
+    name: 'GET /api/files/:id/download',
+    send: (w) => request(app).get(`/api/files/${fx(w).openFile}/download`),
+    expect: everyone(200),
+  },
+  {
+    name: 'POST /api/files/:id/primary',
+    send: (w) => request(app).post(`/api/files/${fx(w).draftFile}/primary`),
     expect: printers(200),
   },
-  { name: 'DELETE /api/files/:id', send: (w, actor) => request(app).delete(`/api/files/${fx(w).toDelete[actor]}`), expect: printers(204) },
+  {
+    name: 'PUT /api/files/:id/layers',
+    send: (w) =>
+      request(app)
+        .put(`/api/files/${fx(w).draftFile}/layers`)
+        .send({ layerMap: { cut: 'cut' } }),
+    expect: printers(200),
+  },
+  {
+    name: 'DELETE /api/files/:id',
+    send: (w, actor) => request(app).delete(`/api/files/${fx(w).toDelete[actor]}`),
+    expect: printers(204),
+  },
 
   // The die shops' board, bids, the award and the die's way back.
-  { name: 'GET /api/marketplace/requests', send: () => request(app).get('/api/marketplace/requests'), expect: shops(200) },
+  {
+    name: 'GET /api/marketplace/requests',
+    send: () => request(app).get('/api/marketplace/requests'),
+    expect: shops(200),
+  },
   { name: 'GET /api/die-shops', send: () => request(app).get('/api/die-shops'), expect: printers(200) },
   { name: 'GET /api/estimate-aid', send: () => request(app).get('/api/estimate-aid'), expect: shops(200) },
   {
     name: 'POST /api/requests/:id/bids',
-    send: (w, actor) => request(app).post(`/api/requests/${fx(w).toBidOn[actor]}/bids`).send(bidBody(75_000)),
+    send: (w, actor) =>
+      request(app)
+        .post(`/api/requests/${fx(w).toBidOn[actor]}/bids`)
+        .send(bidBody(75_000)),
     expect: shops(201),
   },
-  { name: 'GET /api/requests/:id/my-bid', send: (w) => request(app).get(`/api/requests/${fx(w).bid.id}/my-bid`), expect: shops(200) },
+  {
+    name: 'GET /api/requests/:id/my-bid',
+    send: (w) => request(app).get(`/api/requests/${fx(w).bid.id}/my-bid`),
+    expect: shops(200),
+  },
   {
     name: 'POST /api/requests/:id/decline',
-    send: (w) => request(app).post(`/api/requests/${fx(w).open}/decline`).send({ reason: 'No laser time this month.' }),
+    send: (w) =>
+      request(app)
+        .post(`/api/requests/${fx(w).open}/decline`)
+        .send({ reason: 'No laser time this month.' }),
     expect: shops(204),
   },
-  { name: 'PATCH /api/bids/:id', send: (w) => request(app).patch(`/api/bids/${fx(w).bid.bidId}`).send(bidBody(78_000)), expect: shops(200) },
-  { name: 'POST /api/bids/:id/withdraw', send: (w, actor) => request(app).post(`/api/bids/${fx(w).toWithdraw[actor]}/withdraw`), expect: shops(200) },
+  {
+    name: 'PATCH /api/bids/:id',
+    send: (w) =>
+      request(app)
+        .patch(`/api/bids/${fx(w).bid.bidId}`)
+        .send(bidBody(78_000)),
+    expect: shops(200),
+  },
+  {
+    name: 'POST /api/bids/:id/withdraw',
+    send: (w, actor) => request(app).post(`/api/bids/${fx(w).toWithdraw[actor]}/withdraw`),
+    expect: shops(200),
+  },
   {
     name: 'GET /api/requests/:id/bids (sealed until the deadline)',
     send: (w) => request(app).get(`/api/requests/${fx(w).open}/bids`),
     expect: printers(404),
   },
-  { name: 'GET /api/requests/:id/bids (opened once bidding closed)', send: (w) => request(app).get(`/api/requests/${fx(w).awarded.id}/bids`), expect: printers(200) },
+  {
+    name: 'GET /api/requests/:id/bids (opened once bidding closed)',
+    send: (w) => request(app).get(`/api/requests/${fx(w).awarded.id}/bids`),
+    expect: printers(200),
+  },
   {
     name: 'POST /api/requests/:id/close-bidding',
     send: (w, actor) => request(app).post(`/api/requests/${fx(w).toClose[actor]}/close-bidding`),
@@ -289,15 +418,25 @@ const cases: RouteCase[] = [
   },
   {
     name: 'POST /api/requests/:id/award (bids still sealed)',
-    send: (w) => request(app).post(`/api/requests/${fx(w).open}/award`).send({ bidId: 1 }),
+    send: (w) =>
+      request(app)
+        .post(`/api/requests/${fx(w).open}/award`)
+        .send({ bidId: 1 }),
     expect: printers(409, { buyer: 403 }),
   },
   {
     name: 'POST /api/requests/:id/award (bidding closed)',
-    send: (w, actor) => request(app).post(`/api/requests/${fx(w).toAward[actor].id}/award`).send({ bidId: fx(w).toAward[actor].bidId }),
+    send: (w, actor) =>
+      request(app)
+        .post(`/api/requests/${fx(w).toAward[actor].id}/award`)
+        .send({ bidId: fx(w).toAward[actor].bidId }),
     expect: printers(200, { buyer: 403 }),
   },
-  { name: 'GET /api/requests/:id/ocds', send: (w) => request(app).get(`/api/requests/${fx(w).awarded.id}/ocds`), expect: printers(200) },
+  {
+    name: 'GET /api/requests/:id/ocds',
+    send: (w) => request(app).get(`/api/requests/${fx(w).awarded.id}/ocds`),
+    expect: printers(200),
+  },
   {
     name: 'GET /api/purchase-orders/:id/pdf (the issuing printer and the awarded shop)',
     send: (w) => request(app).get(`/api/purchase-orders/${fx(w).awarded.awardId}/pdf`),
@@ -310,32 +449,51 @@ const cases: RouteCase[] = [
   },
   {
     name: 'POST /api/requests/:id/ship',
-    send: (w, actor) => request(app).post(`/api/requests/${fx(w).toShip[actor]}/ship`).send({ trackingNote: 'Ground parcel, tracking 1Z-TEST-0002' }),
+    send: (w, actor) =>
+      request(app)
+        .post(`/api/requests/${fx(w).toShip[actor]}/ship`)
+        .send({ trackingNote: 'Ground parcel, tracking 1Z-TEST-0002' }),
     expect: shops(200),
   },
   {
     name: 'POST /api/requests/:id/receive',
-    send: (w, actor) => request(app).post(`/api/requests/${fx(w).toReceive[actor]}/receive`).send({ condition: 'good' }),
+    send: (w, actor) =>
+      request(app)
+        .post(`/api/requests/${fx(w).toReceive[actor]}/receive`)
+        .send({ condition: 'good' }),
     expect: printers(200),
   },
 
   // The printer's price history: every printer role reads it; purchasing and admins import.
   { name: 'GET /api/price-history', send: () => request(app).get('/api/price-history'), expect: printers(200) },
-  { name: 'GET /api/price-history/export.csv', send: () => request(app).get('/api/price-history/export.csv'), expect: printers(200) },
+  {
+    name: 'GET /api/price-history/export.csv',
+    send: () => request(app).get('/api/price-history/export.csv'),
+    expect: printers(200),
+  },
   { name: 'GET /api/price-history/fit', send: () => request(app).get('/api/price-history/fit'), expect: printers(200) },
   {
     name: 'POST /api/price-history/import/preview',
-    send: () => request(app).post('/api/price-history/import/preview').attach('file', Buffer.from(priceCsv), 'history.csv'),
+    send: () =>
+      request(app).post('/api/price-history/import/preview').attach('file', Buffer.from(priceCsv), 'history.csv'),
     expect: printers(200, { buyer: 403 }),
   },
   {
     name: 'POST /api/price-history/import',
     send: () =>
-      request(app).post('/api/price-history/import').attach('file', Buffer.from(priceCsv), 'history.csv').field('mapping', JSON.stringify(priceMapping)),
+      request(app)
+        .post('/api/price-history/import')
+        .attach('file', Buffer.from(priceCsv), 'history.csv')
+        .field('mapping', JSON.stringify(priceMapping)),
     expect: printers(201, { buyer: 403 }),
   },
 
-  { name: 'POST /api/auth/logout', send: () => request(app).post('/api/auth/logout'), expect: everyone(204), ownWorld: true },
+  {
+    name: 'POST /api/auth/logout',
+    send: () => request(app).post('/api/auth/logout'),
+    expect: everyone(204),
+    ownWorld: true,
+  },
 ];
 
 /**
@@ -345,7 +503,9 @@ const cases: RouteCase[] = [
  */
 async function oneEach<T>(who: Actor[], make: () => Promise<T>): Promise<ForEach<T>> {
   const [rest, ...own] = await Promise.all([make(), ...who.map(() => make())]);
-  return Object.fromEntries(actors.map((actor) => [actor, who.includes(actor) ? own[who.indexOf(actor)] : rest])) as ForEach<T>;
+  return Object.fromEntries(
+    actors.map((actor) => [actor, who.includes(actor) ? own[who.indexOf(actor)] : rest]),
+  ) as ForEach<T>;
 }
 
 /** One of `make`'s for each actor. */
@@ -373,25 +533,47 @@ async function invite(org: Organisation, admin: User) {
 }
 
 async function libraryDie(org: Organisation, listed = false): Promise<number> {
-  const [row] = await knex('libraryDies').insert({ organisationId: org.id, name: `Die ${unique()}`, ups: 1, ruleTypes: ['cut'], listed }).returning('id');
+  const [row] = await knex('libraryDies')
+    .insert({ organisationId: org.id, name: `Die ${unique()}`, ups: 1, ruleTypes: ['cut'], listed })
+    .returning('id');
   return row.id;
 }
 
 async function notice(user: User): Promise<number> {
-  return (await Notification.query().insertAndFetch({ userId: user.id, kind: 'bids_ready', title: 'Bids ready to compare', body: 'A test notice.', link: null })).id;
+  return (
+    await Notification.query().insertAndFetch({
+      userId: user.id,
+      kind: 'bids_ready',
+      title: 'Bids ready to compare',
+      body: 'A test notice.',
+      link: null,
+    })
+  ).id;
 }
 
 async function setUp(w: World): Promise<Fixtures> {
   const { printer, shop, users } = w;
   const open = (await createOpenRequest(w)).id;
   const openFile = (await DielineFile.query().findOne({ requestId: open }).throwIfNotFound()).id;
-  const question = (await callAs(w, 'estimator', 'post', `/api/requests/${open}/questions`, { question: 'Are the nicks marked?' }, 201)).id;
-  const draft = (await callAs(w, 'buyer', 'post', '/api/requests', { title: `Draft ${unique()}`, quantity: 1, ups: 1, ruleTypes: ['cut'] }, 201)).id;
+  const question = (
+    await callAs(w, 'estimator', 'post', `/api/requests/${open}/questions`, { question: 'Are the nicks marked?' }, 201)
+  ).id;
+  const draft = (
+    await callAs(
+      w,
+      'buyer',
+      'post',
+      '/api/requests',
+      { title: `Draft ${unique()}`, quantity: 1, ups: 1, ruleTypes: ['cut'] },
+      201,
+    )
+  ).id;
   const draftFile = await addDieline(w, draft);
   const printerDie = await libraryDie(printer);
   const shopDie = await libraryDie(shop, true);
   const preview = await invite(printer, users.printerAdmin);
-  const invitationEachSide = async () => bySide((await invite(printer, users.printerAdmin)).id, (await invite(shop, users.shopAdmin)).id);
+  const invitationEachSide = async () =>
+    bySide((await invite(printer, users.printerAdmin)).id, (await invite(shop, users.shopAdmin)).id);
   return {
     press: (await createPress(printer)).id,
     open,
@@ -448,14 +630,39 @@ const byModule: Record<string, ModuleCase> = {
   'POST /api/requests/:id/cancel': { action: 'cancel', target: (f, a) => f.toCancel[a], kind: printerKind, ok: 200 },
   'POST /api/requests/:id/files': { action: 'edit', target: (f) => f.draft, kind: printerKind, ok: 201 },
   'POST /api/requests/:id/questions': { action: 'ask', target: (f) => f.open, kind: shopKind, ok: 201 },
-  'POST /api/requests/:id/questions/:questionId/answer': { action: 'answer', target: (f) => f.open, kind: printerKind, ok: 200 },
+  'POST /api/requests/:id/questions/:questionId/answer': {
+    action: 'answer',
+    target: (f) => f.open,
+    kind: printerKind,
+    ok: 200,
+  },
   'POST /api/requests/:id/bids': { action: 'bid', target: (f, a) => f.toBidOn[a], kind: shopKind, ok: 201 },
   'POST /api/requests/:id/decline': { action: 'decline', target: (f) => f.open, kind: shopKind, ok: 204 },
   'PATCH /api/bids/:id': { action: 'revise', target: (f) => f.bid.id, kind: shopKind, ok: 200 },
-  'POST /api/requests/:id/close-bidding': { action: 'close-bidding', target: (f, a) => f.toClose[a], kind: printerKind, ok: 200 },
-  'POST /api/requests/:id/award (bids still sealed)': { action: 'award', target: (f) => f.open, kind: printerKind, ok: 200 },
-  'POST /api/requests/:id/award (bidding closed)': { action: 'award', target: (f, a) => f.toAward[a].id, kind: printerKind, ok: 200 },
-  'POST /api/requests/:id/start-production': { action: 'start-production', target: (f, a) => f.toStart[a], kind: shopKind, ok: 200 },
+  'POST /api/requests/:id/close-bidding': {
+    action: 'close-bidding',
+    target: (f, a) => f.toClose[a],
+    kind: printerKind,
+    ok: 200,
+  },
+  'POST /api/requests/:id/award (bids still sealed)': {
+    action: 'award',
+    target: (f) => f.open,
+    kind: printerKind,
+    ok: 200,
+  },
+  'POST /api/requests/:id/award (bidding closed)': {
+    action: 'award',
+    target: (f, a) => f.toAward[a].id,
+    kind: printerKind,
+    ok: 200,
+  },
+  'POST /api/requests/:id/start-production': {
+    action: 'start-production',
+    target: (f, a) => f.toStart[a],
+    kind: shopKind,
+    ok: 200,
+  },
   'POST /api/requests/:id/ship': { action: 'ship', target: (f, a) => f.toShip[a], kind: shopKind, ok: 200 },
   'POST /api/requests/:id/receive': { action: 'receive', target: (f, a) => f.toReceive[a], kind: printerKind, ok: 200 },
 };
@@ -463,7 +670,11 @@ const byModule: Record<string, ModuleCase> = {
 /** What the access module answers for a signed-in actor, before the route is called. */
 async function moduleAnswer(w: World, actor: Exclude<Actor, 'anonymous'>, rule: ModuleCase): Promise<number> {
   const user = w.users[actor];
-  const who: AccessActor = { organisationId: user.organisationId, orgKind: shopSide.includes(actor) ? 'die_shop' : 'printer', role: user.role };
+  const who: AccessActor = {
+    organisationId: user.organisationId,
+    orgKind: shopSide.includes(actor) ? 'die_shop' : 'printer',
+    role: user.role,
+  };
   // The route's gate on the kind of organisation answers first.
   if (rule.kind && who.orgKind !== rule.kind) return 403;
   const { facts } = (await loadFacts(knex, rule.target(fx(w), actor)))!;
@@ -513,6 +724,9 @@ describe('the matrix itself', () => {
 
   it('names only routes the app answers', () => {
     const routes = routeList(app);
-    expect(cases.map((c) => c.name).filter((name) => !routes.some((route) => covers(name, route))), 'cases naming no route').toEqual([]);
+    expect(
+      cases.map((c) => c.name).filter((name) => !routes.some((route) => covers(name, route))),
+      'cases naming no route',
+    ).toEqual([]);
   });
 });

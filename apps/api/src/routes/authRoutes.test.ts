@@ -7,7 +7,9 @@ describe('sign-in', () => {
   it('signs in with the right password and answers /api/me', async () => {
     const org = await createOrg('printer');
     const user = await createUser(org, 'buyer');
-    const login = await request(app).post('/api/auth/login').send({ email: user.email.toUpperCase(), password: PASSWORD });
+    const login = await request(app)
+      .post('/api/auth/login')
+      .send({ email: user.email.toUpperCase(), password: PASSWORD });
     expect(login.status).toBe(200);
     expect(new Date(login.body.expiresAt).getTime()).toBeGreaterThan(Date.now());
     const me = await request(app).get('/api/me').set('Authorization', `Bearer ${login.body.token}`);
@@ -20,7 +22,9 @@ describe('sign-in', () => {
     const org = await createOrg('printer');
     const user = await createUser(org, 'buyer');
     const wrong = await request(app).post('/api/auth/login').send({ email: user.email, password: 'not the password' });
-    const unknown = await request(app).post('/api/auth/login').send({ email: 'nobody-here@test.example', password: 'whatever' });
+    const unknown = await request(app)
+      .post('/api/auth/login')
+      .send({ email: 'nobody-here@test.example', password: 'whatever' });
     expect(wrong.status).toBe(401);
     expect(unknown.status).toBe(401);
     // The same answer but for each request's own id.
@@ -50,7 +54,9 @@ describe('sign-in', () => {
     const org = await createOrg('printer');
     const user = await createUser(org, 'buyer');
     for (let i = 0; i < testConfig.login.maxAttempts; i++) {
-      const res = await request(app).post('/api/auth/login').send({ email: user.email, password: `wrong ${i}` });
+      const res = await request(app)
+        .post('/api/auth/login')
+        .send({ email: user.email, password: `wrong ${i}` });
       expect(res.status).toBe(401);
     }
     // Even the right password is refused while the account is blocked from this address.
@@ -80,9 +86,17 @@ describe('tokens', () => {
   it('refuses a forged signature, the "none" algorithm and another algorithm', async () => {
     const org = await createOrg('printer');
     const user = await createUser(org, 'buyer');
-    const forged = jwt.sign(claims(user.id), 'not-our-secret', { algorithm: 'HS256', issuer: 'kerfmark', expiresIn: 600 });
+    const forged = jwt.sign(claims(user.id), 'not-our-secret', {
+      algorithm: 'HS256',
+      issuer: 'kerfmark',
+      expiresIn: 600,
+    });
     const none = jwt.sign(claims(user.id), '', { algorithm: 'none', issuer: 'kerfmark', expiresIn: 600 });
-    const hs512 = jwt.sign(claims(user.id), testConfig.jwtSecret, { algorithm: 'HS512', issuer: 'kerfmark', expiresIn: 600 });
+    const hs512 = jwt.sign(claims(user.id), testConfig.jwtSecret, {
+      algorithm: 'HS512',
+      issuer: 'kerfmark',
+      expiresIn: 600,
+    });
     for (const token of [forged, none, hs512, 'garbage', '']) {
       const res = await request(app).get('/api/me').set('Authorization', `Bearer ${token}`);
       expect(res.status).toBe(401);

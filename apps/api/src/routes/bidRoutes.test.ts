@@ -17,26 +17,43 @@ beforeAll(async () => {
 });
 
 async function pastDeadline(requestId: number) {
-  await DieRequest.query().patch({ bidDeadline: new Date(Date.now() - 60_000) }).findById(requestId);
+  await DieRequest.query()
+    .patch({ bidDeadline: new Date(Date.now() - 60_000) })
+    .findById(requestId);
 }
 
 describe('sealed bids', () => {
   it('computes totals on the server, keeps every revision, and lets a shop withdraw until the deadline', async () => {
     const open = await createOpenRequest(w);
     // A total sent by the client is ignored: the server adds the lines (84,500 + 3,500 cents).
-    const bid = await request(app).post(`/api/requests/${open.id}/bids`).set(bearer(w.tokens.estimator)).send({ ...bidBody(84_500), totalCents: 1 });
+    const bid = await request(app)
+      .post(`/api/requests/${open.id}/bids`)
+      .set(bearer(w.tokens.estimator))
+      .send({ ...bidBody(84_500), totalCents: 1 });
     expect(bid.status, JSON.stringify(bid.body)).toBe(201);
     expect(bid.body).toMatchObject({ totalCents: 88_000, revision: 1, status: 'submitted' });
     expect(bid.body.promisedShipDate > new Date().toISOString().slice(0, 10)).toBe(true);
 
-    const again = await request(app).post(`/api/requests/${open.id}/bids`).set(bearer(w.tokens.estimator)).send(bidBody(80_000));
+    const again = await request(app)
+      .post(`/api/requests/${open.id}/bids`)
+      .set(bearer(w.tokens.estimator))
+      .send(bidBody(80_000));
     expect(again.status).toBe(409);
 
-    const revised = await request(app).patch(`/api/bids/${bid.body.id}`).set(bearer(w.tokens.estimator)).send(bidBody(79_000, { leadDays: 7 }));
+    const revised = await request(app)
+      .patch(`/api/bids/${bid.body.id}`)
+      .set(bearer(w.tokens.estimator))
+      .send(bidBody(79_000, { leadDays: 7 }));
     expect(revised.body).toMatchObject({ totalCents: 82_500, revision: 2 });
     const withdrawn = await request(app).post(`/api/bids/${bid.body.id}/withdraw`).set(bearer(w.tokens.estimator));
     expect(withdrawn.body.status).toBe('withdrawn');
-    expect(withdrawn.body.revisions.map((r: { revision: number; action: string; totalCents: number }) => [r.revision, r.action, r.totalCents])).toEqual([
+    expect(
+      withdrawn.body.revisions.map((r: { revision: number; action: string; totalCents: number }) => [
+        r.revision,
+        r.action,
+        r.totalCents,
+      ]),
+    ).toEqual([
       [1, 'submitted', 88_000],
       [2, 'revised', 82_500],
       [2, 'withdrawn', 82_500],
@@ -45,7 +62,8 @@ describe('sealed bids', () => {
 
   it('refuses fractions of a cent, a missing die line, and a price that lapses before the deadline', async () => {
     const open = await createOpenRequest(w);
-    const post = (body: object) => request(app).post(`/api/requests/${open.id}/bids`).set(bearer(w.tokens.estimator)).send(body);
+    const post = (body: object) =>
+      request(app).post(`/api/requests/${open.id}/bids`).set(bearer(w.tokens.estimator)).send(body);
     const fraction = await post(bidBody(845.5));
     expect(fraction.status).toBe(400);
     expect(fraction.body.error.fields['lines.0.amountCents']).toMatch(/whole cents/);
@@ -58,14 +76,19 @@ describe('sealed bids', () => {
 
   it('keeps bids from the printer until the deadline, and from other shops always', async () => {
     const open = await createOpenRequest(w);
-    const mine = await request(app).post(`/api/requests/${open.id}/bids`).set(bearer(w.tokens.estimator)).send(bidBody(90_000));
+    const mine = await request(app)
+      .post(`/api/requests/${open.id}/bids`)
+      .set(bearer(w.tokens.estimator))
+      .send(bidBody(90_000));
     const sealed = await request(app).get(`/api/requests/${open.id}/bids`).set(bearer(w.tokens.purchasing));
     expect(sealed.status).toBe(404);
     expect(sealed.body.error.code).toBe('bids_sealed');
     expect(JSON.stringify(sealed.body)).not.toContain('90000');
 
     // Another shop: no way to read, change or count the first shop's bid.
-    expect((await request(app).patch(`/api/bids/${mine.body.id}`).set(bearer(second.token)).send(bidBody(1))).status).toBe(404);
+    expect(
+      (await request(app).patch(`/api/bids/${mine.body.id}`).set(bearer(second.token)).send(bidBody(1))).status,
+    ).toBe(404);
     expect((await request(app).post(`/api/bids/${mine.body.id}/withdraw`).set(bearer(second.token))).status).toBe(404);
     expect((await request(app).get(`/api/requests/${open.id}/bids`).set(bearer(second.token))).status).toBe(403);
     const seen = await request(app).get(`/api/requests/${open.id}`).set(bearer(second.token));
@@ -73,13 +96,18 @@ describe('sealed bids', () => {
     expect(JSON.stringify(seen.body)).not.toContain('90000');
     // Another printer sees nothing at all.
     const other = await createWorld();
-    expect((await request(app).get(`/api/requests/${open.id}/bids`).set(bearer(other.tokens.purchasing))).status).toBe(404);
+    expect((await request(app).get(`/api/requests/${open.id}/bids`).set(bearer(other.tokens.purchasing))).status).toBe(
+      404,
+    );
   });
 
   it('refuses a bid after the deadline with a clear error', async () => {
     const open = await createOpenRequest(w);
     await pastDeadline(open.id);
-    const late = await request(app).post(`/api/requests/${open.id}/bids`).set(bearer(w.tokens.estimator)).send(bidBody(1000));
+    const late = await request(app)
+      .post(`/api/requests/${open.id}/bids`)
+      .set(bearer(w.tokens.estimator))
+      .send(bidBody(1000));
     expect(late.status).toBe(409);
     expect(late.body.error.message).toMatch(/Bidding on this request closed at .*(CST|CDT)/);
   });
@@ -89,9 +117,15 @@ describe('the open-requests board', () => {
   it('shows distance from the shop, and marks requests the shop bid on or passed on', async () => {
     const first = await createOpenRequest(w);
     const second2 = await createOpenRequest(w);
-    const declined = await request(app).post(`/api/requests/${first.id}/decline`).set(bearer(w.tokens.estimator)).send({ reason: 'Too large for our laser' });
+    const declined = await request(app)
+      .post(`/api/requests/${first.id}/decline`)
+      .set(bearer(w.tokens.estimator))
+      .send({ reason: 'Too large for our laser' });
     expect(declined.status, JSON.stringify(declined.body)).toBe(204);
-    const board = await request(app).get('/api/marketplace/requests').query({ q: w.printer.name, hideDeclined: 'false' }).set(bearer(w.tokens.estimator));
+    const board = await request(app)
+      .get('/api/marketplace/requests')
+      .query({ q: w.printer.name, hideDeclined: 'false' })
+      .set(bearer(w.tokens.estimator));
     const row = (id: number) => board.body.items.find((r: { id: number }) => r.id === id);
     // Shop and delivery share the postcode 60614: no distance to speak of.
     expect(row(first.id)).toMatchObject({ declined: true, hasBid: false, distanceMiles: 0 });
@@ -102,9 +136,18 @@ describe('the open-requests board', () => {
 describe('award', () => {
   it('runs the loop: two bids, a revision, early close, comparison, award with a reason, PO, e-mails, shipping, receiving', async () => {
     const open = await createOpenRequest(w);
-    const a = await request(app).post(`/api/requests/${open.id}/bids`).set(bearer(w.tokens.estimator)).send(bidBody(95_000, { leadDays: 4 }));
-    const b = await request(app).post(`/api/requests/${open.id}/bids`).set(bearer(second.token)).send(bidBody(90_000, { leadDays: 9 }));
-    await request(app).patch(`/api/bids/${b.body.id}`).set(bearer(second.token)).send(bidBody(88_000, { leadDays: 9 }));
+    const a = await request(app)
+      .post(`/api/requests/${open.id}/bids`)
+      .set(bearer(w.tokens.estimator))
+      .send(bidBody(95_000, { leadDays: 4 }));
+    const b = await request(app)
+      .post(`/api/requests/${open.id}/bids`)
+      .set(bearer(second.token))
+      .send(bidBody(90_000, { leadDays: 9 }));
+    await request(app)
+      .patch(`/api/bids/${b.body.id}`)
+      .set(bearer(second.token))
+      .send(bidBody(88_000, { leadDays: 9 }));
 
     const closed = await request(app).post(`/api/requests/${open.id}/close-bidding`).set(bearer(w.tokens.purchasing));
     expect(closed.body.status).toBe('bidding_closed');
@@ -124,10 +167,16 @@ describe('award', () => {
     expect(lowest.best).toContain('total');
     expect(higher.best).toContain('lead');
 
-    const noReason = await request(app).post(`/api/requests/${open.id}/award`).set(bearer(w.tokens.purchasing)).send({ bidId: a.body.id });
+    const noReason = await request(app)
+      .post(`/api/requests/${open.id}/award`)
+      .set(bearer(w.tokens.purchasing))
+      .send({ bidId: a.body.id });
     expect(noReason.status).toBe(400);
     expect(noReason.body.error.fields.reason).toMatch(/\$915\.00/);
-    const buyerTries = await request(app).post(`/api/requests/${open.id}/award`).set(bearer(w.tokens.buyer)).send({ bidId: a.body.id, reason: 'x' });
+    const buyerTries = await request(app)
+      .post(`/api/requests/${open.id}/award`)
+      .set(bearer(w.tokens.buyer))
+      .send({ bidId: a.body.id, reason: 'x' });
     expect(buyerTries.status).toBe(403);
     const awarded = await request(app)
       .post(`/api/requests/${open.id}/award`)
@@ -150,12 +199,20 @@ describe('award', () => {
     expect(loserView.body.award).toBeNull();
     expect(JSON.stringify(loserView.body)).not.toContain(w.shop.name);
 
-    const pdf = await request(app).get(`/api/purchase-orders/${awarded.body.award.id}/pdf`).set(bearer(w.tokens.purchasing)).buffer(true);
+    const pdf = await request(app)
+      .get(`/api/purchase-orders/${awarded.body.award.id}/pdf`)
+      .set(bearer(w.tokens.purchasing))
+      .buffer(true);
     expect(pdf.status).toBe(200);
     expect(pdf.headers['content-type']).toBe('application/pdf');
     expect(pdf.body.subarray(0, 5).toString()).toBe('%PDF-');
-    expect((await request(app).get(`/api/purchase-orders/${awarded.body.award.id}/pdf`).set(bearer(second.token))).status).toBe(404);
-    expect((await request(app).get(`/api/purchase-orders/${awarded.body.award.id}/pdf`).set(bearer(w.tokens.estimator))).status).toBe(200);
+    expect(
+      (await request(app).get(`/api/purchase-orders/${awarded.body.award.id}/pdf`).set(bearer(second.token))).status,
+    ).toBe(404);
+    expect(
+      (await request(app).get(`/api/purchase-orders/${awarded.body.award.id}/pdf`).set(bearer(w.tokens.estimator)))
+        .status,
+    ).toBe(200);
 
     // Open Contracting Data Standard 1.1 release with the bids extension, validated with ajv.
     const release = await request(app).get(`/api/requests/${open.id}/ocds`).set(bearer(w.tokens.purchasing));
@@ -165,15 +222,32 @@ describe('award', () => {
     expect(release.body.bids.details).toHaveLength(2);
     expect((await request(app).get(`/api/requests/${open.id}/ocds`).set(bearer(second.token))).status).toBe(403);
 
-    const started = await request(app).post(`/api/requests/${open.id}/start-production`).set(bearer(w.tokens.estimator));
+    const started = await request(app)
+      .post(`/api/requests/${open.id}/start-production`)
+      .set(bearer(w.tokens.estimator));
     expect(started.body.status).toBe('in_production');
-    expect((await request(app).post(`/api/requests/${open.id}/ship`).set(bearer(second.token)).send({ trackingNote: 'x y' })).status).toBe(404);
-    const shipped = await request(app).post(`/api/requests/${open.id}/ship`).set(bearer(w.tokens.estimator)).send({ trackingNote: 'Parcel, tracking 1Z999' });
+    expect(
+      (await request(app).post(`/api/requests/${open.id}/ship`).set(bearer(second.token)).send({ trackingNote: 'x y' }))
+        .status,
+    ).toBe(404);
+    const shipped = await request(app)
+      .post(`/api/requests/${open.id}/ship`)
+      .set(bearer(w.tokens.estimator))
+      .send({ trackingNote: 'Parcel, tracking 1Z999' });
     expect(shipped.body.status).toBe('shipped');
-    const received = await request(app).post(`/api/requests/${open.id}/receive`).set(bearer(w.tokens.buyer)).send({ condition: 'good' });
+    const received = await request(app)
+      .post(`/api/requests/${open.id}/receive`)
+      .set(bearer(w.tokens.buyer))
+      .send({ condition: 'good' });
     expect(received.body.status).toBe('received');
     const record = await knex('priceRecords').where({ requestId: open.id }).first();
-    expect(record).toMatchObject({ totalCents: 98_500, dieCents: 95_000, currency: 'USD', shopId: w.shop.id, complexity: expect.any(String) });
+    expect(record).toMatchObject({
+      totalCents: 98_500,
+      dieCents: 95_000,
+      currency: 'USD',
+      shopId: w.shop.id,
+      complexity: expect.any(String),
+    });
     expect(Number(record.ruleLengthIn)).toBeCloseTo(18, 3);
 
     // The received die is in the printer's library, and another request like it finds it there.
@@ -192,10 +266,18 @@ describe('award', () => {
 
   it('gives exactly one success to 20 simultaneous awards', async () => {
     const open = await createOpenRequest(w);
-    const bid = await request(app).post(`/api/requests/${open.id}/bids`).set(bearer(w.tokens.estimator)).send(bidBody(50_000));
+    const bid = await request(app)
+      .post(`/api/requests/${open.id}/bids`)
+      .set(bearer(w.tokens.estimator))
+      .send(bidBody(50_000));
     await pastDeadline(open.id);
     const results = await Promise.all(
-      Array.from({ length: 20 }, () => request(app).post(`/api/requests/${open.id}/award`).set(bearer(w.tokens.purchasing)).send({ bidId: bid.body.id })),
+      Array.from({ length: 20 }, () =>
+        request(app)
+          .post(`/api/requests/${open.id}/award`)
+          .set(bearer(w.tokens.purchasing))
+          .send({ bidId: bid.body.id }),
+      ),
     );
     const statuses = results.map((r) => r.status);
     expect(statuses.filter((s) => s === 200)).toHaveLength(1);
@@ -208,13 +290,31 @@ describe('award', () => {
     const shops = await Promise.all(Array.from({ length: 50 }, () => createShop()));
     // Half the shops have bid already and revise; the other half send their first bid twice at once.
     const [revising, newcomers] = [shops.slice(0, 25), shops.slice(25)];
-    const first = await Promise.all(revising.map((s, i) => request(app).post(`/api/requests/${open.id}/bids`).set(bearer(s.token)).send(bidBody(60_000 + i))));
+    const first = await Promise.all(
+      revising.map((s, i) =>
+        request(app)
+          .post(`/api/requests/${open.id}/bids`)
+          .set(bearer(s.token))
+          .send(bidBody(60_000 + i)),
+      ),
+    );
     expect(first.map((r) => r.status)).toEqual(Array(25).fill(201));
     const results = await Promise.all([
-      ...revising.map((s, i) => request(app).patch(`/api/bids/${first[i]!.body.id}`).set(bearer(s.token)).send(bidBody(50_000 + i))),
+      ...revising.map((s, i) =>
+        request(app)
+          .patch(`/api/bids/${first[i]!.body.id}`)
+          .set(bearer(s.token))
+          .send(bidBody(50_000 + i)),
+      ),
       ...newcomers.flatMap((s, i) => [
-        request(app).post(`/api/requests/${open.id}/bids`).set(bearer(s.token)).send(bidBody(70_000 + i)),
-        request(app).post(`/api/requests/${open.id}/bids`).set(bearer(s.token)).send(bidBody(71_000 + i)),
+        request(app)
+          .post(`/api/requests/${open.id}/bids`)
+          .set(bearer(s.token))
+          .send(bidBody(70_000 + i)),
+        request(app)
+          .post(`/api/requests/${open.id}/bids`)
+          .set(bearer(s.token))
+          .send(bidBody(71_000 + i)),
       ]),
     ]);
     expect(results.slice(0, 25).map((r) => r.status)).toEqual(Array(25).fill(200));
@@ -230,7 +330,14 @@ describe('award', () => {
     revising.forEach((s, i) => expect(byShop.get(s.shop.id)).toMatchObject({ revision: 2, totalCents: 53_500 + i }));
     // A newcomer's one bid is whichever of its two arrived first.
     newcomers.forEach((s, i) => expect([73_500 + i, 74_500 + i]).toContain(byShop.get(s.shop.id)!.totalCents));
-    const history = await knex('bidRevisions').whereIn('bidId', rows.map((r) => r.id)).select('bidId').count('* as n').groupBy('bidId');
+    const history = await knex('bidRevisions')
+      .whereIn(
+        'bidId',
+        rows.map((r) => r.id),
+      )
+      .select('bidId')
+      .count('* as n')
+      .groupBy('bidId');
     const counts = new Map(history.map((h) => [h.bidId as number, Number(h.n)]));
     for (const row of rows) expect(counts.get(row.id)).toBe(row.revision);
   });
@@ -240,10 +347,16 @@ describe('shop holidays', () => {
   it('skips the shop’s holidays when promising a ship date', async () => {
     const shop = await createShop();
     const open = await createOpenRequest(w);
-    const plain = await request(app).post(`/api/requests/${open.id}/bids`).set(bearer(shop.token)).send(bidBody(1000, { leadDays: 1 }));
+    const plain = await request(app)
+      .post(`/api/requests/${open.id}/bids`)
+      .set(bearer(shop.token))
+      .send(bidBody(1000, { leadDays: 1 }));
     // A holiday on the promised day pushes it one working day further.
     await knex('shopHolidays').insert({ shopId: shop.shop.id, date: plain.body.promisedShipDate, name: 'Shop closed' });
-    const revised = await request(app).patch(`/api/bids/${plain.body.id}`).set(bearer(shop.token)).send(bidBody(1000, { leadDays: 1 }));
+    const revised = await request(app)
+      .patch(`/api/bids/${plain.body.id}`)
+      .set(bearer(shop.token))
+      .send(bidBody(1000, { leadDays: 1 }));
     expect(revised.body.promisedShipDate > plain.body.promisedShipDate).toBe(true);
   });
 });

@@ -56,8 +56,15 @@ export function bidRoutes(services: Services, requireAuth: RequestHandler): Rout
   });
 
   router.get('/purchase-orders/:id/pdf', requireAuth, async (req, res) => {
-    const { fileName, pdf } = await services.awards.purchaseOrder(req.user!, parseId(req.params.id, 'That purchase order'));
-    res.set({ 'Content-Type': 'application/pdf', 'Content-Disposition': `inline; filename="${fileName}"`, 'Cache-Control': 'private, no-store' });
+    const { fileName, pdf } = await services.awards.purchaseOrder(
+      req.user!,
+      parseId(req.params.id, 'That purchase order'),
+    );
+    res.set({
+      'Content-Type': 'application/pdf',
+      'Content-Disposition': `inline; filename="${fileName}"`,
+      'Cache-Control': 'private, no-store',
+    });
     res.send(pdf);
   });
 

@@ -24,9 +24,23 @@ function appWith(down: 'database' | 'redis' | 'storage') {
   const redis = createRedis(down === 'redis' ? `redis://127.0.0.1:${DEAD_PORT}` : testConfig.redisUrl);
   redis.on('error', () => undefined);
   const queues = createJobQueues(testConfig.redisUrl, pino({ level: 'silent' }));
-  const appStorage = down === 'storage' ? createStorage({ ...testConfig.storage, endpoint: `http://127.0.0.1:${DEAD_PORT}` }) : storage;
-  closers.push(() => queues.close(), () => redis.quit(), ...(down === 'database' ? [() => appKnex.destroy()] : []));
-  return createApp({ config: testConfig, knex: appKnex, redis, logger: pino({ level: 'silent' }), emails: queues.emails, analyses: queues.analyses, reminders: queues.reminders, storage: appStorage });
+  const appStorage =
+    down === 'storage' ? createStorage({ ...testConfig.storage, endpoint: `http://127.0.0.1:${DEAD_PORT}` }) : storage;
+  closers.push(
+    () => queues.close(),
+    () => redis.quit(),
+    ...(down === 'database' ? [() => appKnex.destroy()] : []),
+  );
+  return createApp({
+    config: testConfig,
+    knex: appKnex,
+    redis,
+    logger: pino({ level: 'silent' }),
+    emails: queues.emails,
+    analyses: queues.analyses,
+    reminders: queues.reminders,
+    storage: appStorage,
+  });
 }
 
 describe('health', () => {
@@ -40,23 +54,32 @@ describe('health', () => {
       expect(ready.headers['cache-control']).toBe('no-store');
       expect(ready.body).toEqual({
         status: 'ready',
-        checks: { database: { status: 'up' }, redis: { status: 'up' }, storage: { status: 'up' }, migrations: { status: 'up' } },
+        checks: {
+          database: { status: 'up' },
+          redis: { status: 'up' },
+          storage: { status: 'up' },
+          migrations: { status: 'up' },
+        },
       });
     }
   });
 
-  it.each(['database', 'redis', 'storage'] as const)('is not ready (503) while the %s is down, and still live', async (down) => {
-    const broken = appWith(down);
-    const ready = await request(broken).get('/api/health/ready');
-    expect(ready.status).toBe(503);
-    expect(ready.body.status).toBe('not_ready');
-    expect(ready.body.checks[down]).toEqual({ status: 'down', error: 'unreachable' });
-    for (const other of (['database', 'redis', 'storage'] as const).filter((name) => name !== down)) expect(ready.body.checks[other]).toEqual({ status: 'up' });
-    // Without the database the migrations cannot be compared: not ready either way.
-    expect(ready.body.checks.migrations.status).toBe(down === 'database' ? 'down' : 'up');
-    expect((await request(broken).get('/api/health')).status).toBe(503);
-    expect((await request(broken).get('/api/health/live')).status).toBe(200);
-  });
+  it.each(['database', 'redis', 'storage'] as const)(
+    'is not ready (503) while the %s is down, and still live',
+    async (down) => {
+      const broken = appWith(down);
+      const ready = await request(broken).get('/api/health/ready');
+      expect(ready.status).toBe(503);
+      expect(ready.body.status).toBe('not_ready');
+      expect(ready.body.checks[down]).toEqual({ status: 'down', error: 'unreachable' });
+      for (const other of (['database', 'redis', 'storage'] as const).filter((name) => name !== down))
+        expect(ready.body.checks[other]).toEqual({ status: 'up' });
+      // Without the database the migrations cannot be compared: not ready either way.
+      expect(ready.body.checks.migrations.status).toBe(down === 'database' ? 'down' : 'up');
+      expect((await request(broken).get('/api/health')).status).toBe(503);
+      expect((await request(broken).get('/api/health/live')).status).toBe(200);
+    },
+  );
 });
 
 describe('pendingMigrations', () => {
@@ -64,8 +87,12 @@ describe('pendingMigrations', () => {
     expect(await pendingMigrations(knex)).toEqual([]);
     const dir = await mkdtemp(path.join(os.tmpdir(), 'kerfmark-migrations-'));
     try {
-      for (const name of await readdir(migrationsDir)) await copyFile(path.join(migrationsDir, name), path.join(dir, name));
-      await writeFile(path.join(dir, '29991231000000_next.ts'), 'export async function up() {}\nexport async function down() {}\n');
+      for (const name of await readdir(migrationsDir))
+        await copyFile(path.join(migrationsDir, name), path.join(dir, name));
+      await writeFile(
+        path.join(dir, '29991231000000_next.ts'),
+        'export async function up() {}\nexport async function down() {}\n',
+      );
       expect(await pendingMigrations(knex, dir)).toEqual(['29991231000000_next.ts']);
     } finally {
       await rm(dir, { recursive: true, force: true });

@@ -54,7 +54,12 @@ export function healthRoutes(deps: { knex: Knex; redis: Redis; storage: Storage 
       probe(() => pingRedis(deps.redis)),
       probe(() => deps.storage.ping()),
     ]);
-    const migrations: Check = database.status !== 'up' ? { status: 'down', error: 'database unreachable' } : pending.length ? { status: 'behind', pending } : { status: 'up' };
+    const migrations: Check =
+      database.status !== 'up'
+        ? { status: 'down', error: 'database unreachable' }
+        : pending.length
+          ? { status: 'behind', pending }
+          : { status: 'up' };
     const checks = { database, redis, storage, migrations };
     const isReady = Object.values(checks).every((check) => check.status === 'up');
     res

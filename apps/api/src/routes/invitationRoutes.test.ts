@@ -36,13 +36,17 @@ describe('invitations', () => {
     expect(weak.status).toBe(400);
     expect(weak.body.error.fields.password).toMatch(/10 characters/);
 
-    const accepted = await request(app).post('/api/invitations/accept').send({ token, password: 'a long enough password' });
+    const accepted = await request(app)
+      .post('/api/invitations/accept')
+      .send({ token, password: 'a long enough password' });
     expect(accepted.status).toBe(201);
     const me = await request(app).get('/api/me').set('Authorization', `Bearer ${accepted.body.token}`);
     expect(me.body).toMatchObject({ email, role: 'purchasing', organisation: { id: printer.id } });
 
     // The link is spent: a second click, or a double submit, creates nothing.
-    const again = await request(app).post('/api/invitations/accept').send({ token, password: 'a long enough password' });
+    const again = await request(app)
+      .post('/api/invitations/accept')
+      .send({ token, password: 'a long enough password' });
     expect(again.status).toBe(410);
     const login = await request(app).post('/api/auth/login').send({ email, password: 'a long enough password' });
     expect(login.status).toBe(200);
@@ -51,10 +55,15 @@ describe('invitations', () => {
   it('accepts two simultaneous clicks on one link once', async () => {
     const { tokens } = await createWorld();
     const email = `double-${unique()}@test.example`;
-    await request(app).post('/api/users').set('Authorization', `Bearer ${tokens.printerAdmin}`).send({ email, name: 'Double Click', role: 'buyer' });
+    await request(app)
+      .post('/api/users')
+      .set('Authorization', `Bearer ${tokens.printerAdmin}`)
+      .send({ email, name: 'Double Click', role: 'buyer' });
     const token = tokenFrom((await waitForEmail(email)).text);
     const results = await Promise.all(
-      [1, 2, 3].map(() => request(app).post('/api/invitations/accept').send({ token, password: 'a long enough password' })),
+      [1, 2, 3].map(() =>
+        request(app).post('/api/invitations/accept').send({ token, password: 'a long enough password' }),
+      ),
     );
     expect(results.map((r) => r.status).sort()).toEqual([201, 410, 410]);
   });
@@ -70,15 +79,24 @@ describe('invitations', () => {
 
     const email = `twice-${unique()}@test.example`;
     const body = { email, name: 'Twice', role: 'buyer' };
-    expect((await request(app).post('/api/users').set('Authorization', `Bearer ${tokens.printerAdmin}`).send(body)).status).toBe(201);
-    const second = await request(app).post('/api/users').set('Authorization', `Bearer ${tokens.printerAdmin}`).send(body);
+    expect(
+      (await request(app).post('/api/users').set('Authorization', `Bearer ${tokens.printerAdmin}`).send(body)).status,
+    ).toBe(201);
+    const second = await request(app)
+      .post('/api/users')
+      .set('Authorization', `Bearer ${tokens.printerAdmin}`)
+      .send(body);
     expect(second.status).toBe(409);
     expect(second.body.error.fields.email).toBeTruthy();
   });
 
   it('answers an address with an account elsewhere as any invitation, and tells only the address', async () => {
     const { tokens, users } = await createWorld();
-    const invite = (email: string) => request(app).post('/api/users').set('Authorization', `Bearer ${tokens.printerAdmin}`).send({ email, name: 'Someone', role: 'buyer' });
+    const invite = (email: string) =>
+      request(app)
+        .post('/api/users')
+        .set('Authorization', `Bearer ${tokens.printerAdmin}`)
+        .send({ email, name: 'Someone', role: 'buyer' });
     // The estimator works at the die shop: the printer's admin must not learn that.
     const elsewhere = await invite(users.estimator.email);
     const fresh = await invite(`fresh-${unique()}@test.example`);
@@ -103,11 +121,15 @@ describe('invitations', () => {
       .set('Authorization', `Bearer ${tokens.printerAdmin}`)
       .send({ email, name: 'Resend Me', role: 'buyer' });
     const oldToken = tokenFrom((await waitForEmail(email)).text);
-    const resent = await request(app).post(`/api/invitations/${created.body.id}/resend`).set('Authorization', `Bearer ${tokens.printerAdmin}`);
+    const resent = await request(app)
+      .post(`/api/invitations/${created.body.id}/resend`)
+      .set('Authorization', `Bearer ${tokens.printerAdmin}`);
     expect(resent.status).toBe(200);
     expect((await request(app).get(`/api/invitations/preview?token=${oldToken}`)).status).toBe(410);
 
-    const revoked = await request(app).post(`/api/invitations/${created.body.id}/revoke`).set('Authorization', `Bearer ${tokens.printerAdmin}`);
+    const revoked = await request(app)
+      .post(`/api/invitations/${created.body.id}/revoke`)
+      .set('Authorization', `Bearer ${tokens.printerAdmin}`);
     expect(revoked.body.status).toBe('revoked');
     const list = await request(app).get('/api/invitations').set('Authorization', `Bearer ${tokens.printerAdmin}`);
     expect(list.body.find((i: { id: number }) => i.id === created.body.id).status).toBe('revoked');

@@ -31,7 +31,9 @@ describe('cross-organisation isolation', () => {
       .set('Authorization', `Bearer ${b.tokens.printerAdmin}`)
       .send({ name: 'Taken over' });
     expect(res.status).toBe(404);
-    expect(res.body).toEqual({ error: { code: 'not_found', message: 'That press was not found.', requestId: expect.any(String) } });
+    expect(res.body).toEqual({
+      error: { code: 'not_found', message: 'That press was not found.', requestId: expect.any(String) },
+    });
   });
 
   it('hides another organisation’s users', async () => {
@@ -65,7 +67,10 @@ describe('cross-organisation isolation', () => {
 
   it('answers a malformed id like a missing one', async () => {
     for (const id of ['abc', '-1', '0', '99999999999', '1.5']) {
-      const res = await request(app).patch(`/api/presses/${id}`).set('Authorization', `Bearer ${a.tokens.printerAdmin}`).send({ name: 'x' });
+      const res = await request(app)
+        .patch(`/api/presses/${id}`)
+        .set('Authorization', `Bearer ${a.tokens.printerAdmin}`)
+        .send({ name: 'x' });
       expect(res.status).toBe(404);
     }
   });
@@ -74,7 +79,12 @@ describe('cross-organisation isolation', () => {
     const { facts } = (await loadFacts(knex, awardedOfA.id))!;
     const outsider = { organisationId: b.printer.id, orgKind: 'printer' as const, role: 'admin' as const };
     expect(maySee(outsider, facts)).toBe(false);
-    expect(visibleParts(outsider, facts, new Date())).toMatchObject({ bids: 'none', award: 'none', purchaseOrder: false, ocdsRelease: false });
+    expect(visibleParts(outsider, facts, new Date())).toMatchObject({
+      bids: 'none',
+      award: 'none',
+      purchaseOrder: false,
+      ocdsRelease: false,
+    });
     const file = await DielineFile.query().findOne({ requestId: awardedOfA.id }).throwIfNotFound();
     const id = awardedOfA.id;
     const calls = [
@@ -97,7 +107,12 @@ describe('cross-organisation isolation', () => {
       expect(JSON.stringify(res.body)).not.toContain(a.shop.name);
     }
     // And the die shop of the other world: the awarded job is none of its business either.
-    for (const path of [`/api/requests/${id}`, `/api/requests/${id}/my-bid`, `/api/purchase-orders/${awardedOfA.awardId}/pdf`, `/api/files/${file.id}`]) {
+    for (const path of [
+      `/api/requests/${id}`,
+      `/api/requests/${id}/my-bid`,
+      `/api/purchase-orders/${awardedOfA.awardId}/pdf`,
+      `/api/files/${file.id}`,
+    ]) {
       const res = await request(app).get(path).set('Authorization', `Bearer ${b.tokens.estimator}`);
       expect(res.status, path).toBe(404);
     }

@@ -16,19 +16,33 @@ async function setRuleLength(requestId: number, inches: number, complexity: 'sim
 }
 
 async function board(query: Record<string, string | number>) {
-  const res = await request(app).get('/api/marketplace/requests').query({ q: w.printer.name, ...query }).set(bearer(w.tokens.estimator));
+  const res = await request(app)
+    .get('/api/marketplace/requests')
+    .query({ q: w.printer.name, ...query })
+    .set(bearer(w.tokens.estimator));
   expect(res.status, JSON.stringify(res.body)).toBe(200);
-  return res.body as { items: Array<{ id: number; distanceMiles: number | null; declined: boolean }>; total: number; page: number; pageSize: number };
+  return res.body as {
+    items: Array<{ id: number; distanceMiles: number | null; declined: boolean }>;
+    total: number;
+    page: number;
+    pageSize: number;
+  };
 }
 
 beforeAll(async () => {
   w = await createWorld();
-  const soon = await createOpenRequest(w, { deadline: new Date(Date.now() + DAY / 2), needByDate: new Date(Date.now() + 60 * DAY).toISOString().slice(0, 10) });
+  const soon = await createOpenRequest(w, {
+    deadline: new Date(Date.now() + DAY / 2),
+    needByDate: new Date(Date.now() + 60 * DAY).toISOString().slice(0, 10),
+  });
   const later = await createOpenRequest(w, { deadline: new Date(Date.now() + 5 * DAY) });
   const long = await createOpenRequest(w, { deadline: new Date(Date.now() + 9 * DAY) });
   const declined = await createOpenRequest(w, { deadline: new Date(Date.now() + 2 * DAY) });
   await setRuleLength(long.id, 240, 'complex');
-  await request(app).post(`/api/requests/${declined.id}/decline`).set(bearer(w.tokens.estimator)).send({ reason: 'No capacity this week' });
+  await request(app)
+    .post(`/api/requests/${declined.id}/decline`)
+    .set(bearer(w.tokens.estimator))
+    .send({ reason: 'No capacity this week' });
   // Closed to bids: not on the board at all.
   await createOpenRequest(w, { deadline: new Date(Date.now() - DAY) });
   ids = { soon: soon.id, later: later.id, long: long.id, declined: declined.id };
@@ -64,7 +78,10 @@ describe('the open-requests board', () => {
   });
 
   it('refuses filters it does not understand with a 400 naming them', async () => {
-    const res = await request(app).get('/api/marketplace/requests').query({ complexity: 'medium', ruleTypes: 'cut,laser', pageSize: 1000 }).set(bearer(w.tokens.estimator));
+    const res = await request(app)
+      .get('/api/marketplace/requests')
+      .query({ complexity: 'medium', ruleTypes: 'cut,laser', pageSize: 1000 })
+      .set(bearer(w.tokens.estimator));
     expect(res.status).toBe(400);
     // The unknown rule type is named by its place in the list (ruleTypes.1).
     expect(Object.keys(res.body.error.fields).sort()).toEqual(['complexity', 'pageSize', 'ruleTypes.1']);

@@ -13,7 +13,10 @@ export function marketplaceRoutes(services: Services, requireAuth: RequestHandle
   });
 
   router.get('/die-shops', requireAuth, allow({ kind: 'printer' }), async (_req, res) => {
-    const shops = await Organisation.query().where({ kind: 'die_shop' }).select('id', 'name', 'postcode').orderBy('name');
+    const shops = await Organisation.query()
+      .where({ kind: 'die_shop' })
+      .select('id', 'name', 'postcode')
+      .orderBy('name');
     res.json(shops.map((s) => ({ id: s.id, name: s.name, postcode: s.postcode })));
   });
 

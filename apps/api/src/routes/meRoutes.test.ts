@@ -10,10 +10,16 @@ describe('notification preferences', () => {
     const w = await createWorld();
     const start = await request(app).get('/api/me/preferences').set(bearer(w.tokens.estimator));
     expect(Object.values(start.body.email).every(Boolean)).toBe(true);
-    const saved = await request(app).put('/api/me/preferences').set(bearer(w.tokens.estimator)).send({ email: { bid_deadline_24h: false } });
+    const saved = await request(app)
+      .put('/api/me/preferences')
+      .set(bearer(w.tokens.estimator))
+      .send({ email: { bid_deadline_24h: false } });
     expect(saved.body.email.bid_deadline_24h).toBe(false);
     expect(saved.body.email.award_won).toBe(true);
-    const bad = await request(app).put('/api/me/preferences').set(bearer(w.tokens.estimator)).send({ email: { no_such_kind: false } });
+    const bad = await request(app)
+      .put('/api/me/preferences')
+      .set(bearer(w.tokens.estimator))
+      .send({ email: { no_such_kind: false } });
     expect(bad.status).toBe(400);
   });
 });
@@ -30,7 +36,12 @@ describe('the buyer’s dashboard', () => {
     expect(risky).toContain(tight.id);
     expect(risky).not.toContain(easy.id);
     expect(res.body.atRisk[0].reason).toMatch(/5 working days of lead time/);
-    expect(res.body.upcoming.filter((u: { requestId: number; kind: string }) => u.requestId === tight.id).map((u: { kind: string }) => u.kind).sort()).toEqual(['bid_deadline', 'need_by']);
+    expect(
+      res.body.upcoming
+        .filter((u: { requestId: number; kind: string }) => u.requestId === tight.id)
+        .map((u: { kind: string }) => u.kind)
+        .sort(),
+    ).toEqual(['bid_deadline', 'need_by']);
     const other = await createWorld();
     const theirs = await request(app).get('/api/me/dashboard').set(bearer(other.tokens.buyer));
     expect(theirs.body.atRisk.map((r: { requestId: number }) => r.requestId)).not.toContain(tight.id);

@@ -5,7 +5,14 @@ import { app, createWorld, unique } from '../test/harness';
 
 // Common practice: a small die-cutting press takes sheets up to about 22 × 30 in and runs about
 // 2,000 to 5,000 sheets an hour, up to about 7,800 on a fast one.
-const platen = () => ({ name: `Platen ${unique()}`, kind: 'platen', maxSheetWidthIn: 22, maxSheetLengthIn: 30, typicalSpeedSph: 5000, maxSpeedSph: 7800 });
+const platen = () => ({
+  name: `Platen ${unique()}`,
+  kind: 'platen',
+  maxSheetWidthIn: 22,
+  maxSheetLengthIn: 30,
+  typicalSpeedSph: 5000,
+  maxSpeedSph: 7800,
+});
 
 describe('presses', () => {
   it('creates, lists and edits a press, with an audit entry for each change', async () => {
@@ -15,11 +22,16 @@ describe('presses', () => {
     expect(created.status).toBe(201);
     expect(created.body).toMatchObject({ kind: 'platen', maxSheetWidthIn: 22, active: true });
 
-    const edited = await request(app).patch(`/api/presses/${created.body.id}`).set(auth).send({ active: false, typicalSpeedSph: 4500 });
+    const edited = await request(app)
+      .patch(`/api/presses/${created.body.id}`)
+      .set(auth)
+      .send({ active: false, typicalSpeedSph: 4500 });
     expect(edited.status).toBe(200);
     expect(edited.body).toMatchObject({ active: false, typicalSpeedSph: 4500, maxSpeedSph: 7800 });
 
-    const list = await request(app).get('/api/presses').set({ Authorization: `Bearer ${tokens.buyer}` });
+    const list = await request(app)
+      .get('/api/presses')
+      .set({ Authorization: `Bearer ${tokens.buyer}` });
     expect(list.body.map((p: { id: number }) => p.id)).toContain(created.body.id);
 
     const audit = await AuditEntry.query().where({ entity: 'press', entityId: created.body.id }).orderBy('id');
@@ -31,20 +43,28 @@ describe('presses', () => {
 
   it('names every invalid field', async () => {
     const { tokens } = await createWorld();
-    const res = await request(app)
-      .post('/api/presses')
-      .set('Authorization', `Bearer ${tokens.printerAdmin}`)
-      .send({ name: ' ', kind: 'laser', maxSheetWidthIn: -3, maxSheetLengthIn: '30', typicalSpeedSph: 4000.5, maxSpeedSph: 0 });
+    const res = await request(app).post('/api/presses').set('Authorization', `Bearer ${tokens.printerAdmin}`).send({
+      name: ' ',
+      kind: 'laser',
+      maxSheetWidthIn: -3,
+      maxSheetLengthIn: '30',
+      typicalSpeedSph: 4000.5,
+      maxSpeedSph: 0,
+    });
     expect(res.status).toBe(400);
     expect(Object.keys(res.body.error.fields).sort()).toEqual(
       ['kind', 'maxSheetLengthIn', 'maxSheetWidthIn', 'maxSpeedSph', 'name', 'typicalSpeedSph'].sort(),
     );
     expect(res.body.error.message).toContain('name');
     // A side too small to store to the hundredth of an inch is refused, not saved as 0.
-    const tiny = await request(app)
-      .post('/api/presses')
-      .set('Authorization', `Bearer ${tokens.printerAdmin}`)
-      .send({ name: 'Tiny', kind: 'platen', maxSheetWidthIn: 1e-300, maxSheetLengthIn: 30, typicalSpeedSph: 4000, maxSpeedSph: 5000 });
+    const tiny = await request(app).post('/api/presses').set('Authorization', `Bearer ${tokens.printerAdmin}`).send({
+      name: 'Tiny',
+      kind: 'platen',
+      maxSheetWidthIn: 1e-300,
+      maxSheetLengthIn: 30,
+      typicalSpeedSph: 4000,
+      maxSpeedSph: 5000,
+    });
     expect(tiny.status).toBe(400);
     expect(tiny.body.error.fields.maxSheetWidthIn).toBe('A sheet side is at least 1 in');
   });
@@ -52,7 +72,10 @@ describe('presses', () => {
   it('keeps the typical speed at or below the maximum, on create and on a partial edit', async () => {
     const { tokens } = await createWorld();
     const auth = { Authorization: `Bearer ${tokens.printerAdmin}` };
-    const tooFast = await request(app).post('/api/presses').set(auth).send({ ...platen(), typicalSpeedSph: 9000 });
+    const tooFast = await request(app)
+      .post('/api/presses')
+      .set(auth)
+      .send({ ...platen(), typicalSpeedSph: 9000 });
     expect(tooFast.status).toBe(400);
     expect(tooFast.body.error.fields.typicalSpeedSph).toMatch(/maximum/);
 

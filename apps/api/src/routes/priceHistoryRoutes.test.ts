@@ -8,7 +8,7 @@ const bearer = (token: string) => ({ Authorization: `Bearer ${token}` });
 /** Dies priced by a known rule, 40,000 + 300 × inches + 500 × features cents, with a little seeded spread. */
 function syntheticCsv(n: number): string {
   let seed = 7;
-  const rand = () => ((seed = (seed * 16807) % 2147483647) / 2147483647);
+  const rand = () => (seed = (seed * 16807) % 2147483647) / 2147483647;
   const rows = ['Date,Supplier,Die price,Rule length (in),Bends,Curves,Joints,Punches'];
   for (let i = 0; i < n; i++) {
     const inches = 40 + Math.round(rand() * 300);
@@ -18,10 +18,23 @@ function syntheticCsv(n: number): string {
   }
   return `${rows.join('\n')}\n`;
 }
-const mapping = { pricedOn: 'Date', shopName: 'Supplier', diePrice: 'Die price', ruleLengthIn: 'Rule length (in)', bends: 'Bends', curves: 'Curves', joints: 'Joints', punches: 'Punches' };
+const mapping = {
+  pricedOn: 'Date',
+  shopName: 'Supplier',
+  diePrice: 'Die price',
+  ruleLengthIn: 'Rule length (in)',
+  bends: 'Bends',
+  curves: 'Curves',
+  joints: 'Joints',
+  punches: 'Punches',
+};
 
 async function importCsv(token: string, csv: string) {
-  return request(app).post('/api/price-history/import').set(bearer(token)).attach('file', Buffer.from(csv), 'history.csv').field('mapping', JSON.stringify(mapping));
+  return request(app)
+    .post('/api/price-history/import')
+    .set(bearer(token))
+    .attach('file', Buffer.from(csv), 'history.csv')
+    .field('mapping', JSON.stringify(mapping));
 }
 
 describe('price history', () => {
@@ -40,7 +53,10 @@ describe('price history', () => {
 
   it('imports a CSV whole, lists it with filters, exports it, and fits it', async () => {
     const w = await createWorld();
-    const preview = await request(app).post('/api/price-history/import/preview').set(bearer(w.tokens.purchasing)).attach('file', Buffer.from(syntheticCsv(40)), 'history.csv');
+    const preview = await request(app)
+      .post('/api/price-history/import/preview')
+      .set(bearer(w.tokens.purchasing))
+      .attach('file', Buffer.from(syntheticCsv(40)), 'history.csv');
     expect(preview.status).toBe(200);
     expect(preview.body.totalRows).toBe(40);
     expect(preview.body.suggested).toMatchObject({ pricedOn: 'Date', shopName: 'Supplier', diePrice: 'Die price' });
@@ -81,7 +97,10 @@ describe('price history', () => {
     const res = await importCsv(w.tokens.purchasing, bad);
     expect(res.status).toBe(400);
     expect(res.body.error.code).toBe('import_rejected');
-    expect(res.body.error.details.rows.map((r: { row: number; field: string }) => [r.row, r.field])).toEqual([[7, 'Date'], [7, 'Die price']]);
+    expect(res.body.error.details.rows.map((r: { row: number; field: string }) => [r.row, r.field])).toEqual([
+      [7, 'Date'],
+      [7, 'Die price'],
+    ]);
     expect(await knex('priceRecords').where({ organisationId: w.printer.id })).toHaveLength(0);
   });
 
@@ -101,7 +120,7 @@ describe('price history', () => {
     expect(theirs.body.total).toBe(0);
     expect((await request(app).get('/api/price-history').set(bearer(w.tokens.estimator))).status).toBe(403);
     expect((await importCsv(w.tokens.buyer, syntheticCsv(2))).status).toBe(403);
-    for (const q of ["minIn=1;DROP TABLE price_records", "complexity=' OR 1=1 --", 'from=2026-01-01%27']) {
+    for (const q of ['minIn=1;DROP TABLE price_records', "complexity=' OR 1=1 --", 'from=2026-01-01%27']) {
       expect((await request(app).get(`/api/price-history?${q}`).set(bearer(w.tokens.buyer))).status).toBe(400);
     }
     expect(await knex('priceRecords').where({ organisationId: w.printer.id })).toHaveLength(4);

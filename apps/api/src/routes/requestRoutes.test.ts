@@ -32,7 +32,10 @@ async function createDraft(w: World, overrides: Record<string, unknown> = {}) {
 }
 
 async function upload(w: World, requestId: number, name: string, body: Buffer | string) {
-  return request(app).post(`/api/requests/${requestId}/files`).set(bearer(w.tokens.buyer)).attach('file', Buffer.from(body), name);
+  return request(app)
+    .post(`/api/requests/${requestId}/files`)
+    .set(bearer(w.tokens.buyer))
+    .attach('file', Buffer.from(body), name);
 }
 
 /** The worker (started by `npm test`) measures the file; wait for it. */
@@ -76,7 +79,10 @@ describe('die requests', () => {
     const published = await request(app).post(`/api/requests/${draft.id}/publish`).set(bearer(w.tokens.buyer));
     expect(published.status, JSON.stringify(published.body)).toBe(200);
     expect(published.body.status).toBe('open');
-    const board = await request(app).get('/api/marketplace/requests').query({ q: w.printer.name }).set(bearer(w.tokens.estimator));
+    const board = await request(app)
+      .get('/api/marketplace/requests')
+      .query({ q: w.printer.name })
+      .set(bearer(w.tokens.estimator));
     expect(board.body.items.map((r: { id: number }) => r.id)).toContain(draft.id);
     const seen = await request(app).get(`/api/requests/${draft.id}`).set(bearer(w.tokens.estimator));
     expect(seen.status).toBe(200);
@@ -123,7 +129,10 @@ describe('die requests', () => {
       .send(draftBody({ needByDate: '2026-02-30', ups: 0, ruleTypes: [] }));
     expect(bad.status).toBe(400);
     expect(Object.keys(bad.body.error.fields).sort()).toEqual(['needByDate', 'ruleTypes', 'ups']);
-    const press = await request(app).post('/api/requests').set(bearer(w.tokens.buyer)).send(draftBody({ pressId: foreignPress.id }));
+    const press = await request(app)
+      .post('/api/requests')
+      .set(bearer(w.tokens.buyer))
+      .send(draftBody({ pressId: foreignPress.id }));
     expect(press.status).toBe(400);
     expect(press.body.error.fields.pressId).toBeTruthy();
   });
@@ -136,8 +145,13 @@ describe('die requests', () => {
     await analysed(w, file.body.id);
     expect((await request(app).post(`/api/requests/${draft.id}/publish`).set(bearer(w.tokens.buyer))).status).toBe(200);
     expect((await request(app).get(`/api/requests/${draft.id}`).set(bearer(w.tokens.estimator))).status).toBe(200);
-    expect((await request(app).get(`/api/requests/${draft.id}`).set(bearer(outsider.tokens.estimator))).status).toBe(404);
-    const board = await request(app).get('/api/marketplace/requests').query({ q: w.printer.name }).set(bearer(outsider.tokens.estimator));
+    expect((await request(app).get(`/api/requests/${draft.id}`).set(bearer(outsider.tokens.estimator))).status).toBe(
+      404,
+    );
+    const board = await request(app)
+      .get('/api/marketplace/requests')
+      .query({ q: w.printer.name })
+      .set(bearer(outsider.tokens.estimator));
     expect(board.status).toBe(200);
     expect(board.body.items.map((r: { id: number }) => r.id)).not.toContain(draft.id);
   });
@@ -163,7 +177,10 @@ describe('dieline uploads', () => {
     expect(huge.body.error.message).toMatch(/larger than 25 MB/);
     const empty = await upload(w, draft.id, 'empty.dxf', Buffer.alloc(0));
     expect(empty.status).toBe(400);
-    const none = await request(app).post(`/api/requests/${draft.id}/files`).set(bearer(w.tokens.buyer)).field('note', 'x');
+    const none = await request(app)
+      .post(`/api/requests/${draft.id}/files`)
+      .set(bearer(w.tokens.buyer))
+      .field('note', 'x');
     expect(none.status).toBe(400);
     expect(none.body.error.fields.file).toBeTruthy();
   });
@@ -185,7 +202,9 @@ describe('dieline uploads', () => {
   it('settles an SVG with a DOCTYPE and external entities as failed, with the reason', async () => {
     const w = await createWorld();
     const draft = await createDraft(w);
-    const xxe = rectangleSvg.replace('<svg', '<!DOCTYPE svg [<!ENTITY xxe SYSTEM "file:///etc/passwd">]>\n<svg').replace('</svg>', '<text>&xxe;</text></svg>');
+    const xxe = rectangleSvg
+      .replace('<svg', '<!DOCTYPE svg [<!ENTITY xxe SYSTEM "file:///etc/passwd">]>\n<svg')
+      .replace('</svg>', '<text>&xxe;</text></svg>');
     const res = await upload(w, draft.id, 'entities.svg', xxe);
     expect(res.status, JSON.stringify(res.body)).toBe(201);
     const file = await analysed(w, res.body.id);
@@ -209,14 +228,22 @@ describe('dieline uploads', () => {
     const other = await createWorld();
     const draft = await createDraft(w);
     const file = await upload(w, draft.id, 'c.dxf', rectangleDxf);
-    for (const path of [`/api/requests/${draft.id}`, `/api/files/${file.body.id}`, `/api/files/${file.body.id}/download`, `/api/files/${file.body.id}/preview`]) {
+    for (const path of [
+      `/api/requests/${draft.id}`,
+      `/api/files/${file.body.id}`,
+      `/api/files/${file.body.id}/download`,
+      `/api/files/${file.body.id}/preview`,
+    ]) {
       for (const token of [other.tokens.buyer, other.tokens.estimator]) {
         const res = await request(app).get(path).set(bearer(token));
         expect(res.status, path).toBe(404);
         expect(JSON.stringify(res.body)).not.toContain('carton');
       }
     }
-    const patch = await request(app).patch(`/api/requests/${draft.id}`).set(bearer(other.tokens.buyer)).send({ title: 'mine now' });
+    const patch = await request(app)
+      .patch(`/api/requests/${draft.id}`)
+      .set(bearer(other.tokens.buyer))
+      .send({ title: 'mine now' });
     expect(patch.status).toBe(404);
     const put = await upload(other, draft.id, 'x.dxf', rectangleDxf);
     expect(put.status).toBe(404);
@@ -232,14 +259,22 @@ describe('questions', () => {
     await analysed(w, file.body.id);
     await request(app).post(`/api/requests/${draft.id}/publish`).set(bearer(w.tokens.buyer));
 
-    const asked = await request(app).post(`/api/requests/${draft.id}/questions`).set(bearer(w.tokens.estimator)).send({ question: 'Are the nicks marked?' });
+    const asked = await request(app)
+      .post(`/api/requests/${draft.id}/questions`)
+      .set(bearer(w.tokens.estimator))
+      .send({ question: 'Are the nicks marked?' });
     expect(asked.status).toBe(201);
     const otherShopBefore = await request(app).get(`/api/requests/${draft.id}`).set(bearer(second.tokens.estimator));
     expect(otherShopBefore.body.questions).toHaveLength(0);
 
-    await request(app).post(`/api/requests/${draft.id}/questions/${asked.body.id}/answer`).set(bearer(w.tokens.buyer)).send({ answer: 'Yes, on layer NICKS.' });
+    await request(app)
+      .post(`/api/requests/${draft.id}/questions/${asked.body.id}/answer`)
+      .set(bearer(w.tokens.buyer))
+      .send({ answer: 'Yes, on layer NICKS.' });
     const otherShopAfter = await request(app).get(`/api/requests/${draft.id}`).set(bearer(second.tokens.estimator));
-    expect(otherShopAfter.body.questions).toEqual([expect.objectContaining({ question: 'Are the nicks marked?', answer: 'Yes, on layer NICKS.', askedByYou: false })]);
+    expect(otherShopAfter.body.questions).toEqual([
+      expect.objectContaining({ question: 'Are the nicks marked?', answer: 'Yes, on layer NICKS.', askedByYou: false }),
+    ]);
   });
 });
 
@@ -273,7 +308,21 @@ describe('hostile dielines', () => {
     const draft = await createDraft(w);
     const lines: string[] = ['0', 'SECTION', '2', 'ENTITIES'];
     // 250,000 tiny lines: past the 200,000-entity limit of the analysis.
-    for (let i = 0; i < 250_000; i++) lines.push('0', 'LINE', '8', 'CUT', '10', String(i * 0.001), '20', '0', '11', String(i * 0.001 + 0.0005), '21', '0');
+    for (let i = 0; i < 250_000; i++)
+      lines.push(
+        '0',
+        'LINE',
+        '8',
+        'CUT',
+        '10',
+        String(i * 0.001),
+        '20',
+        '0',
+        '11',
+        String(i * 0.001 + 0.0005),
+        '21',
+        '0',
+      );
     lines.push('0', 'ENDSEC', '0', 'EOF', '');
     const res = await upload(w, draft.id, 'dust.dxf', lines.join('\n'));
     expect(res.status).toBe(201);

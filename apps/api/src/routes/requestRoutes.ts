@@ -1,6 +1,12 @@
 import { Router, type RequestHandler } from 'express';
 import { z } from 'zod';
-import { AnswerCreate, DieRequestCreate, DieRequestUpdate, QuestionCreate, RequestListQuery } from '@kerfmark/contracts';
+import {
+  AnswerCreate,
+  DieRequestCreate,
+  DieRequestUpdate,
+  QuestionCreate,
+  RequestListQuery,
+} from '@kerfmark/contracts';
 import { parse, parseId } from '../lib/parse';
 import { allow } from '../middleware/allow';
 import { uploadDieline } from '../middleware/uploadDieline';
@@ -54,7 +60,14 @@ export function requestRoutes(services: Services, requireAuth: RequestHandler, m
 
   router.post('/:id/questions/:questionId/answer', printer, async (req, res) => {
     const { answer } = parse(AnswerCreate, req.body);
-    res.json(await services.requests.answer(req.user!, id(req.params.id), parseId(req.params.questionId, 'That question'), answer));
+    res.json(
+      await services.requests.answer(
+        req.user!,
+        id(req.params.id),
+        parseId(req.params.questionId, 'That question'),
+        answer,
+      ),
+    );
   });
 
   return router;

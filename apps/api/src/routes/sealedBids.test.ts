@@ -20,24 +20,35 @@ beforeAll(async () => {
 /** An open request with a bid from each of the two shops: 80,000 + 3,500 and 70,000 + 3,500 cents. */
 async function withTwoBids(opts: Parameters<typeof createOpenRequest>[1] = {}) {
   const open = await createOpenRequest(w, opts);
-  const mine = await request(app).post(`/api/requests/${open.id}/bids`).set(bearer(w.tokens.estimator)).send(bidBody(80_000));
-  const theirs = await request(app).post(`/api/requests/${open.id}/bids`).set(bearer(second.token)).send(bidBody(70_000, { leadDays: 30 }));
+  const mine = await request(app)
+    .post(`/api/requests/${open.id}/bids`)
+    .set(bearer(w.tokens.estimator))
+    .send(bidBody(80_000));
+  const theirs = await request(app)
+    .post(`/api/requests/${open.id}/bids`)
+    .set(bearer(second.token))
+    .send(bidBody(70_000, { leadDays: 30 }));
   expect([mine.status, theirs.status]).toEqual([201, 201]);
   return { id: open.id, title: open.title, bidIds: [mine.body.id as number, theirs.body.id as number] };
 }
 
-const noticesOf = (userId: number, requestId: number) => Notification.query().where({ userId, link: `/requests/${requestId}` });
+const noticesOf = (userId: number, requestId: number) =>
+  Notification.query().where({ userId, link: `/requests/${requestId}` });
 
 /** Nothing of either bid in a body: no amount, no shop name, no count. */
 function expectNothingOfTheBids(body: unknown) {
   const text = JSON.stringify(body) ?? '';
-  for (const figure of ['83500', '73500', '83,500', '73,500', '835.00', '735.00', w.shop.name, second.shop.name]) expect(text).not.toContain(figure);
+  for (const figure of ['83500', '73500', '83,500', '73,500', '835.00', '735.00', w.shop.name, second.shop.name])
+    expect(text).not.toContain(figure);
 }
 
 describe('cancelling before the deadline', () => {
   it('keeps the bids sealed for good and tells every bidder', async () => {
     const r = await withTwoBids();
-    const cancelled = await request(app).post(`/api/requests/${r.id}/cancel`).set(bearer(w.tokens.buyer)).send({ reason: 'The job was lost.' });
+    const cancelled = await request(app)
+      .post(`/api/requests/${r.id}/cancel`)
+      .set(bearer(w.tokens.buyer))
+      .send({ reason: 'The job was lost.' });
     expect(cancelled.status, JSON.stringify(cancelled.body)).toBe(200);
     expectNothingOfTheBids(cancelled.body);
 
@@ -49,7 +60,10 @@ describe('cancelling before the deadline', () => {
     }
     // Awarding a guessed bid says nothing of it (its price, its validity, whether it exists).
     for (const bidId of [...r.bidIds, r.bidIds[1]! + 1_000]) {
-      const award = await request(app).post(`/api/requests/${r.id}/award`).set(bearer(w.tokens.purchasing)).send({ bidId });
+      const award = await request(app)
+        .post(`/api/requests/${r.id}/award`)
+        .set(bearer(w.tokens.purchasing))
+        .send({ bidId });
       expect(award.status).toBe(409);
       expectNothingOfTheBids(award.body);
     }
@@ -66,7 +80,8 @@ describe('cancelling before the deadline', () => {
 });
 
 describe('moving an open request’s deadline', () => {
-  const patch = (token: string, id: number, at: Date) => request(app).patch(`/api/requests/${id}`).set(bearer(token)).send({ bidDeadline: at.toISOString() });
+  const patch = (token: string, id: number, at: Date) =>
+    request(app).patch(`/api/requests/${id}`).set(bearer(token)).send({ bidDeadline: at.toISOString() });
 
   it('never brings it to seconds away: earlier only by purchasing, and with a day’s notice', async () => {
     const r = await withTwoBids();
@@ -102,7 +117,10 @@ describe('moving an open request’s deadline', () => {
 
   it('refuses to take the deadline away from an open request', async () => {
     const r = await withTwoBids();
-    const res = await request(app).patch(`/api/requests/${r.id}`).set(bearer(w.tokens.purchasing)).send({ bidDeadline: null });
+    const res = await request(app)
+      .patch(`/api/requests/${r.id}`)
+      .set(bearer(w.tokens.purchasing))
+      .send({ bidDeadline: null });
     expect(res.status).toBe(400);
   });
 });
@@ -110,8 +128,12 @@ describe('moving an open request’s deadline', () => {
 describe('closing early', () => {
   it('is purchasing’s, and every bidder is told', async () => {
     const r = await withTwoBids();
-    expect((await request(app).post(`/api/requests/${r.id}/close-bidding`).set(bearer(w.tokens.buyer))).status).toBe(403);
-    expect((await request(app).post(`/api/requests/${r.id}/close-bidding`).set(bearer(w.tokens.purchasing))).status).toBe(200);
+    expect((await request(app).post(`/api/requests/${r.id}/close-bidding`).set(bearer(w.tokens.buyer))).status).toBe(
+      403,
+    );
+    expect(
+      (await request(app).post(`/api/requests/${r.id}/close-bidding`).set(bearer(w.tokens.purchasing))).status,
+    ).toBe(200);
     for (const user of [w.users.estimator, second.estimator]) {
       expect((await noticesOf(user.id, r.id)).map((n) => n.kind)).toContain('bidding_closed');
     }
@@ -128,9 +150,13 @@ describe('the buyer’s home page before the deadline', () => {
     expect(home.body.atRisk.map((i: { requestId: number }) => i.requestId)).not.toContain(r.id);
     expectNothingOfTheBids(item);
     // Once the bids are opened, the lowest bid's 30 working days may count.
-    await DieRequest.query().patch({ bidDeadline: new Date(Date.now() - 60_000) }).findById(r.id);
+    await DieRequest.query()
+      .patch({ bidDeadline: new Date(Date.now() - 60_000) })
+      .findById(r.id);
     const after = await request(app).get('/api/me/dashboard').set(bearer(w.tokens.buyer));
-    expect(after.body.atRisk.find((i: { requestId: number }) => i.requestId === r.id)?.reason).toMatch(/lowest bid’s promised ship date/);
+    expect(after.body.atRisk.find((i: { requestId: number }) => i.requestId === r.id)?.reason).toMatch(
+      /lowest bid’s promised ship date/,
+    );
   });
 });
 
@@ -139,18 +165,32 @@ describe('after the award', () => {
     const r = await withTwoBids();
     // Before the deadline the printer's notices say nothing of the bids.
     for (const user of [w.users.buyer, w.users.purchasing]) expectNothingOfTheBids(await noticesOf(user.id, r.id));
-    expect((await request(app).post(`/api/requests/${r.id}/close-bidding`).set(bearer(w.tokens.purchasing))).status).toBe(200);
+    expect(
+      (await request(app).post(`/api/requests/${r.id}/close-bidding`).set(bearer(w.tokens.purchasing))).status,
+    ).toBe(200);
     // The first shop's dearer bid wins, with a reason.
-    const award = await request(app).post(`/api/requests/${r.id}/award`).set(bearer(w.tokens.purchasing)).send({ bidId: r.bidIds[0], reason: 'Faster lead time.' });
+    const award = await request(app)
+      .post(`/api/requests/${r.id}/award`)
+      .set(bearer(w.tokens.purchasing))
+      .send({ bidId: r.bidIds[0], reason: 'Faster lead time.' });
     expect(award.status, JSON.stringify(award.body)).toBe(200);
     await request(app).post(`/api/requests/${r.id}/start-production`).set(bearer(w.tokens.estimator)).expect(200);
 
     const seen = await request(app).get(`/api/requests/${r.id}`).set(bearer(second.token));
     expect(seen.status).toBe(200);
-    expect(seen.body).toMatchObject({ outcome: 'not_awarded', award: null, status: 'awarded', shippedAt: null, deliveryAddress: null, trackingNote: null });
+    expect(seen.body).toMatchObject({
+      outcome: 'not_awarded',
+      award: null,
+      status: 'awarded',
+      shippedAt: null,
+      deliveryAddress: null,
+      trackingNote: null,
+    });
     expect(JSON.stringify(seen.body)).not.toContain(w.shop.name);
     expect(JSON.stringify(seen.body)).not.toContain('83500');
-    expect((await request(app).get(`/api/purchase-orders/${award.body.award.id}/pdf`).set(bearer(second.token))).status).toBe(404);
+    expect(
+      (await request(app).get(`/api/purchase-orders/${award.body.award.id}/pdf`).set(bearer(second.token))).status,
+    ).toBe(404);
     const lost = await noticesOf(second.estimator.id, r.id);
     expect(lost.map((n) => n.kind)).toContain('award_lost');
     for (const n of lost) expect(`${n.title} ${n.body}`).not.toMatch(/\$|83,500|835|Faster/);

@@ -38,10 +38,19 @@ describe('users', () => {
       .send({ role: 'buyer' });
     expect(self.status).toBe(409);
 
-    await request(app).patch(`/api/users/${users.purchasing.id}`).set('Authorization', `Bearer ${tokens.printerAdmin}`).send({ role: 'admin' });
+    await request(app)
+      .patch(`/api/users/${users.purchasing.id}`)
+      .set('Authorization', `Bearer ${tokens.printerAdmin}`)
+      .send({ role: 'admin' });
     const [first, second] = await Promise.all([
-      request(app).patch(`/api/users/${users.purchasing.id}`).set('Authorization', `Bearer ${tokens.printerAdmin}`).send({ role: 'buyer' }),
-      request(app).patch(`/api/users/${users.printerAdmin.id}`).set('Authorization', `Bearer ${tokens.purchasing}`).send({ role: 'buyer' }),
+      request(app)
+        .patch(`/api/users/${users.purchasing.id}`)
+        .set('Authorization', `Bearer ${tokens.printerAdmin}`)
+        .send({ role: 'buyer' }),
+      request(app)
+        .patch(`/api/users/${users.printerAdmin.id}`)
+        .set('Authorization', `Bearer ${tokens.purchasing}`)
+        .send({ role: 'buyer' }),
     ]);
     expect([first.status, second.status].sort()).toEqual([200, 409]);
     const list = await request(app).get('/api/users').set('Authorization', `Bearer ${tokens.buyer}`);

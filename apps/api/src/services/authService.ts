@@ -38,10 +38,7 @@ export function createAuthService({ config, knex }: ServiceDeps, limiter: LoginL
 
     /** Revokes this token until it would have expired anyway. */
     async logout(user: AuthUser): Promise<void> {
-      await knex('revoked_tokens')
-        .insert({ jti: user.jti, expiresAt: user.tokenExpiresAt })
-        .onConflict('jti')
-        .ignore();
+      await knex('revoked_tokens').insert({ jti: user.jti, expiresAt: user.tokenExpiresAt }).onConflict('jti').ignore();
       await knex('revoked_tokens').where('expiresAt', '<', new Date()).delete();
     },
 

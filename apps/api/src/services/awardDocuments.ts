@@ -10,7 +10,10 @@ import type { createRequestService } from './requestService';
 import { primaryFile } from './requestViews';
 
 /** The award's documents: the purchase order PDF and the Open Contracting release. */
-export function createAwardDocuments({ knex, storage, logger }: ServiceDeps, requests: ReturnType<typeof createRequestService>) {
+export function createAwardDocuments(
+  { knex, storage, logger }: ServiceDeps,
+  requests: ReturnType<typeof createRequestService>,
+) {
   const awardOf = (requestId: number) => Award.query(knex).findOne({ requestId });
 
   return {
@@ -46,9 +49,23 @@ export function createAwardDocuments({ knex, storage, logger }: ServiceDeps, req
           deliveryPostcode: request.deliveryPostcode,
         },
         supplier: { organisation: shop.name, postcode: shop.postcode },
-        request: { id: request.id, title: request.title, jobReference: request.jobReference, needByDate: request.needByDate, quantity: request.quantity, ups: request.ups },
-        dieline: file && metrics ? { fileName: file.fileName, totalRuleIn: pricedLength(metrics.length), complexity: metrics.complexity } : null,
-        lines: (bid?.lines ?? []).map((l) => ({ kind: l.kind, description: l.description, amountCents: l.amountCents })),
+        request: {
+          id: request.id,
+          title: request.title,
+          jobReference: request.jobReference,
+          needByDate: request.needByDate,
+          quantity: request.quantity,
+          ups: request.ups,
+        },
+        dieline:
+          file && metrics
+            ? { fileName: file.fileName, totalRuleIn: pricedLength(metrics.length), complexity: metrics.complexity }
+            : null,
+        lines: (bid?.lines ?? []).map((l) => ({
+          kind: l.kind,
+          description: l.description,
+          amountCents: l.amountCents,
+        })),
         totalCents: award.totalCents,
         currency: award.currency,
         leadDays: award.leadDays,
@@ -57,7 +74,8 @@ export function createAwardDocuments({ knex, storage, logger }: ServiceDeps, req
         awardReason: award.reason,
         notes: request.notes,
       }).catch((error: unknown) => {
-        if (error instanceof RangeError) throw new HttpError(422, 'document_unprintable', `The purchase order cannot be printed: ${error.message}`);
+        if (error instanceof RangeError)
+          throw new HttpError(422, 'document_unprintable', `The purchase order cannot be printed: ${error.message}`);
         throw error;
       });
       const key = `purchase-orders/${award.requestId}/${award.poNumber}.pdf`;
@@ -96,9 +114,28 @@ export function createAwardDocuments({ knex, storage, logger }: ServiceDeps, req
           quantity: request.quantity,
         },
         buyer: { id: request.organisationId, name: request.organisation?.name ?? '' },
-        bids: bids.map((b) => ({ id: b.id, shop: shopOf(b), status: b.status, submittedAt: b.submittedAt, totalCents: b.totalCents, currency: b.currency })),
-        award: { id: award.id, bidId: award.bidId, shop: shopOf(awarded), awardedAt: award.awardedAt, totalCents: award.totalCents, currency: award.currency, reason: award.reason },
-        purchaseOrder: { poNumber: award.poNumber, issuedAt: award.awardedAt, status: request.status === 'cancelled' ? 'terminated' : 'active' },
+        bids: bids.map((b) => ({
+          id: b.id,
+          shop: shopOf(b),
+          status: b.status,
+          submittedAt: b.submittedAt,
+          totalCents: b.totalCents,
+          currency: b.currency,
+        })),
+        award: {
+          id: award.id,
+          bidId: award.bidId,
+          shop: shopOf(awarded),
+          awardedAt: award.awardedAt,
+          totalCents: award.totalCents,
+          currency: award.currency,
+          reason: award.reason,
+        },
+        purchaseOrder: {
+          poNumber: award.poNumber,
+          issuedAt: award.awardedAt,
+          status: request.status === 'cancelled' ? 'terminated' : 'active',
+        },
         releasedAt: new Date(),
       });
     },

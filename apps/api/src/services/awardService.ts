@@ -76,7 +76,11 @@ export function createAwardService(
         const bid = await Bid.query(trx).findOne({ id: input.bidId, requestId }).withGraphFetched('shop');
         if (!bid || bid.status !== 'submitted') throw notFound('That bid');
         if (bid.validUntil < todayIn(actor.timeZone)) {
-          throw new HttpError(409, 'bid_expired', `That bid’s price held until ${bid.validUntil}. Ask the shop to confirm it before awarding.`);
+          throw new HttpError(
+            409,
+            'bid_expired',
+            `That bid’s price held until ${bid.validUntil}. Ask the shop to confirm it before awarding.`,
+          );
         }
         const others = await Bid.query(trx).where({ requestId, status: 'submitted', currency: bid.currency });
         const lowest = Math.min(...others.map((b) => b.totalCents));
@@ -87,7 +91,9 @@ export function createAwardService(
             reason: `The lowest total is ${formatMoney({ cents: lowest, currency: bid.currency })}: write the reason for this choice`,
           });
         }
-        const { nextval } = (await trx.raw("SELECT nextval('purchase_order_numbers') AS nextval")).rows[0] as { nextval: string };
+        const { nextval } = (await trx.raw("SELECT nextval('purchase_order_numbers') AS nextval")).rows[0] as {
+          nextval: string;
+        };
         const poNumber = `PO-${new Date().getUTCFullYear()}-${String(nextval).padStart(5, '0')}`;
         let award: Award;
         try {
@@ -106,10 +112,14 @@ export function createAwardService(
             poNumber,
           });
         } catch (error) {
-          if ((error as { name?: string }).name === 'UniqueViolationError') throw conflict('This request has already been awarded.');
+          if ((error as { name?: string }).name === 'UniqueViolationError')
+            throw conflict('This request has already been awarded.');
           throw error;
         }
-        await transitionRequest(trx, actor, requestId, 'award', { reminders: deps.reminders, detail: { bidId: bid.id, poNumber, reason } });
+        await transitionRequest(trx, actor, requestId, 'award', {
+          reminders: deps.reminders,
+          detail: { bidId: bid.id, poNumber, reason },
+        });
         await tellBidders(trx, deps, requestId, (shopId) =>
           shopId === bid.shopId
             ? {
@@ -128,7 +138,9 @@ export function createAwardService(
         return award.id;
       });
       // The PDF is made and kept now; should the store be down, it is made again when opened.
-      documents.purchaseOrder(actor, awardId).catch((error: unknown) => logger.warn({ err: error, awardId }, 'purchase order PDF not stored yet'));
+      documents
+        .purchaseOrder(actor, awardId)
+        .catch((error: unknown) => logger.warn({ err: error, awardId }, 'purchase order PDF not stored yet'));
       return requests.detail(actor, requestId);
     },
 
@@ -136,7 +148,11 @@ export function createAwardService(
       await knex.transaction(async (trx) => {
         const award = await awardOf(trx, requestId);
         if (!award || award.shopId !== actor.organisationId) throw notFound('That die request');
-        await transitionRequest(trx, actor, requestId, 'start-production', { reminders: deps.reminders, awardedShopId: award.shopId, patch: { productionStartedAt: new Date() } });
+        await transitionRequest(trx, actor, requestId, 'start-production', {
+          reminders: deps.reminders,
+          awardedShopId: award.shopId,
+          patch: { productionStartedAt: new Date() },
+        });
         const request = await DieRequest.query(trx).findById(requestId).throwIfNotFound();
         await notify(trx, request.organisationId, {
           kind: 'in_production',
@@ -152,7 +168,12 @@ export function createAwardService(
       await knex.transaction(async (trx) => {
         const award = await awardOf(trx, requestId);
         if (!award || award.shopId !== actor.organisationId) throw notFound('That die request');
-        await transitionRequest(trx, actor, requestId, 'ship', { reminders: deps.reminders, awardedShopId: award.shopId, patch: { shippedAt: new Date(), trackingNote }, detail: { trackingNote } });
+        await transitionRequest(trx, actor, requestId, 'ship', {
+          reminders: deps.reminders,
+          awardedShopId: award.shopId,
+          patch: { shippedAt: new Date(), trackingNote },
+          detail: { trackingNote },
+        });
         const request = await DieRequest.query(trx).findById(requestId).throwIfNotFound();
         await notify(trx, request.organisationId, {
           kind: 'shipped',
@@ -176,7 +197,10 @@ export function createAwardService(
           patch: { receivedAt: new Date(), receivedCondition: input.condition, receivedNotes: input.notes ?? null },
           detail: { condition: input.condition },
         });
-        const request = await DieRequest.query(trx).findById(requestId).withGraphFetched('files(byUpload)').throwIfNotFound();
+        const request = await DieRequest.query(trx)
+          .findById(requestId)
+          .withGraphFetched('files(byUpload)')
+          .throwIfNotFound();
         const metrics = primaryFile(request.files)?.metrics as DielineMetrics | null | undefined;
         const shop = await Organisation.query(trx).findById(award.shopId);
         if (metrics) {

@@ -40,14 +40,19 @@ export function createBidService(
   /** The terms of a bid as the server computes them: totals from the lines, the ship date from the lead time. */
   async function terms(trx: Knex.Transaction, actor: AuthUser, request: DieRequest, input: ParsedBid) {
     const today = todayIn(actor.timeZone);
-    if (input.validUntil < today) throw badRequest('The price must hold until today at least.', { validUntil: 'Choose today or later' });
+    if (input.validUntil < today)
+      throw badRequest('The price must hold until today at least.', { validUntil: 'Choose today or later' });
     const deadlineDay = request.bidDeadline ? todayIn(actor.timeZone, request.bidDeadline) : today;
     if (input.validUntil < deadlineDay) {
-      throw badRequest('The price must hold at least until the bid deadline.', { validUntil: `Choose ${deadlineDay} or later` });
+      throw badRequest('The price must hold at least until the bid deadline.', {
+        validUntil: `Choose ${deadlineDay} or later`,
+      });
     }
     const holidays = new Set<string>(
       // knex's pluck() misses columns under the snake-case mappers, so select and map instead.
-      (await trx('shopHolidays').where({ shopId: actor.organisationId }).select('date')).map((h: { date: string }) => String(h.date)),
+      (await trx('shopHolidays').where({ shopId: actor.organisationId }).select('date')).map((h: { date: string }) =>
+        String(h.date),
+      ),
     );
     return {
       lines: input.lines,
@@ -109,12 +114,23 @@ export function createBidService(
         } catch (error) {
           // Two submissions from one shop at once: the unique key lets one through.
           if ((error as { name?: string }).name === 'UniqueViolationError') {
-            throw new HttpError(409, 'bid_exists', 'Your shop has already bid on this request: revise that bid instead.');
+            throw new HttpError(
+              409,
+              'bid_exists',
+              'Your shop has already bid on this request: revise that bid instead.',
+            );
           }
           throw error;
         }
         await BidRevision.query(trx).insert(revisionRow(created, 'submitted', actor));
-        await recordAudit(trx, { organisationId: actor.organisationId, actorUserId: actor.id, entity: 'bid', entityId: created.id, action: 'submitted', detail: { requestId, revision: 1 } });
+        await recordAudit(trx, {
+          organisationId: actor.organisationId,
+          actorUserId: actor.id,
+          entity: 'bid',
+          entityId: created.id,
+          action: 'submitted',
+          detail: { requestId, revision: 1 },
+        });
         return created;
       });
       reminders.plan(requestId);
@@ -125,11 +141,21 @@ export function createBidService(
         const { bid, request } = await ownBid(trx, actor, bidId, 'revise');
         // A revision restates the price; notes it leaves out stay as they were (null clears them).
         const restated = input.notes === undefined ? { ...input, notes: bid.notes } : input;
-        const revised = await bid
-          .$query(trx)
-          .patchAndFetch({ ...(await terms(trx, actor, request, restated)), status: 'submitted', revision: bid.revision + 1, updatedAt: new Date() });
+        const revised = await bid.$query(trx).patchAndFetch({
+          ...(await terms(trx, actor, request, restated)),
+          status: 'submitted',
+          revision: bid.revision + 1,
+          updatedAt: new Date(),
+        });
         await BidRevision.query(trx).insert(revisionRow(revised, 'revised', actor));
-        await recordAudit(trx, { organisationId: actor.organisationId, actorUserId: actor.id, entity: 'bid', entityId: bid.id, action: 'revised', detail: { revision: revised.revision } });
+        await recordAudit(trx, {
+          organisationId: actor.organisationId,
+          actorUserId: actor.id,
+          entity: 'bid',
+          entityId: bid.id,
+          action: 'revised',
+          detail: { revision: revised.revision },
+        });
         return revised;
       });
       reminders.plan(bid.requestId);
@@ -142,7 +168,13 @@ export function createBidService(
         if (bid.status === 'withdrawn') return bid;
         const withdrawn = await bid.$query(trx).patchAndFetch({ status: 'withdrawn', updatedAt: new Date() });
         await BidRevision.query(trx).insert(revisionRow(withdrawn, 'withdrawn', actor));
-        await recordAudit(trx, { organisationId: actor.organisationId, actorUserId: actor.id, entity: 'bid', entityId: bid.id, action: 'withdrawn' });
+        await recordAudit(trx, {
+          organisationId: actor.organisationId,
+          actorUserId: actor.id,
+          entity: 'bid',
+          entityId: bid.id,
+          action: 'withdrawn',
+        });
         return withdrawn;
       });
       reminders.plan(bid.requestId);
@@ -153,15 +185,27 @@ export function createBidService(
      * The shop's own past prices, from the dies it made that were received: the middle (median)
      * die price per inch of rule and per bend, per currency. Only its own awards count.
      */
-    async estimateAid(actor: AuthUser): Promise<Array<{ currency: string; dies: number; centsPerInch: number | null; centsPerBend: number | null }>> {
+    async estimateAid(
+      actor: AuthUser,
+    ): Promise<Array<{ currency: string; dies: number; centsPerInch: number | null; centsPerBend: number | null }>> {
       const rows = await knex('priceRecords')
         .where({ shopId: actor.organisationId })
         .groupBy('currency')
         .select('currency')
         .count('* as dies')
-        .select(knex.raw('percentile_cont(0.5) within group (order by die_cents / nullif(rule_length_in, 0)) as cents_per_inch'))
-        .select(knex.raw('percentile_cont(0.5) within group (order by die_cents / nullif(bends, 0)::numeric) as cents_per_bend'));
-      return (rows as Array<{ currency: string; dies: number; centsPerInch: number | null; centsPerBend: number | null }>).map((r) => ({
+        .select(
+          knex.raw(
+            'percentile_cont(0.5) within group (order by die_cents / nullif(rule_length_in, 0)) as cents_per_inch',
+          ),
+        )
+        .select(
+          knex.raw(
+            'percentile_cont(0.5) within group (order by die_cents / nullif(bends, 0)::numeric) as cents_per_bend',
+          ),
+        );
+      return (
+        rows as Array<{ currency: string; dies: number; centsPerInch: number | null; centsPerBend: number | null }>
+      ).map((r) => ({
         currency: r.currency,
         dies: Number(r.dies),
         centsPerInch: r.centsPerInch === null ? null : Math.round(Number(r.centsPerInch)),
@@ -191,11 +235,20 @@ export function createBidService(
     async compare(actor: AuthUser, requestId: number): Promise<BidComparisonDto> {
       if (actor.orgKind !== 'printer') throw notFound('That die request');
       // For a printer, the requests it may see are its own.
-      const request = await readRequestGraph(knex, requests.visibleQuery(actor, requestId), ['award', 'fileSummaries', 'submittedBids', 'ties']);
+      const request = await readRequestGraph(knex, requests.visibleQuery(actor, requestId), [
+        'award',
+        'fileSummaries',
+        'submittedBids',
+        'ties',
+      ]);
       if (!request) throw notFound('That die request');
       const bids = request.submittedBids ?? [];
       if (visibleParts(actor, factsOf(request, request.ties!), new Date()).bids !== 'all') {
-        throw new HttpError(404, 'bids_sealed', 'Bids stay sealed until the bid deadline, unless purchasing closes bidding early.');
+        throw new HttpError(
+          404,
+          'bids_sealed',
+          'Bids stay sealed until the bid deadline, unless purchasing closes bidding early.',
+        );
       }
       const metrics = primaryFile(request.files)?.metrics as DielineMetrics | null | undefined;
       const ruleLengthIn = metrics ? pricedLength(metrics.length) : null;
@@ -209,9 +262,25 @@ export function createBidService(
         requestId,
         needByDate: request.needByDate,
         priceRuleIn: ruleLengthIn,
-        fairPrice: fair.enough ? { lowCents: fair.band.lowCents, typicalCents: fair.band.typicalCents, highCents: fair.band.highCents, currency: fair.band.currency } : null,
+        fairPrice: fair.enough
+          ? {
+              lowCents: fair.band.lowCents,
+              typicalCents: fair.band.typicalCents,
+              highCents: fair.band.highCents,
+              currency: fair.band.currency,
+            }
+          : null,
         award: award
-          ? { id: award.id, bidId: award.bidId, shopName: award.shop?.name ?? '', totalCents: award.totalCents, currency: award.currency, reason: award.reason, poNumber: award.poNumber, awardedAt: award.awardedAt.toISOString() }
+          ? {
+              id: award.id,
+              bidId: award.bidId,
+              shopName: award.shop?.name ?? '',
+              totalCents: award.totalCents,
+              currency: award.currency,
+              reason: award.reason,
+              poNumber: award.poNumber,
+              awardedAt: award.awardedAt.toISOString(),
+            }
           : null,
         bids: rows.map((row) => ({
           bidId: row.bid.id,

@@ -43,7 +43,9 @@ export async function boardPage(
     if (q.hideDeclined) query.whereNotIn('r.id', knex('requestDeclines').where({ shopId }).select('requestId'));
     if (q.q) {
       const like = containsPattern(q.q);
-      query.join('organisations as o', 'o.id', 'r.organisationId').where((b) => b.whereILike('r.title', like).orWhereILike('r.jobReference', like).orWhereILike('o.name', like));
+      query
+        .join('organisations as o', 'o.id', 'r.organisationId')
+        .where((b) => b.whereILike('r.title', like).orWhereILike('r.jobReference', like).orWhereILike('o.name', like));
     }
     return query;
   };
@@ -53,7 +55,14 @@ export async function boardPage(
     .select(knex.raw('r.id in (select request_id from bids where shop_id = ?) as has_bid', [shopId]));
   if (miles.length) {
     const values = miles.map(() => '(?::text, ?::float8)').join(', ');
-    page.leftJoin(knex.raw(`(values ${values}) as d (postcode, miles)`, miles.flatMap((m) => [m.postcode, m.miles])), 'd.postcode', knex.raw('left(trim(r.delivery_postcode), 5)'));
+    page.leftJoin(
+      knex.raw(
+        `(values ${values}) as d (postcode, miles)`,
+        miles.flatMap((m) => [m.postcode, m.miles]),
+      ),
+      'd.postcode',
+      knex.raw('left(trim(r.delivery_postcode), 5)'),
+    );
   } else {
     page.crossJoin(knex.raw('(select null::float8 as miles) as d'));
   }
@@ -78,11 +87,14 @@ export async function boardPage(
     ['organisation', 'press', 'fileSummaries'],
     SUMMARY_COLUMNS,
   )) as Array<DieRequest & BoardRow & { totalMatches: number }>;
-  const total = requests[0]?.totalMatches ?? Number(((await count().options({ prepare: true })) as Array<{ count: number }>)[0]?.count ?? 0);
+  const total =
+    requests[0]?.totalMatches ??
+    Number(((await count().options({ prepare: true })) as Array<{ count: number }>)[0]?.count ?? 0);
   return {
     rows: requests.map((request) => {
       const { distanceMiles, declined, hasBid } = request;
-      for (const key of ['distanceMiles', 'declined', 'hasBid', 'totalMatches'] as const) delete (request as Partial<typeof request>)[key];
+      for (const key of ['distanceMiles', 'declined', 'hasBid', 'totalMatches'] as const)
+        delete (request as Partial<typeof request>)[key];
       return { request, distanceMiles: distanceMiles === null ? null : Math.round(distanceMiles), declined, hasBid };
     }),
     total,

@@ -11,7 +11,8 @@ const HORIZON_DAYS = 30;
 
 /** The owner's own request, so the only ties the rule reads are none. */
 const mayReckonWithBids = (actor: AuthUser, r: DieRequest, now: Date) =>
-  visibleParts(actor, factsOf(r, { invitedShopIds: [], bidderShopIds: [], awardedShopId: null }), now).bidFiguresOnDashboard;
+  visibleParts(actor, factsOf(r, { invitedShopIds: [], bidderShopIds: [], awardedShopId: null }), now)
+    .bidFiguresOnDashboard;
 
 export function createDashboardService(_deps: ServiceDeps) {
   /**
@@ -30,18 +31,33 @@ export function createDashboardService(_deps: ServiceDeps) {
     const ids = requests.map((r) => r.id);
     const [awards, bids] = await Promise.all([
       Award.query().whereIn('requestId', ids),
-      Bid.query().whereIn('requestId', requests.filter((r) => mayReckonWithBids(actor, r, now)).map((r) => r.id)).where({ status: 'submitted' }).orderBy('totalCents'),
+      Bid.query()
+        .whereIn(
+          'requestId',
+          requests.filter((r) => mayReckonWithBids(actor, r, now)).map((r) => r.id),
+        )
+        .where({ status: 'submitted' })
+        .orderBy('totalCents'),
     ]);
     const items: AtRiskItem[] = [];
     for (const request of requests) {
       const award = awards.find((a) => a.requestId === request.id);
       const best = bids.find((b) => b.requestId === request.id);
-      const dieExpected = award?.promisedShipDate ?? best?.promisedShipDate ?? addWorkingDays(today, request.plannedLeadDays);
+      const dieExpected =
+        award?.promisedShipDate ?? best?.promisedShipDate ?? addWorkingDays(today, request.plannedLeadDays);
       const hours = request.press && request.runSheets ? runHours(request.runSheets, request.press.typicalSpeedSph) : 0;
-      const check = checkArrival({ needByDate: request.needByDate!, dieReadyBy: dieExpected < today ? today : dieExpected, runHours: hours });
+      const check = checkArrival({
+        needByDate: request.needByDate!,
+        dieReadyBy: dieExpected < today ? today : dieExpected,
+        runHours: hours,
+      });
       const late = Boolean(request.lateFlaggedAt);
       if (check.ok && !late) continue;
-      const source = award ? 'the awarded shop’s promised ship date' : best ? 'the lowest bid’s promised ship date' : `${request.plannedLeadDays} working days of lead time from today`;
+      const source = award
+        ? 'the awarded shop’s promised ship date'
+        : best
+          ? 'the lowest bid’s promised ship date'
+          : `${request.plannedLeadDays} working days of lead time from today`;
       items.push({
         requestId: request.id,
         title: request.title,
@@ -68,20 +84,31 @@ export function createDashboardService(_deps: ServiceDeps) {
     const items: UpcomingItem[] = [];
     if (actor.orgKind === 'printer') {
       const requests = await DieRequest.query().where({ organisationId: actor.organisationId }).whereIn('status', LIVE);
-      const awards = await Award.query().whereIn('requestId', requests.map((r) => r.id));
+      const awards = await Award.query().whereIn(
+        'requestId',
+        requests.map((r) => r.id),
+      );
       for (const r of requests) {
-        if (r.status === 'open' && r.bidDeadline && r.bidDeadline > now && r.bidDeadline < until) items.push({ requestId: r.id, title: r.title, kind: 'bid_deadline', at: r.bidDeadline.toISOString() });
-        if (r.needByDate && r.needByDate >= today && r.needByDate <= untilDay) items.push({ requestId: r.id, title: r.title, kind: 'need_by', at: r.needByDate });
+        if (r.status === 'open' && r.bidDeadline && r.bidDeadline > now && r.bidDeadline < until)
+          items.push({ requestId: r.id, title: r.title, kind: 'bid_deadline', at: r.bidDeadline.toISOString() });
+        if (r.needByDate && r.needByDate >= today && r.needByDate <= untilDay)
+          items.push({ requestId: r.id, title: r.title, kind: 'need_by', at: r.needByDate });
         const award = awards.find((a) => a.requestId === r.id);
-        if (award && !r.shippedAt && award.promisedShipDate <= untilDay) items.push({ requestId: r.id, title: r.title, kind: 'promised_ship', at: award.promisedShipDate });
+        if (award && !r.shippedAt && award.promisedShipDate <= untilDay)
+          items.push({ requestId: r.id, title: r.title, kind: 'promised_ship', at: award.promisedShipDate });
       }
     } else {
-      const open = await visibleTo(DieRequest.query(), actor).where('die_requests.status', 'open').where('die_requests.bidDeadline', '>', now).where('die_requests.bidDeadline', '<', until);
-      for (const r of open) items.push({ requestId: r.id, title: r.title, kind: 'bid_deadline', at: r.bidDeadline!.toISOString() });
+      const open = await visibleTo(DieRequest.query(), actor)
+        .where('die_requests.status', 'open')
+        .where('die_requests.bidDeadline', '>', now)
+        .where('die_requests.bidDeadline', '<', until);
+      for (const r of open)
+        items.push({ requestId: r.id, title: r.title, kind: 'bid_deadline', at: r.bidDeadline!.toISOString() });
       const won = await Award.query().where({ shopId: actor.organisationId }).withGraphFetched('request');
       for (const award of won as Array<Award & { request?: DieRequest }>) {
         const r = award.request;
-        if (r && !r.shippedAt && ['awarded', 'in_production'].includes(r.status)) items.push({ requestId: r.id, title: r.title, kind: 'promised_ship', at: award.promisedShipDate });
+        if (r && !r.shippedAt && ['awarded', 'in_production'].includes(r.status))
+          items.push({ requestId: r.id, title: r.title, kind: 'promised_ship', at: award.promisedShipDate });
       }
     }
     return items.sort((a, b) => a.at.localeCompare(b.at));

@@ -14,7 +14,11 @@ export interface OutgoingEmail {
  * Puts an e-mail in the outbox inside the caller's transaction and hands it to the worker once
  * that transaction commits; a rollback sends nothing.
  */
-export async function queueEmail(trx: Knex.Transaction, emails: EmailDispatcher, email: OutgoingEmail): Promise<number> {
+export async function queueEmail(
+  trx: Knex.Transaction,
+  emails: EmailDispatcher,
+  email: OutgoingEmail,
+): Promise<number> {
   const row = await EmailOutbox.query(trx).insert({
     toAddress: email.to,
     subject: email.subject,

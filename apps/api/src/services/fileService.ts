@@ -34,7 +34,11 @@ function sniff(file: UploadedFile): DielineFormat {
 }
 
 const storageDown = () =>
-  new HttpError(503, 'storage_unavailable', 'The file store is not answering, so the file was not saved. Try again in a minute.');
+  new HttpError(
+    503,
+    'storage_unavailable',
+    'The file store is not answering, so the file was not saved. Try again in a minute.',
+  );
 
 export function createFileService(
   { knex, storage, analyses, logger }: ServiceDeps,
@@ -163,7 +167,8 @@ export function createFileService(
 
     async remove(actor: AuthUser, fileId: number): Promise<void> {
       const { file, request } = await ownedFile(actor, fileId);
-      if (request.status !== 'draft') throw conflict('Files can be removed from a draft only; an open request keeps what shops have seen.');
+      if (request.status !== 'draft')
+        throw conflict('Files can be removed from a draft only; an open request keeps what shops have seen.');
       await knex.transaction(async (trx) => {
         await DielineFile.query(trx).deleteById(file.id);
         if (file.isPrimary) {
@@ -179,7 +184,9 @@ export function createFileService(
           detail: { requestId: file.requestId, fileName: file.fileName },
         });
       });
-      await storage.remove(file.s3Key).catch((error: unknown) => logger.warn({ err: error }, 'stored file left behind'));
+      await storage
+        .remove(file.s3Key)
+        .catch((error: unknown) => logger.warn({ err: error }, 'stored file left behind'));
     },
   };
 }

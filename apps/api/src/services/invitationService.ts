@@ -87,7 +87,10 @@ export function createInvitationService({ config, knex, emails }: ServiceDeps) {
           });
         }
         // An earlier invitation to the same address that lapsed is replaced; a live one is a conflict.
-        const earlier = await Invitation.query(trx).findOne({ email: input.email }).whereNull('acceptedAt').whereNull('revokedAt');
+        const earlier = await Invitation.query(trx)
+          .findOne({ email: input.email })
+          .whereNull('acceptedAt')
+          .whereNull('revokedAt');
         if (earlier && earlier.status === 'pending') {
           throw new HttpError(409, 'conflict', 'That address already has an open invitation. Resend it instead.', {
             email: 'Already invited',
@@ -120,9 +123,12 @@ export function createInvitationService({ config, knex, emails }: ServiceDeps) {
     /** A new link (the old one stops working) and a fresh expiry. */
     async resend(actor: AuthUser, id: number): Promise<InvitationDto> {
       return knex.transaction(async (trx) => {
-        const invitation = await Invitation.query(trx).findOne({ id, organisationId: actor.organisationId }).forUpdate();
+        const invitation = await Invitation.query(trx)
+          .findOne({ id, organisationId: actor.organisationId })
+          .forUpdate();
         if (!invitation) throw notFound('That invitation');
-        if (invitation.acceptedAt || invitation.revokedAt) throw conflict('That invitation was already accepted or revoked.');
+        if (invitation.acceptedAt || invitation.revokedAt)
+          throw conflict('That invitation was already accepted or revoked.');
         const { token, hash } = newToken();
         const updated = await invitation.$query(trx).patchAndFetch({ tokenHash: hash, expiresAt: expiry() });
         await sendInvitation(trx, actor, updated, token);
@@ -139,10 +145,14 @@ export function createInvitationService({ config, knex, emails }: ServiceDeps) {
 
     async revoke(actor: AuthUser, id: number): Promise<InvitationDto> {
       return knex.transaction(async (trx) => {
-        const invitation = await Invitation.query(trx).findOne({ id, organisationId: actor.organisationId }).forUpdate();
+        const invitation = await Invitation.query(trx)
+          .findOne({ id, organisationId: actor.organisationId })
+          .forUpdate();
         if (!invitation) throw notFound('That invitation');
         if (invitation.acceptedAt) throw conflict('That invitation was already accepted.');
-        const updated = invitation.revokedAt ? invitation : await invitation.$query(trx).patchAndFetch({ revokedAt: new Date() });
+        const updated = invitation.revokedAt
+          ? invitation
+          : await invitation.$query(trx).patchAndFetch({ revokedAt: new Date() });
         await recordAudit(trx, {
           organisationId: actor.organisationId,
           actorUserId: actor.id,
@@ -174,7 +184,11 @@ export function createInvitationService({ config, knex, emails }: ServiceDeps) {
         if (!invitation || invitation.status !== 'pending') throw invalidLink();
         // Told to the holder of the link (the address's owner), never to the inviting organisation.
         if (await User.query(trx).findOne({ email: invitation.email })) {
-          throw new HttpError(409, 'account_exists', 'This e-mail address already has a Kerfmark account. Sign in with it, or ask for an invitation to another address.');
+          throw new HttpError(
+            409,
+            'account_exists',
+            'This e-mail address already has a Kerfmark account. Sign in with it, or ask for an invitation to another address.',
+          );
         }
         const user = await User.query(trx).insertAndFetch({
           organisationId: invitation.organisationId,

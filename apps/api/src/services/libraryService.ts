@@ -45,8 +45,30 @@ export function createLibraryService({ knex }: ServiceDeps, requests: ReturnType
     knex('libraryDies as d')
       .join('organisations as o', 'o.id', 'd.organisationId')
       .leftJoin('presses as p', 'p.id', 'd.pressId')
-      .where((q) => q.where('d.organisationId', actor.organisationId).orWhere((l) => l.where('d.listed', true).where('o.kind', 'die_shop')))
-      .select('d.id', 'd.name', 'd.organisationId', 'o.name as ownerName', 'd.requestId', 'd.pieceWidthIn', 'd.pieceHeightIn', 'd.ups', 'd.ruleTypes', 'p.name as pressName', 'd.storageLocation', 'd.condition', 'd.impressions', 'd.impressionLimit', 'd.lastUsedOn', 'd.listed', 'd.metrics');
+      .where((q) =>
+        q
+          .where('d.organisationId', actor.organisationId)
+          .orWhere((l) => l.where('d.listed', true).where('o.kind', 'die_shop')),
+      )
+      .select(
+        'd.id',
+        'd.name',
+        'd.organisationId',
+        'o.name as ownerName',
+        'd.requestId',
+        'd.pieceWidthIn',
+        'd.pieceHeightIn',
+        'd.ups',
+        'd.ruleTypes',
+        'p.name as pressName',
+        'd.storageLocation',
+        'd.condition',
+        'd.impressions',
+        'd.impressionLimit',
+        'd.lastUsedOn',
+        'd.listed',
+        'd.metrics',
+      );
 
   async function own(trx: Knex | Knex.Transaction, actor: AuthUser, id: number) {
     const die = await trx('libraryDies').where({ id, organisationId: actor.organisationId }).forUpdate().first();
@@ -63,14 +85,31 @@ export function createLibraryService({ knex }: ServiceDeps, requests: ReturnType
       const row = (await visible(actor).where('d.id', id).select('d.preview').first()) as Row | undefined;
       if (!row) throw notFound('That die');
       const runs = await knex('dieRuns').where({ dieId: id }).orderBy('runOn', 'desc').limit(200);
-      return { ...toDto(row, actor), preview: row.preview, runs: runs.map((r: Row) => ({ id: Number(r.id), runOn: String(r.runOn), impressions: Number(r.impressions), jobReference: (r.jobReference as string | null) ?? null, notes: (r.notes as string | null) ?? null })) };
+      return {
+        ...toDto(row, actor),
+        preview: row.preview,
+        runs: runs.map((r: Row) => ({
+          id: Number(r.id),
+          runOn: String(r.runOn),
+          impressions: Number(r.impressions),
+          jobReference: (r.jobReference as string | null) ?? null,
+          notes: (r.notes as string | null) ?? null,
+        })),
+      };
     },
 
     async update(actor: AuthUser, id: number, patch: z.output<typeof LibraryDieUpdate>): Promise<LibraryDieDto> {
       await knex.transaction(async (trx) => {
         await own(trx, actor, id);
         await trx('libraryDies').where({ id }).update(patch);
-        await recordAudit(trx, { organisationId: actor.organisationId, actorUserId: actor.id, entity: 'library_die', entityId: id, action: 'updated', detail: { ...patch } });
+        await recordAudit(trx, {
+          organisationId: actor.organisationId,
+          actorUserId: actor.id,
+          entity: 'library_die',
+          entityId: id,
+          action: 'updated',
+          detail: { ...patch },
+        });
       });
       return this.get(actor, id);
     },
@@ -79,9 +118,18 @@ export function createLibraryService({ knex }: ServiceDeps, requests: ReturnType
     async addRun(actor: AuthUser, id: number, run: z.output<typeof DieRunInput>): Promise<LibraryDieDto> {
       await knex.transaction(async (trx) => {
         const die = await own(trx, actor, id);
-        await trx('dieRuns').insert({ dieId: id, runOn: run.runOn, impressions: run.impressions, jobReference: run.jobReference ?? null, notes: run.notes ?? null, createdBy: actor.id });
+        await trx('dieRuns').insert({
+          dieId: id,
+          runOn: run.runOn,
+          impressions: run.impressions,
+          jobReference: run.jobReference ?? null,
+          notes: run.notes ?? null,
+          createdBy: actor.id,
+        });
         const lastUsedOn = !die.lastUsedOn || run.runOn > die.lastUsedOn ? run.runOn : die.lastUsedOn;
-        await trx('libraryDies').where({ id }).update({ impressions: Number(die.impressions) + run.impressions, lastUsedOn });
+        await trx('libraryDies')
+          .where({ id })
+          .update({ impressions: Number(die.impressions) + run.impressions, lastUsedOn });
       });
       return this.get(actor, id);
     },
@@ -96,9 +144,19 @@ export function createLibraryService({ knex }: ServiceDeps, requests: ReturnType
         ups: request.ups,
         metrics: (primaryFile(request.files)?.metrics as DielineMetrics | null | undefined) ?? null,
       };
-      const candidates = ((await visible(actor).whereNot('d.condition', 'retired').limit(2000)) as Row[]).map((r) => toDto(r, actor)).filter((d) => d.requestId !== requestId);
+      const candidates = ((await visible(actor).whereNot('d.condition', 'retired').limit(2000)) as Row[])
+        .map((r) => toDto(r, actor))
+        .filter((d) => d.requestId !== requestId);
       return candidates
-        .map((d) => ({ ...d, match: matchDies(wanted, { pieceWidthIn: d.pieceWidthIn, pieceHeightIn: d.pieceHeightIn, ups: d.ups, metrics: d.metrics }) }))
+        .map((d) => ({
+          ...d,
+          match: matchDies(wanted, {
+            pieceWidthIn: d.pieceWidthIn,
+            pieceHeightIn: d.pieceHeightIn,
+            ups: d.ups,
+            metrics: d.metrics,
+          }),
+        }))
         .filter((d) => d.match.score >= minScore)
         .sort((a, b) => b.match.score - a.match.score)
         .slice(0, 10);
@@ -107,7 +165,13 @@ export function createLibraryService({ knex }: ServiceDeps, requests: ReturnType
     /** A received custom die joins the printer's library, with its dieline. */
     async addReceived(trx: Knex.Transaction, requestId: number): Promise<void> {
       const request = await trx('dieRequests').where({ id: requestId }).first();
-      const file = await trx('dielineFiles').where({ requestId, analysisStatus: 'done' }).orderBy([{ column: 'isPrimary', order: 'desc' }, { column: 'uploadedAt', order: 'desc' }]).first();
+      const file = await trx('dielineFiles')
+        .where({ requestId, analysisStatus: 'done' })
+        .orderBy([
+          { column: 'isPrimary', order: 'desc' },
+          { column: 'uploadedAt', order: 'desc' },
+        ])
+        .first();
       await trx('libraryDies').insert({
         organisationId: request.organisationId,
         name: request.jobReference ? `${request.title} (${request.jobReference})` : request.title,

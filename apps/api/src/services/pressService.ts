@@ -10,17 +10,18 @@ import { recordAudit } from './auditService';
 import type { ServiceDeps } from './deps';
 
 const duplicateName = () =>
-  new HttpError(409, 'conflict', 'This organisation already has a press with that name.', { name: 'Choose another name' });
+  new HttpError(409, 'conflict', 'This organisation already has a press with that name.', {
+    name: 'Choose another name',
+  });
 
 const isUniqueViolation = (error: unknown) => error instanceof UniqueViolationError;
 
 export function createPressService({ knex }: ServiceDeps) {
   return {
     async list(actor: AuthUser): Promise<PressDto[]> {
-      const presses = await Press.query().where({ organisationId: actor.organisationId }).orderBy([
-        { column: 'active', order: 'desc' },
-        { column: 'name' },
-      ]);
+      const presses = await Press.query()
+        .where({ organisationId: actor.organisationId })
+        .orderBy([{ column: 'active', order: 'desc' }, { column: 'name' }]);
       return presses.map(toPressDto);
     },
 

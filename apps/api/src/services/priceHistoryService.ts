@@ -88,13 +88,29 @@ export function createPriceHistoryService({ knex }: ServiceDeps) {
 
   /** The currency most of the filtered records are in, when the filters name none. */
   async function mainCurrency(organisationId: number, f: Partial<Filters>): Promise<string | null> {
-    const row = await filteredRecords(knex, organisationId, f).groupBy('currency').select('currency').count('* as n').orderBy('n', 'desc').first();
+    const row = await filteredRecords(knex, organisationId, f)
+      .groupBy('currency')
+      .select('currency')
+      .count('* as n')
+      .orderBy('n', 'desc')
+      .first();
     return (row?.currency as string | undefined) ?? null;
   }
 
   async function observations(organisationId: number, f: Partial<Filters>, currency: string) {
     const [{ count }] = await filteredRecords(knex, organisationId, { ...f, currency }).count('* as count');
-    const q = filteredRecords(knex, organisationId, { ...f, currency }).select('dieCents', 'currency', 'ruleLengthIn', 'bends', 'curves', 'joints', 'punches', 'complexity', 'pricedOn', 'shopName');
+    const q = filteredRecords(knex, organisationId, { ...f, currency }).select(
+      'dieCents',
+      'currency',
+      'ruleLengthIn',
+      'bends',
+      'curves',
+      'joints',
+      'punches',
+      'complexity',
+      'pricedOn',
+      'shopName',
+    );
     // A sample in a fixed pseudo-random order (by a hash of the id), not random(): every API
     // instance, and every refit, then shows the same band for the same history.
     if (Number(count) > FIT_SAMPLE) q.orderByRaw('hashint8(price_records.id)').limit(FIT_SAMPLE);
@@ -120,9 +136,20 @@ export function createPriceHistoryService({ knex }: ServiceDeps) {
     if (!metrics) return { enough: false as const, reason: 'The request has no measured dieline yet.', needed: 0 };
     const fit = await historyFit(organisationId, currency);
     if (!fit.enough) return fit;
-    const die = { ruleLengthIn: pricedLength(metrics.length), features: metrics.bends + metrics.curves + metrics.joints + metrics.punches };
-    if (!(die.ruleLengthIn > 0)) return { enough: false as const, reason: 'The dieline has no priced rule to price.', needed: 0 };
-    return { enough: true as const, band: fairPriceBand(fit, die), die, model: fit.model, n: fit.n, describe: fit.describe };
+    const die = {
+      ruleLengthIn: pricedLength(metrics.length),
+      features: metrics.bends + metrics.curves + metrics.joints + metrics.punches,
+    };
+    if (!(die.ruleLengthIn > 0))
+      return { enough: false as const, reason: 'The dieline has no priced rule to price.', needed: 0 };
+    return {
+      enough: true as const,
+      band: fairPriceBand(fit, die),
+      die,
+      model: fit.model,
+      n: fit.n,
+      describe: fit.describe,
+    };
   }
 
   return {
@@ -132,7 +159,19 @@ export function createPriceHistoryService({ knex }: ServiceDeps) {
     /** The fit, the band along rule length, price per inch by class and by quarter, and points to plot. */
     async fit(actor: AuthUser, f: Filters) {
       const currency = f.currency ?? (await mainCurrency(actor.organisationId, f));
-      if (!currency) return { currency: null, total: 0, sampled: 0, fit: { enough: false, reason: 'There are no price records for these filters yet.', needed: 8 }, perInch: null, trend: null, curve: [], points: [], shops: [], rule: MODEL_CHOICE_RULE };
+      if (!currency)
+        return {
+          currency: null,
+          total: 0,
+          sampled: 0,
+          fit: { enough: false, reason: 'There are no price records for these filters yet.', needed: 8 },
+          perInch: null,
+          trend: null,
+          curve: [],
+          points: [],
+          shops: [],
+          rule: MODEL_CHOICE_RULE,
+        };
       const { total, rows } = await observations(actor.organisationId, f, currency);
       const obs = rows.map((r) => r.observation);
       const fit = fitPrice(obs);
@@ -141,7 +180,10 @@ export function createPriceHistoryService({ knex }: ServiceDeps) {
       const lengths = obs.map((o) => o.ruleLengthIn);
       const [lo, hi] = [Math.min(...lengths), Math.max(...lengths)];
       const curve = fit.enough
-        ? Array.from({ length: 25 }, (_, i) => lo + ((hi - lo) * i) / 24).map((ruleLengthIn) => ({ ruleLengthIn, ...fairPriceBand(fit, { ruleLengthIn, features: typicalFeatures }) }))
+        ? Array.from({ length: 25 }, (_, i) => lo + ((hi - lo) * i) / 24).map((ruleLengthIn) => ({
+            ruleLengthIn,
+            ...fairPriceBand(fit, { ruleLengthIn, features: typicalFeatures }),
+          }))
         : [];
       return {
         currency,
@@ -153,36 +195,98 @@ export function createPriceHistoryService({ knex }: ServiceDeps) {
         curve,
         typicalFeatures,
         points: rows.slice(0, CHART_POINTS).map((r) => ({ ...r.observation, shopName: r.shopName })),
-        shops: (await filteredRecords(knex, actor.organisationId, {}).distinct('shopName').orderBy('shopName').limit(500)).map((r: { shopName: string }) => r.shopName),
+        shops: (
+          await filteredRecords(knex, actor.organisationId, {}).distinct('shopName').orderBy('shopName').limit(500)
+        ).map((r: { shopName: string }) => r.shopName),
         rule: MODEL_CHOICE_RULE,
       };
     },
 
     /** The fair-price band for a request's die, from the printer's own history, or why there is none. */
     async fairPrice(actor: AuthUser, requestId: number, currency = 'USD') {
-      const request = await DieRequest.query().findOne({ id: requestId, organisationId: actor.organisationId }).withGraphFetched('files(byUpload)');
+      const request = await DieRequest.query()
+        .findOne({ id: requestId, organisationId: actor.organisationId })
+        .withGraphFetched('files(byUpload)');
       if (!request) throw notFound('That die request');
-      return fairPriceFor(actor.organisationId, primaryFile(request.files)?.metrics as DielineMetrics | null | undefined, currency);
+      return fairPriceFor(
+        actor.organisationId,
+        primaryFile(request.files)?.metrics as DielineMetrics | null | undefined,
+        currency,
+      );
     },
 
     fairPriceFor,
 
     async list(actor: AuthUser, f: Filters): Promise<Page<PriceRecordDto>> {
       const [rows, [{ count }]] = await Promise.all([
-        filteredRecords(knex, actor.organisationId, f).orderBy([{ column: 'pricedOn', order: 'desc' }, { column: 'id', order: 'desc' }]).limit(f.pageSize).offset((f.page - 1) * f.pageSize),
+        filteredRecords(knex, actor.organisationId, f)
+          .orderBy([
+            { column: 'pricedOn', order: 'desc' },
+            { column: 'id', order: 'desc' },
+          ])
+          .limit(f.pageSize)
+          .offset((f.page - 1) * f.pageSize),
         filteredRecords(knex, actor.organisationId, f).count('* as count'),
       ]);
-      return { items: (rows as Array<Record<string, unknown>>).map(toDto), total: Number(count), page: f.page, pageSize: f.pageSize };
+      return {
+        items: (rows as Array<Record<string, unknown>>).map(toDto),
+        total: Number(count),
+        page: f.page,
+        pageSize: f.pageSize,
+      };
     },
 
     /** The filtered history as CSV, money in major units (as people read it), dates as YYYY-MM-DD. */
     async csv(actor: AuthUser, f: Filters): Promise<string> {
-      const rows = ((await filteredRecords(knex, actor.organisationId, f).orderBy("pricedOn").limit(200_000)) as Array<Record<string, unknown>>).map(toDto);
-      const major = (cents: number, currency: string) => (currency === 'JPY' ? String(cents) : `${Math.trunc(cents / 100)}.${String(Math.abs(cents % 100)).padStart(2, '0')}`);
+      const rows = (
+        (await filteredRecords(knex, actor.organisationId, f).orderBy('pricedOn').limit(200_000)) as Array<
+          Record<string, unknown>
+        >
+      ).map(toDto);
+      const major = (cents: number, currency: string) =>
+        currency === 'JPY'
+          ? String(cents)
+          : `${Math.trunc(cents / 100)}.${String(Math.abs(cents % 100)).padStart(2, '0')}`;
       return Papa.unparse({
-        fields: ['Date', 'Die shop', 'Die price', 'Total price', 'Currency', 'Rule length (in)', 'Cutting (in)', 'Creasing (in)', 'Perforating (in)', 'Kiss cut (in)', 'Bends', 'Curves', 'Joints', 'Punches', 'Board area (sq in)', 'Complexity', 'Source'],
+        fields: [
+          'Date',
+          'Die shop',
+          'Die price',
+          'Total price',
+          'Currency',
+          'Rule length (in)',
+          'Cutting (in)',
+          'Creasing (in)',
+          'Perforating (in)',
+          'Kiss cut (in)',
+          'Bends',
+          'Curves',
+          'Joints',
+          'Punches',
+          'Board area (sq in)',
+          'Complexity',
+          'Source',
+        ],
         // Text cells are formula-safe (an imported shop name may start with =); amounts stay numbers.
-        data: rows.map((r) => [r.pricedOn, formulaSafe(r.shopName), major(r.dieCents, r.currency), major(r.totalCents, r.currency), r.currency, r.ruleLengthIn, r.cutIn, r.creaseIn, r.perfIn, r.kissIn, r.bends, r.curves, r.joints, r.punches, r.boardAreaSqIn, r.complexity, formulaSafe(r.source)]),
+        data: rows.map((r) => [
+          r.pricedOn,
+          formulaSafe(r.shopName),
+          major(r.dieCents, r.currency),
+          major(r.totalCents, r.currency),
+          r.currency,
+          r.ruleLengthIn,
+          r.cutIn,
+          r.creaseIn,
+          r.perfIn,
+          r.kissIn,
+          r.bends,
+          r.curves,
+          r.joints,
+          r.punches,
+          r.boardAreaSqIn,
+          r.complexity,
+          formulaSafe(r.source),
+        ]),
       });
     },
 
@@ -192,9 +296,16 @@ export function createPriceHistoryService({ knex }: ServiceDeps) {
     async importCsv(actor: AuthUser, text: string, mapping: Record<string, string>): Promise<{ imported: number }> {
       const { records, errors } = readImport(text, mapping, 'USD');
       if (errors.length) {
-        throw new HttpError(400, 'import_rejected', `${errors.length} problem${errors.length === 1 ? '' : 's'} found; nothing was imported. Fix the rows and try again.`, undefined, undefined, {
-          rows: errors.slice(0, 500) satisfies ImportRowError[],
-        });
+        throw new HttpError(
+          400,
+          'import_rejected',
+          `${errors.length} problem${errors.length === 1 ? '' : 's'} found; nothing was imported. Fix the rows and try again.`,
+          undefined,
+          undefined,
+          {
+            rows: errors.slice(0, 500) satisfies ImportRowError[],
+          },
+        );
       }
       await knex.transaction(async (trx) => {
         for (let i = 0; i < records.length; i += 1000) {
@@ -216,12 +327,17 @@ export function createPriceHistoryService({ knex }: ServiceDeps) {
             })),
           );
         }
-        await recordAudit(trx, { organisationId: actor.organisationId, actorUserId: actor.id, entity: 'price_history', entityId: actor.organisationId, action: 'imported', detail: { rows: records.length } });
+        await recordAudit(trx, {
+          organisationId: actor.organisationId,
+          actorUserId: actor.id,
+          entity: 'price_history',
+          entityId: actor.organisationId,
+          action: 'imported',
+          detail: { rows: records.length },
+        });
       });
       forget(actor.organisationId);
       return { imported: records.length };
     },
   };
 }
-
-

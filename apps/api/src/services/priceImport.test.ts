@@ -10,13 +10,28 @@ describe('price history import', () => {
   it('guesses the mapping from the headers and previews the rows', () => {
     const preview = previewImport(csv);
     expect(preview.totalRows).toBe(2);
-    expect(preview.suggested).toMatchObject({ pricedOn: 'Date', shopName: 'Supplier', diePrice: 'Die price', totalPrice: 'Total', ruleLengthIn: 'Rule length (in)', bends: 'Bends', punches: 'Punches' });
+    expect(preview.suggested).toMatchObject({
+      pricedOn: 'Date',
+      shopName: 'Supplier',
+      diePrice: 'Die price',
+      totalPrice: 'Total',
+      ruleLengthIn: 'Rule length (in)',
+      bends: 'Bends',
+      punches: 'Punches',
+    });
   });
 
   it('reads prices into whole cents and classes each die by the analysis rule', () => {
     const { records, errors } = readImport(csv, previewImport(csv).suggested as Record<string, string>, 'USD');
     expect(errors).toEqual([]);
-    expect(records[0]).toMatchObject({ dieCents: 118_500, totalCents: 132_500, currency: 'USD', bends: 44, punches: 2, complexity: 'simple' });
+    expect(records[0]).toMatchObject({
+      dieCents: 118_500,
+      totalCents: 132_500,
+      currency: 'USD',
+      bends: 44,
+      punches: 2,
+      complexity: 'simple',
+    });
     expect(records[1]).toMatchObject({ dieCents: 42_000, totalCents: 45_550 });
   });
 
@@ -44,7 +59,9 @@ describe('price history import', () => {
   });
 
   it('refuses a mapping without the required columns, and a file that is not CSV', () => {
-    expect(() => readImport(csv, { pricedOn: 'Date' }, 'USD')).toThrow(/Choose a column for: Die shop, Die price, Rule length/);
+    expect(() => readImport(csv, { pricedOn: 'Date' }, 'USD')).toThrow(
+      /Choose a column for: Die shop, Die price, Rule length/,
+    );
     expect(() => previewImport('only a header\n')).toThrow(/at least one row/);
     expect(() => previewImport('a,b\n"unclosed,1\n')).toThrow(/not readable CSV/);
   });

@@ -1,4 +1,12 @@
-import { dateInRange, earliestDate, importFields, latestDate, type ImportField, type ImportPreviewDto, type ImportRowError } from '@kerfmark/contracts';
+import {
+  dateInRange,
+  earliestDate,
+  importFields,
+  latestDate,
+  type ImportField,
+  type ImportPreviewDto,
+  type ImportRowError,
+} from '@kerfmark/contracts';
 import { COMPLEXITY_FEATURES_PER_INCH } from '@kerfmark/dieline';
 import { parseMoneyInput } from '@kerfmark/pricing';
 import Papa from 'papaparse';
@@ -12,7 +20,8 @@ function parseCsv(text: string): string[][] {
   const fatal = result.errors.find((e) => e.type === 'Quotes');
   if (fatal) throw badRequest(`The file is not readable CSV: ${fatal.message} (row ${(fatal.row ?? 0) + 1}).`);
   if (result.data.length < 2) throw badRequest('The file needs a header row and at least one row of prices.');
-  if (result.data.length - 1 > MAX_IMPORT_ROWS) throw badRequest(`At most ${MAX_IMPORT_ROWS.toLocaleString('en-US')} rows at a time; split the file.`);
+  if (result.data.length - 1 > MAX_IMPORT_ROWS)
+    throw badRequest(`At most ${MAX_IMPORT_ROWS.toLocaleString('en-US')} rows at a time; split the file.`);
   return result.data;
 }
 
@@ -21,7 +30,9 @@ export function previewImport(text: string): ImportPreviewDto {
   const [headers = [], ...rows] = parseCsv(text);
   const suggested: Partial<Record<ImportField, string>> = {};
   const taken = new Set<string>();
-  for (const [field, spec] of Object.entries(importFields) as Array<[ImportField, (typeof importFields)[ImportField]]>) {
+  for (const [field, spec] of Object.entries(importFields) as Array<
+    [ImportField, (typeof importFields)[ImportField]]
+  >) {
     for (const hint of spec.hints) {
       const header = headers.find((h) => !taken.has(h) && h.trim().toLowerCase().includes(hint));
       if (header) {
@@ -52,13 +63,20 @@ export interface ImportedRecord {
  * Reads every row under the chosen mapping; any error in any row is reported with its row number
  * and nothing is imported (the caller writes the rows in one transaction only when there is none).
  */
-export function readImport(text: string, mapping: Record<string, string>, defaultCurrency: string): { records: ImportedRecord[]; errors: ImportRowError[] } {
+export function readImport(
+  text: string,
+  mapping: Record<string, string>,
+  defaultCurrency: string,
+): { records: ImportedRecord[]; errors: ImportRowError[] } {
   const [headers = [], ...rows] = parseCsv(text);
   const missing = (Object.entries(importFields) as Array<[ImportField, { required: boolean; label: string }]>).filter(
     ([field, spec]) => spec.required && !(mapping[field] && headers.includes(mapping[field])),
   );
   if (missing.length) {
-    throw badRequest(`Choose a column for: ${missing.map(([, s]) => s.label).join(', ')}.`, Object.fromEntries(missing.map(([f]) => [f, 'Choose a column'])));
+    throw badRequest(
+      `Choose a column for: ${missing.map(([, s]) => s.label).join(', ')}.`,
+      Object.fromEntries(missing.map(([f]) => [f, 'Choose a column'])),
+    );
   }
   const column = (field: ImportField) => (mapping[field] ? headers.indexOf(mapping[field]) : -1);
   const records: ImportedRecord[] = [];
@@ -66,7 +84,8 @@ export function readImport(text: string, mapping: Record<string, string>, defaul
   rows.forEach((cells, i) => {
     const row = i + 2; // the header is row 1, as a spreadsheet counts
     const cell = (field: ImportField) => (column(field) >= 0 ? (cells[column(field)] ?? '').trim() : '');
-    const fail = (field: ImportField, message: string) => errors.push({ row, field: importFields[field].label, message });
+    const fail = (field: ImportField, message: string) =>
+      errors.push({ row, field: importFields[field].label, message });
     const count = (field: ImportField) => {
       const v = cell(field);
       if (v === '') return 0;
@@ -77,8 +96,10 @@ export function readImport(text: string, mapping: Record<string, string>, defaul
       return Number(v);
     };
     const pricedOn = cell('pricedOn');
-    if (!/^\d{4}-\d{2}-\d{2}$/.test(pricedOn) || Number.isNaN(Date.parse(`${pricedOn}T00:00:00Z`))) fail('pricedOn', `“${pricedOn}” is not a date as YYYY-MM-DD`);
-    else if (!dateInRange(pricedOn)) fail('pricedOn', `“${pricedOn}” is not a date from ${earliestDate} to ${latestDate}`);
+    if (!/^\d{4}-\d{2}-\d{2}$/.test(pricedOn) || Number.isNaN(Date.parse(`${pricedOn}T00:00:00Z`)))
+      fail('pricedOn', `“${pricedOn}” is not a date as YYYY-MM-DD`);
+    else if (!dateInRange(pricedOn))
+      fail('pricedOn', `“${pricedOn}” is not a date from ${earliestDate} to ${latestDate}`);
     const shopName = cell('shopName');
     if (!shopName) fail('shopName', 'Empty');
     const currency = (cell('currency') || defaultCurrency).toUpperCase();
@@ -90,14 +111,31 @@ export function readImport(text: string, mapping: Record<string, string>, defaul
     const totalCents = totalText ? parseMoneyInput(totalText, digits) : dieCents;
     if (totalText && totalCents === null) fail('totalPrice', `“${totalText}” is not a price`);
     const ruleLengthIn = Number(cell('ruleLengthIn'));
-    if (!(ruleLengthIn > 0) || ruleLengthIn > 100_000) fail('ruleLengthIn', `“${cell('ruleLengthIn')}” is not a rule length in inches`);
-    const features = { bends: count('bends'), curves: count('curves'), joints: count('joints'), punches: count('punches') };
+    if (!(ruleLengthIn > 0) || ruleLengthIn > 100_000)
+      fail('ruleLengthIn', `“${cell('ruleLengthIn')}” is not a rule length in inches`);
+    const features = {
+      bends: count('bends'),
+      curves: count('curves'),
+      joints: count('joints'),
+      punches: count('punches'),
+    };
     const stated = cell('complexity').toLowerCase();
-    if (stated && stated !== 'simple' && stated !== 'complex') fail('complexity', `“${stated}” is neither simple nor complex`);
+    if (stated && stated !== 'simple' && stated !== 'complex')
+      fail('complexity', `“${stated}” is neither simple nor complex`);
     // Without a stated class, the dieline analysis's own rule decides (features per inch of rule).
     const perInch = (features.bends + features.curves + features.joints + features.punches) / (ruleLengthIn || 1);
-    const complexity = (stated || (perInch > COMPLEXITY_FEATURES_PER_INCH ? 'complex' : 'simple')) as 'simple' | 'complex';
-    records.push({ pricedOn, shopName, dieCents: dieCents ?? 0, totalCents: totalCents ?? 0, currency, ruleLengthIn, ...features, complexity });
+    const complexity = (stated || (perInch > COMPLEXITY_FEATURES_PER_INCH ? 'complex' : 'simple')) as
+      'simple' | 'complex';
+    records.push({
+      pricedOn,
+      shopName,
+      dieCents: dieCents ?? 0,
+      totalCents: totalCents ?? 0,
+      currency,
+      ruleLengthIn,
+      ...features,
+      complexity,
+    });
   });
   return { records, errors };
 }

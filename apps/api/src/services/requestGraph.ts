@@ -2,9 +2,25 @@ import type { Knex } from 'knex';
 import type { QueryBuilder } from 'objection';
 import { TIES_PART, type RequestTies } from '../access/loadFacts';
 import { SUBMITTED_BIDS_PART, toSubmittedBid } from './submittedBids';
-import { DielineFile, type Award, type DieRequest, type Organisation, type Press, type RequestQuestion } from '../models';
+import {
+  DielineFile,
+  type Award,
+  type DieRequest,
+  type Organisation,
+  type Press,
+  type RequestQuestion,
+} from '../models';
 
-export type RequestPart = 'organisation' | 'press' | 'award' | 'files' | 'fileSummaries' | 'questions' | 'invitedShops' | 'submittedBids' | 'ties';
+export type RequestPart =
+  | 'organisation'
+  | 'press'
+  | 'award'
+  | 'files'
+  | 'fileSummaries'
+  | 'questions'
+  | 'invitedShops'
+  | 'submittedBids'
+  | 'ties';
 
 // Remembered, as every row of every part asks for the same few names.
 const camelNames = new Map<string, string>();
@@ -17,7 +33,8 @@ const camel = (key: string) => {
 /** A row the database sent as JSON, as the model reads it: camelCase keys, and instants (every *_at column) as Dates. */
 function fromJson<M>(json: Record<string, unknown>): M {
   const out: Record<string, unknown> = {};
-  for (const [key, value] of Object.entries(json)) out[camel(key)] = key.endsWith('_at') && typeof value === 'string' ? new Date(value) : value;
+  for (const [key, value] of Object.entries(json))
+    out[camel(key)] = key.endsWith('_at') && typeof value === 'string' ? new Date(value) : value;
   return out as M;
 }
 
@@ -55,12 +72,14 @@ function adoptParts(request: DieRequest, parts: RequestPart[]): DieRequest {
     delete row[key];
     if (part === 'organisation') request.organisation = one ? fromJson<Organisation>(one) : undefined;
     if (part === 'press') request.press = one ? fromJson<Press>(one) : null;
-    if (part === 'award') request.award = one ? ({ ...fromJson<Award>(one), shop: fromJson<Organisation>(one.shop!) } as Award) : null;
+    if (part === 'award')
+      request.award = one ? ({ ...fromJson<Award>(one), shop: fromJson<Organisation>(one.shop!) } as Award) : null;
     if (part === 'files' || part === 'fileSummaries') request.files = many.map((f) => fromJson<DielineFile>(f));
     if (part === 'questions') request.questions = many.map((q) => fromJson<RequestQuestion>(q));
     if (part === 'invitedShops') request.invitedShops = many.map((o) => fromJson<Organisation>(o));
     if (part === 'ties') request.ties = one as unknown as RequestTies;
-    if (part === 'submittedBids') request.submittedBids = (many as Array<Parameters<typeof toSubmittedBid>[0]>).map(toSubmittedBid);
+    if (part === 'submittedBids')
+      request.submittedBids = (many as Array<Parameters<typeof toSubmittedBid>[0]>).map(toSubmittedBid);
   }
   return request;
 }
@@ -71,7 +90,9 @@ function adoptParts(request: DieRequest, parts: RequestPart[]): DieRequest {
  * part. `query` is already narrowed to what the user may see; the views only read the parts.
  * `columns` are the request's own columns to read (a list reads fewer than a request's page).
  */
-export async function readRequestGraph<Q extends QueryBuilder<DieRequest, DieRequest | undefined> | QueryBuilder<DieRequest, DieRequest[]>>(
+export async function readRequestGraph<
+  Q extends QueryBuilder<DieRequest, DieRequest | undefined> | QueryBuilder<DieRequest, DieRequest[]>,
+>(
   knex: Knex,
   query: Q,
   parts: RequestPart[],
@@ -80,7 +101,10 @@ export async function readRequestGraph<Q extends QueryBuilder<DieRequest, DieReq
   const builder = query as QueryBuilder<DieRequest, DieRequest[]>;
   // Prepared: the text depends only on the parts and the narrowing, so it is one of a few.
   const result = (await builder
-    .select(...columns.map((c) => `die_requests.${c}`), ...parts.map((part) => knex.raw(`${PARTS[part]} as ??`, [`part_${part}`])))
+    .select(
+      ...columns.map((c) => `die_requests.${c}`),
+      ...parts.map((part) => knex.raw(`${PARTS[part]} as ??`, [`part_${part}`])),
+    )
     .onBuildKnex((knexQuery) => knexQuery.options({ prepare: true }))) as DieRequest | DieRequest[] | undefined;
   const adopted = Array.isArray(result) ? result.map((r) => adoptParts(r, parts)) : result && adoptParts(result, parts);
   return adopted as never;

@@ -13,7 +13,19 @@ import {
   formatInZone,
 } from '@kerfmark/contracts';
 import type { Knex } from 'knex';
-import { assertMay, deadlineMoveRefusal, factsOf, loadFacts, presentToOwner, presentToShop, questionDto, refuse, sealOnCancel, visibleTo, type RequestFacts } from '../access';
+import {
+  assertMay,
+  deadlineMoveRefusal,
+  factsOf,
+  loadFacts,
+  presentToOwner,
+  presentToShop,
+  questionDto,
+  refuse,
+  sealOnCancel,
+  visibleTo,
+  type RequestFacts,
+} from '../access';
 import type { AuthUser } from '../auth/passport';
 import { badRequest, HttpError, notFound } from '../lib/httpError';
 import { parse } from '../lib/parse';
@@ -48,9 +60,14 @@ export function createRequestService(deps: ServiceDeps) {
   }
 
   /** The request and its facts, locked for the change the caller makes; another organisation's is a 404. */
-  async function factsFor(actor: AuthUser, id: number, trx: Knex.Transaction): Promise<{ request: DieRequest; facts: RequestFacts }> {
+  async function factsFor(
+    actor: AuthUser,
+    id: number,
+    trx: Knex.Transaction,
+  ): Promise<{ request: DieRequest; facts: RequestFacts }> {
     const found = await loadFacts(trx, id, 'update');
-    if (!found || actor.orgKind !== 'printer' || found.request.organisationId !== actor.organisationId) throw notFound('That die request');
+    if (!found || actor.orgKind !== 'printer' || found.request.organisationId !== actor.organisationId)
+      throw notFound('That die request');
     return found;
   }
 
@@ -61,7 +78,11 @@ export function createRequestService(deps: ServiceDeps) {
     return request;
   }
 
-  async function checkReferences(trx: Knex.Transaction, actor: AuthUser, input: { pressId?: number | null; invitedShopIds?: number[] }) {
+  async function checkReferences(
+    trx: Knex.Transaction,
+    actor: AuthUser,
+    input: { pressId?: number | null; invitedShopIds?: number[] },
+  ) {
     if (input.pressId) {
       const press = await Press.query(trx).findOne({ id: input.pressId, organisationId: actor.organisationId });
       if (!press) throw badRequest('Choose one of your presses.', { pressId: 'Choose one of your presses' });
@@ -86,7 +107,13 @@ export function createRequestService(deps: ServiceDeps) {
 
   /** Every bidder hears of a new deadline, in its own time zone. */
   async function tellOfDeadline(trx: Knex.Transaction, request: DieRequest, to: Date) {
-    const zones = new Map(((await trx('organisations').whereIn('id', trx('bids').where({ requestId: request.id }).select('shopId')).select('id', 'timeZone')) as Array<{ id: number; timeZone: string }>).map((o) => [o.id, o.timeZone]));
+    const zones = new Map(
+      (
+        (await trx('organisations')
+          .whereIn('id', trx('bids').where({ requestId: request.id }).select('shopId'))
+          .select('id', 'timeZone')) as Array<{ id: number; timeZone: string }>
+      ).map((o) => [o.id, o.timeZone]),
+    );
     await tellBidders(trx, deps, request.id, (shopId) => ({
       kind: 'deadline_changed',
       title: `New bid deadline: ${request.title}`,
@@ -98,13 +125,23 @@ export function createRequestService(deps: ServiceDeps) {
   async function detail(actor: AuthUser, id: number): Promise<DieRequestDetail> {
     const isOwner = actor.orgKind === 'printer';
     const [request, ownBid] = await Promise.all([
-      readRequestGraph(knex, visibleQuery(actor, id), ['organisation', 'press', 'award', 'files', 'questions', 'ties', ...(isOwner ? (['invitedShops'] as const) : [])]),
+      readRequestGraph(knex, visibleQuery(actor, id), [
+        'organisation',
+        'press',
+        'award',
+        'files',
+        'questions',
+        'ties',
+        ...(isOwner ? (['invitedShops'] as const) : []),
+      ]),
       isOwner ? undefined : Bid.query().findOne({ requestId: id, shopId: actor.organisationId }),
     ]);
     if (!request) throw notFound('That die request');
     const facts = factsOf(request, request.ties!);
     const now = new Date();
-    return isOwner ? presentToOwner(request, facts, actor, now) : presentToShop(request, facts, actor, ownBid ? await bidDto(ownBid) : null, now);
+    return isOwner
+      ? presentToOwner(request, facts, actor, now)
+      : presentToShop(request, facts, actor, ownBid ? await bidDto(ownBid) : null, now);
   }
 
   return {
@@ -128,7 +165,9 @@ export function createRequestService(deps: ServiceDeps) {
       const column = q.sort.replace('-', '');
       const result = await base
         .withGraphFetched('[organisation, press, files(byUpload)]')
-        .orderByRaw(`?? ${desc ? 'DESC' : 'ASC'} NULLS LAST, die_requests.id DESC`, [`die_requests.${column.replace(/[A-Z]/g, (c) => `_${c.toLowerCase()}`)}`])
+        .orderByRaw(`?? ${desc ? 'DESC' : 'ASC'} NULLS LAST, die_requests.id DESC`, [
+          `die_requests.${column.replace(/[A-Z]/g, (c) => `_${c.toLowerCase()}`)}`,
+        ])
         .page(q.page - 1, q.pageSize);
       return { items: result.results.map(toSummary), total: result.total, page: q.page, pageSize: q.pageSize };
     },
@@ -136,7 +175,9 @@ export function createRequestService(deps: ServiceDeps) {
     /** The board of open requests a die shop may bid on: filtered, sorted and paged by the database. */
     async marketplace(actor: AuthUser, q: z.output<typeof MarketplaceQuery>): Promise<Page<DieRequestSummary>> {
       const from = postcodeCentre(actor.orgPostcode);
-      const miles = from ? knownPostcodes().map(({ postcode, centre }) => ({ postcode, miles: distanceMiles(from, centre) })) : [];
+      const miles = from
+        ? knownPostcodes().map(({ postcode, centre }) => ({ postcode, miles: distanceMiles(from, centre) }))
+        : [];
       const { rows, total } = await boardPage(knex, actor.organisationId, q, miles);
       return {
         items: rows.map(({ request, ...row }) => ({ ...toSummary(request), ...row })),
@@ -174,7 +215,10 @@ export function createRequestService(deps: ServiceDeps) {
         const { request, facts } = await factsFor(actor, id, trx);
         const now = new Date();
         assertMay(actor, facts, 'edit', now);
-        const movesDeadline = 'bidDeadline' in patch && (patch.bidDeadline ? new Date(patch.bidDeadline).getTime() : null) !== (request.bidDeadline?.getTime() ?? null);
+        const movesDeadline =
+          'bidDeadline' in patch &&
+          (patch.bidDeadline ? new Date(patch.bidDeadline).getTime() : null) !==
+            (request.bidDeadline?.getTime() ?? null);
         if (movesDeadline) {
           const to = patch.bidDeadline ? new Date(patch.bidDeadline) : null;
           if (request.status === 'open' && to && to.getTime() <= now.getTime()) {
@@ -194,9 +238,13 @@ export function createRequestService(deps: ServiceDeps) {
           entity: 'die_request',
           entityId: id,
           action: 'updated',
-          detail: { fields: Object.keys(patch), ...(movesDeadline ? { bidDeadline: { from: fromDeadline, to: patch.bidDeadline } } : {}) },
+          detail: {
+            fields: Object.keys(patch),
+            ...(movesDeadline ? { bidDeadline: { from: fromDeadline, to: patch.bidDeadline } } : {}),
+          },
         });
-        if (movesDeadline && request.status === 'open') await tellOfDeadline(trx, request, new Date(patch.bidDeadline!));
+        if (movesDeadline && request.status === 'open')
+          await tellOfDeadline(trx, request, new Date(patch.bidDeadline!));
         trx.executionPromise.then(() => reminders.plan(id)).catch(() => undefined);
       });
       return detail(actor, id);
@@ -212,9 +260,13 @@ export function createRequestService(deps: ServiceDeps) {
           throw new HttpError(409, 'dieline_missing', 'Add a dieline that Kerfmark could measure before publishing.');
         }
         if (request.visibility === 'invited') {
-          const invited = await trx('request_invitations').where({ requestId: id }).count<{ count: number }[]>('* as count');
+          const invited = await trx('request_invitations')
+            .where({ requestId: id })
+            .count<{ count: number }[]>('* as count');
           if (Number(invited[0]?.count ?? 0) === 0) {
-            throw badRequest('Invite at least one die shop, or open the request to every shop.', { invitedShopIds: 'Invite at least one die shop' });
+            throw badRequest('Invite at least one die shop, or open the request to every shop.', {
+              invitedShopIds: 'Invite at least one die shop',
+            });
           }
         }
         await transitionRequest(trx, actor, id, 'publish', { reminders });
@@ -226,7 +278,11 @@ export function createRequestService(deps: ServiceDeps) {
     async cancel(actor: AuthUser, id: number, reason: string): Promise<DieRequestDetail> {
       await knex.transaction(async (trx) => {
         const { request, facts } = await factsFor(actor, id, trx);
-        await transitionRequest(trx, actor, id, 'cancel', { reminders, detail: { reason }, patch: sealOnCancel(facts, new Date()) });
+        await transitionRequest(trx, actor, id, 'cancel', {
+          reminders,
+          detail: { reason },
+          patch: sealOnCancel(facts, new Date()),
+        });
         await tellBidders(trx, deps, id, {
           kind: 'request_cancelled',
           title: `Cancelled: ${request.title}`,
@@ -241,7 +297,12 @@ export function createRequestService(deps: ServiceDeps) {
       const found = await knex.transaction((trx) => loadFacts(trx, id));
       if (!found) throw notFound('That die request');
       assertMay(actor, found.facts, 'ask');
-      const row = await RequestQuestion.query().insertAndFetch({ requestId: id, shopId: actor.organisationId, askedBy: actor.id, question });
+      const row = await RequestQuestion.query().insertAndFetch({
+        requestId: id,
+        shopId: actor.organisationId,
+        askedBy: actor.id,
+        question,
+      });
       return questionDto(actor, row);
     },
 

@@ -15,13 +15,20 @@ export async function transitionRequest(
   actor: AuthUser,
   requestId: number,
   action: string,
-  opts: { reminders: ReminderPlanner; awardedShopId?: number | null; detail?: Record<string, unknown>; patch?: Partial<DieRequest> },
+  opts: {
+    reminders: ReminderPlanner;
+    awardedShopId?: number | null;
+    detail?: Record<string, unknown>;
+    patch?: Partial<DieRequest>;
+  },
 ): Promise<DieRequest> {
   const request = await DieRequest.query(trx).findById(requestId).forUpdate().throwIfNotFound();
   const transition = checkTransition(actor, request, action, opts.awardedShopId ?? null);
-  const updated = await request
-    .$query(trx)
-    .patchAndFetch({ ...opts.patch, status: transition.to, ...(transition.to === 'open' && !request.publishedAt ? { publishedAt: new Date() } : {}) });
+  const updated = await request.$query(trx).patchAndFetch({
+    ...opts.patch,
+    status: transition.to,
+    ...(transition.to === 'open' && !request.publishedAt ? { publishedAt: new Date() } : {}),
+  });
   await recordAudit(trx, {
     organisationId: request.organisationId,
     actorUserId: actor.id,
@@ -36,8 +43,17 @@ export async function transitionRequest(
 }
 
 /** The transition-table rule of the access module, as the API answers a refusal. */
-export function checkTransition(actor: AuthUser, request: DieRequest, action: string, awardedShopId: number | null): Transition {
-  const answer = transitionRefusal(actor, factsOf(request, { invitedShopIds: [], bidderShopIds: [], awardedShopId }), action);
+export function checkTransition(
+  actor: AuthUser,
+  request: DieRequest,
+  action: string,
+  awardedShopId: number | null,
+): Transition {
+  const answer = transitionRefusal(
+    actor,
+    factsOf(request, { invitedShopIds: [], bidderShopIds: [], awardedShopId }),
+    action,
+  );
   if (answer.refusal) throw refuse(answer.refusal);
   return answer.transition!;
 }

@@ -42,8 +42,19 @@ export function toPressDto(press: Press): PressDto {
 
 /** The request columns toSummary reads, for lists that read no more (with the parts organisation, press and fileSummaries). */
 export const SUMMARY_COLUMNS = [
-  'id', 'title', 'job_reference', 'status', 'quantity', 'ups', 'rule_types', 'need_by_date', 'bid_deadline',
-  'delivery_postcode', 'visibility', 'created_at', 'updated_at',
+  'id',
+  'title',
+  'job_reference',
+  'status',
+  'quantity',
+  'ups',
+  'rule_types',
+  'need_by_date',
+  'bid_deadline',
+  'delivery_postcode',
+  'visibility',
+  'created_at',
+  'updated_at',
 ] as const;
 
 export function toSummary(request: DieRequest): DieRequestSummary {
@@ -96,4 +107,3 @@ export function toBidDto(bid: Bid, revisions: BidRevision[]): BidDto {
     })),
   };
 }
-

@@ -16,7 +16,11 @@ export const SUBMITTED_BIDS_PART = `(select coalesce(json_agg(json_build_object(
     from awards a join die_requests r on r.id = a.request_id where a.shop_id = b.shop_id) as record on true
   where b.request_id = die_requests.id and b.status = 'submitted')`;
 
-type SubmittedBidRow = Omit<SubmittedBid, 'pastJobs' | 'onTimeRate'> & { jobs: number; shipped: number; onTime: number };
+type SubmittedBidRow = Omit<SubmittedBid, 'pastJobs' | 'onTimeRate'> & {
+  jobs: number;
+  shipped: number;
+  onTime: number;
+};
 
 /** A bid of the part above, with its shop's on-time rate worked out. */
 export function toSubmittedBid({ jobs, shipped, onTime, ...bid }: SubmittedBidRow): SubmittedBid {

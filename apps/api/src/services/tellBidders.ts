@@ -14,6 +14,11 @@ export async function tellBidders(
 ): Promise<void> {
   const bidders = (await trx('bids').where({ requestId }).select('shopId')) as Array<{ shopId: number }>;
   for (const { shopId } of bidders) {
-    await notifyOrganisation(trx, { emails: deps.emails, appUrl: deps.config.appUrl }, shopId, typeof notice === 'function' ? notice(shopId) : notice);
+    await notifyOrganisation(
+      trx,
+      { emails: deps.emails, appUrl: deps.config.appUrl },
+      shopId,
+      typeof notice === 'function' ? notice(shopId) : notice,
+    );
   }
 }

@@ -40,10 +40,15 @@ export function createUserService({ knex }: ServiceDeps) {
           });
         }
         const losesAdmin =
-          user.role === 'admin' && user.status === 'active' && ((patch.role && patch.role !== 'admin') || patch.status === 'disabled');
+          user.role === 'admin' &&
+          user.status === 'active' &&
+          ((patch.role && patch.role !== 'admin') || patch.status === 'disabled');
         if (losesAdmin && admins.length <= 1) throw conflict('An organisation needs at least one active admin.');
         const before = { role: user.role, status: user.status };
-        const changes = { ...(patch.role ? { role: patch.role } : {}), ...(patch.status ? { status: patch.status } : {}) };
+        const changes = {
+          ...(patch.role ? { role: patch.role } : {}),
+          ...(patch.status ? { status: patch.status } : {}),
+        };
         const updated = await user.$query(trx).patchAndFetch(changes);
         await recordAudit(trx, {
           organisationId: actor.organisationId,

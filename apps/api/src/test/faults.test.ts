@@ -27,9 +27,28 @@ function appWith(over: { databaseUrl?: string; redisUrl?: string; s3?: string })
   const redis = createRedis(over.redisUrl ?? testConfig.redisUrl);
   redis.on('error', () => undefined);
   const queues = createJobQueues(over.redisUrl ?? testConfig.redisUrl, logger);
-  const storage = createStorage({ endpoint: over.s3 ?? process.env.S3_ENDPOINT, bucket: process.env.S3_BUCKET!, region: 'us-east-1', accessKeyId: 'S3RVER', secretAccessKey: 'S3RVER' });
-  closers.push(() => queues.close(), () => redis.quit(), ...(over.databaseUrl ? [() => appKnex.destroy()] : []));
-  return createApp({ config: testConfig, knex: appKnex, redis, logger, emails: queues.emails, analyses: queues.analyses, reminders: queues.reminders, storage });
+  const storage = createStorage({
+    endpoint: over.s3 ?? process.env.S3_ENDPOINT,
+    bucket: process.env.S3_BUCKET!,
+    region: 'us-east-1',
+    accessKeyId: 'S3RVER',
+    secretAccessKey: 'S3RVER',
+  });
+  closers.push(
+    () => queues.close(),
+    () => redis.quit(),
+    ...(over.databaseUrl ? [() => appKnex.destroy()] : []),
+  );
+  return createApp({
+    config: testConfig,
+    knex: appKnex,
+    redis,
+    logger,
+    emails: queues.emails,
+    analyses: queues.analyses,
+    reminders: queues.reminders,
+    storage,
+  });
 }
 
 describe('a backing service that is down', () => {
@@ -37,7 +56,9 @@ describe('a backing service that is down', () => {
     const broken = appWith({ databaseUrl: 'postgres://kerfmark@127.0.0.1:9/kerfmark_test' });
     // Objection models read one bound knex: bind them to the unreachable database for this request.
     bindModels(brokenKnex!);
-    const res = await request(broken).post('/api/auth/login').send({ email: 'maya@larkspur.example', password: 'kerfmark-demo-2026' });
+    const res = await request(broken)
+      .post('/api/auth/login')
+      .send({ email: 'maya@larkspur.example', password: 'kerfmark-demo-2026' });
     expect(res.status).toBe(503);
     expect(res.body.error).toMatchObject({ code: 'service_unavailable' });
     expect(res.headers['retry-after']).toBe('5');
@@ -49,20 +70,31 @@ describe('a backing service that is down', () => {
   it('keeps signing in and serving requests while Redis is down, the rate limit falling back to memory', async () => {
     const w = await createWorld();
     const noRedis = appWith({ redisUrl: 'redis://127.0.0.1:9' });
-    const login = await request(noRedis).post('/api/auth/login').send({ email: w.users.buyer.email, password: 'correct horse battery' });
+    const login = await request(noRedis)
+      .post('/api/auth/login')
+      .send({ email: w.users.buyer.email, password: 'correct horse battery' });
     expect(login.status).toBe(200);
     const me = await request(noRedis).get('/api/me').set('Authorization', `Bearer ${login.body.token}`);
     expect(me.status).toBe(200);
     const health = await request(noRedis).get('/api/health/ready');
     expect(health.status).toBe(503);
-    expect(health.body).toMatchObject({ status: 'not_ready', checks: { database: { status: 'up' }, redis: { status: 'down' } } });
+    expect(health.body).toMatchObject({
+      status: 'not_ready',
+      checks: { database: { status: 'up' }, redis: { status: 'down' } },
+    });
   });
 
   it('refuses an upload with a clear 503 while S3 is down, and leaves no row pointing at a missing file', async () => {
     const w = await createWorld();
-    const draft = await request(app).post('/api/requests').set('Authorization', `Bearer ${w.tokens.buyer}`).send({ title: 'No store', quantity: 1, ups: 1, ruleTypes: ['cut'] });
+    const draft = await request(app)
+      .post('/api/requests')
+      .set('Authorization', `Bearer ${w.tokens.buyer}`)
+      .send({ title: 'No store', quantity: 1, ups: 1, ruleTypes: ['cut'] });
     const noS3 = appWith({ s3: DEAD });
-    const res = await request(noS3).post(`/api/requests/${draft.body.id}/files`).set('Authorization', `Bearer ${w.tokens.buyer}`).attach('file', Buffer.from(rectangleDxf), 'c.dxf');
+    const res = await request(noS3)
+      .post(`/api/requests/${draft.body.id}/files`)
+      .set('Authorization', `Bearer ${w.tokens.buyer}`)
+      .attach('file', Buffer.from(rectangleDxf), 'c.dxf');
     expect(res.status).toBe(503);
     expect(res.body.error.code).toBe('storage_unavailable');
     expect(res.body.error.message).toMatch(/not saved/);

@@ -4,12 +4,61 @@
  * middle (4 in) ending on both long sides.
  */
 export const rectangleDxf = [
-  '0', 'SECTION', '2', 'HEADER', '9', '$INSUNITS', '70', '1', '0', 'ENDSEC',
-  '0', 'SECTION', '2', 'ENTITIES',
-  '0', 'LWPOLYLINE', '8', 'CUT', '90', '4', '70', '1',
-  '10', '0', '20', '0', '10', '4', '20', '0', '10', '4', '20', '3', '10', '0', '20', '3',
-  '0', 'LINE', '8', 'CREASE', '10', '0', '20', '1.5', '11', '4', '21', '1.5',
-  '0', 'ENDSEC', '0', 'EOF', '',
+  '0',
+  'SECTION',
+  '2',
+  'HEADER',
+  '9',
+  '$INSUNITS',
+  '70',
+  '1',
+  '0',
+  'ENDSEC',
+  '0',
+  'SECTION',
+  '2',
+  'ENTITIES',
+  '0',
+  'LWPOLYLINE',
+  '8',
+  'CUT',
+  '90',
+  '4',
+  '70',
+  '1',
+  '10',
+  '0',
+  '20',
+  '0',
+  '10',
+  '4',
+  '20',
+  '0',
+  '10',
+  '4',
+  '20',
+  '3',
+  '10',
+  '0',
+  '20',
+  '3',
+  '0',
+  'LINE',
+  '8',
+  'CREASE',
+  '10',
+  '0',
+  '20',
+  '1.5',
+  '11',
+  '4',
+  '21',
+  '1.5',
+  '0',
+  'ENDSEC',
+  '0',
+  'EOF',
+  '',
 ].join('\n');
 
 /** 96 user units per inch (CSS Values and Units): a 192 × 96 rect is 2 × 1 in, perimeter 6 in. */
@@ -19,7 +68,9 @@ export const rectangleSvg = `<?xml version="1.0"?>
 </svg>`;
 
 /** The first bytes of a PNG image (PNG specification signature). */
-export const pngBytes = Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0, 0, 0, 13, 0x49, 0x48, 0x44, 0x52]);
+export const pngBytes = Buffer.from([
+  0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0, 0, 0, 13, 0x49, 0x48, 0x44, 0x52,
+]);
 
 /** The date `days` from today, as YYYY-MM-DD. */
 export const inDays = (days: number) => new Date(Date.now() + days * 86_400_000).toISOString().slice(0, 10);

@@ -30,7 +30,18 @@ import {
 import { DieRequest, DielineFile } from '../models';
 import { bidBody, inDays, rectangleDxf } from './fixtures';
 import { csvText, edgeBodies, extremeDates, jsonBody, junkText, pathJunk, queryEdges, queryString } from './fuzzInputs';
-import { app, createOpenRequest, createPress, createUser, createWorld, knex, PASSWORD, signIn, unique, type World } from './harness';
+import {
+  app,
+  createOpenRequest,
+  createPress,
+  createUser,
+  createWorld,
+  knex,
+  PASSWORD,
+  signIn,
+  unique,
+  type World,
+} from './harness';
 import { routeList, routesReadingQuery } from './routeList';
 
 // Property-based bad input (fast-check) at every route that takes input: JSON bodies, query-string
@@ -59,7 +70,15 @@ interface Case {
 const id = (key: string) => () => ({ id: f[key]! });
 const none = { example: () => ({}) };
 
-const pressExample = { name: 'Flatbed 2', kind: 'flatbed', maxSheetWidthIn: 40, maxSheetLengthIn: 28, typicalSpeedSph: 5000, maxSpeedSph: 7500, active: true };
+const pressExample = {
+  name: 'Flatbed 2',
+  kind: 'flatbed',
+  maxSheetWidthIn: 40,
+  maxSheetLengthIn: 28,
+  typicalSpeedSph: 5000,
+  maxSpeedSph: 7500,
+  active: true,
+};
 const requestExample = () => ({
   title: 'Tuck-end carton, 4 up',
   jobReference: 'J-2291',
@@ -90,31 +109,72 @@ const requestExample = () => ({
   visibility: 'invited',
   invitedShopIds: [w.shop.id],
 });
-const libraryDieExample = { name: 'Sleeve die', storageLocation: 'Rack B3', condition: 'good', impressionLimit: 100_000, listed: false };
+const libraryDieExample = {
+  name: 'Sleeve die',
+  storageLocation: 'Rack B3',
+  condition: 'good',
+  impressionLimit: 100_000,
+  listed: false,
+};
 
 /** Every route that takes input, by the name routeList gives it. */
 const cases: Record<string, Case> = {
-  'POST /api/auth/login': { as: null, body: { example: () => ({ email: `spare-${unique()}@test.example`, password: PASSWORD }), schema: LoginInput } },
+  'POST /api/auth/login': {
+    as: null,
+    body: { example: () => ({ email: `spare-${unique()}@test.example`, password: PASSWORD }), schema: LoginInput },
+  },
   'POST /api/auth/logout': { as: 'spare', body: none },
-  'PUT /api/me/preferences': { as: 'buyer', body: { example: () => ({ email: { bids_ready: false, shipped: true } }), schema: PreferencesUpdate } },
-  'POST /api/users': { as: 'printerAdmin', body: { example: () => ({ email: `new-${unique()}@test.example`, name: 'New Person', role: 'buyer' }), schema: InvitationCreate } },
-  'PATCH /api/users/:id': { as: 'printerAdmin', params: id('user'), body: { example: () => ({ role: 'purchasing', status: 'active' }), schema: UserUpdate } },
+  'PUT /api/me/preferences': {
+    as: 'buyer',
+    body: { example: () => ({ email: { bids_ready: false, shipped: true } }), schema: PreferencesUpdate },
+  },
+  'POST /api/users': {
+    as: 'printerAdmin',
+    body: {
+      example: () => ({ email: `new-${unique()}@test.example`, name: 'New Person', role: 'buyer' }),
+      schema: InvitationCreate,
+    },
+  },
+  'PATCH /api/users/:id': {
+    as: 'printerAdmin',
+    params: id('user'),
+    body: { example: () => ({ role: 'purchasing', status: 'active' }), schema: UserUpdate },
+  },
   'GET /api/invitations/preview': { as: null, query: InvitationPreviewQuery },
-  'POST /api/invitations/accept': { as: null, body: { example: () => ({ token: 't'.repeat(32), password: PASSWORD }), schema: InvitationAccept } },
+  'POST /api/invitations/accept': {
+    as: null,
+    body: { example: () => ({ token: 't'.repeat(32), password: PASSWORD }), schema: InvitationAccept },
+  },
   'POST /api/invitations/:id/resend': { as: 'printerAdmin', params: id('invitation'), body: none },
   'POST /api/invitations/:id/revoke': { as: 'printerAdmin', params: id('revocable'), body: none },
   'POST /api/presses': { as: 'printerAdmin', body: { example: () => pressExample, schema: PressCreate } },
-  'PATCH /api/presses/:id': { as: 'printerAdmin', params: id('press'), body: { example: () => pressExample, schema: PressUpdate } },
+  'PATCH /api/presses/:id': {
+    as: 'printerAdmin',
+    params: id('press'),
+    body: { example: () => pressExample, schema: PressUpdate },
+  },
   'GET /api/requests': { as: 'buyer', query: RequestListQuery },
   'POST /api/requests': { as: 'buyer', body: { example: requestExample, schema: DieRequestCreate } },
   'GET /api/requests/:id': { as: 'buyer', params: id('open') },
   'GET /api/requests/:id/fair-price': { as: 'buyer', params: id('open') },
-  'PATCH /api/requests/:id': { as: 'buyer', params: id('draft'), body: { example: requestExample, schema: DieRequestUpdate } },
+  'PATCH /api/requests/:id': {
+    as: 'buyer',
+    params: id('draft'),
+    body: { example: requestExample, schema: DieRequestUpdate },
+  },
   'POST /api/requests/:id/publish': { as: 'buyer', params: id('draft'), body: none },
-  'POST /api/requests/:id/cancel': { as: 'buyer', params: id('cancellable'), body: { example: () => ({ reason: 'The carton was dropped from the range' }) } },
+  'POST /api/requests/:id/cancel': {
+    as: 'buyer',
+    params: id('cancellable'),
+    body: { example: () => ({ reason: 'The carton was dropped from the range' }) },
+  },
   // Path junk only: see `excluded`.
   'POST /api/requests/:id/files': { as: 'buyer', params: id('draft') },
-  'POST /api/requests/:id/questions': { as: 'estimator', params: id('open'), body: { example: () => ({ question: 'Are the nicks marked?' }), schema: QuestionCreate } },
+  'POST /api/requests/:id/questions': {
+    as: 'estimator',
+    params: id('open'),
+    body: { example: () => ({ question: 'Are the nicks marked?' }), schema: QuestionCreate },
+  },
   'POST /api/requests/:id/questions/:questionId/answer': {
     as: 'buyer',
     params: () => ({ id: f.open!, questionId: f.question! }),
@@ -124,7 +184,11 @@ const cases: Record<string, Case> = {
   'GET /api/files/:id/preview': { as: 'buyer', params: id('file') },
   'GET /api/files/:id/download': { as: 'buyer', params: id('file') },
   'POST /api/files/:id/primary': { as: 'buyer', params: id('file'), body: none },
-  'PUT /api/files/:id/layers': { as: 'buyer', params: id('file'), body: { example: () => ({ layerMap: { CUT: 'cut', CREASE: 'crease' } }), schema: LayerMapUpdate } },
+  'PUT /api/files/:id/layers': {
+    as: 'buyer',
+    params: id('file'),
+    body: { example: () => ({ layerMap: { CUT: 'cut', CREASE: 'crease' } }), schema: LayerMapUpdate },
+  },
   'DELETE /api/files/:id': { as: 'buyer', params: id('draftFile'), body: none },
   'POST /api/notifications/:id/read': { as: 'buyer', params: id('notification'), body: none },
   'POST /api/notifications/read-all': { as: 'buyer', body: none },
@@ -133,10 +197,22 @@ const cases: Record<string, Case> = {
   'GET /api/price-history/fit': { as: 'buyer', query: PriceHistoryQuery },
   'POST /api/price-history/import/preview': { as: 'purchasing', csv: true },
   'POST /api/price-history/import': { as: 'purchasing', csv: true },
-  'POST /api/requests/:id/bids': { as: 'estimator', params: id('biddable'), body: { example: () => bidBody(50_000, { notes: 'Ejection rubber included' }), schema: BidInput } },
+  'POST /api/requests/:id/bids': {
+    as: 'estimator',
+    params: id('biddable'),
+    body: { example: () => bidBody(50_000, { notes: 'Ejection rubber included' }), schema: BidInput },
+  },
   'GET /api/requests/:id/my-bid': { as: 'estimator', params: id('revisable') },
-  'POST /api/requests/:id/decline': { as: 'estimator', params: id('declinable'), body: { example: () => ({ reason: 'Too large for our laser' }), schema: DeclineInput } },
-  'PATCH /api/bids/:id': { as: 'estimator', params: id('revisableBid'), body: { example: () => bidBody(48_000), schema: BidInput } },
+  'POST /api/requests/:id/decline': {
+    as: 'estimator',
+    params: id('declinable'),
+    body: { example: () => ({ reason: 'Too large for our laser' }), schema: DeclineInput },
+  },
+  'PATCH /api/bids/:id': {
+    as: 'estimator',
+    params: id('revisableBid'),
+    body: { example: () => bidBody(48_000), schema: BidInput },
+  },
   'POST /api/bids/:id/withdraw': { as: 'estimator', params: id('withdrawableBid'), body: none },
   'GET /api/requests/:id/bids': { as: 'purchasing', params: id('awarded') },
   'POST /api/requests/:id/close-bidding': { as: 'purchasing', params: id('closable'), body: none },
@@ -145,17 +221,32 @@ const cases: Record<string, Case> = {
     params: id('awardable'),
     body: { example: () => ({ bidId: f.awardableBid, reason: 'Ships sooner' }), schema: AwardInput },
   },
-  'POST /api/requests/:id/receive': { as: 'buyer', params: id('shipped'), body: { example: () => ({ condition: 'good', notes: 'Well packed' }), schema: ReceiveInput } },
+  'POST /api/requests/:id/receive': {
+    as: 'buyer',
+    params: id('shipped'),
+    body: { example: () => ({ condition: 'good', notes: 'Well packed' }), schema: ReceiveInput },
+  },
   'GET /api/requests/:id/ocds': { as: 'purchasing', params: id('awarded') },
   'POST /api/requests/:id/start-production': { as: 'estimator', params: id('awarded'), body: none },
-  'POST /api/requests/:id/ship': { as: 'estimator', params: id('inProduction'), body: { example: () => ({ trackingNote: 'Parcel, tracking 1Z999' }), schema: ShipInput } },
+  'POST /api/requests/:id/ship': {
+    as: 'estimator',
+    params: id('inProduction'),
+    body: { example: () => ({ trackingNote: 'Parcel, tracking 1Z999' }), schema: ShipInput },
+  },
   'GET /api/purchase-orders/:id/pdf': { as: 'purchasing', params: id('purchaseOrder') },
   'GET /api/library/:id': { as: 'buyer', params: id('libraryDie') },
-  'PATCH /api/library/:id': { as: 'buyer', params: id('libraryDie'), body: { example: () => libraryDieExample, schema: LibraryDieUpdate } },
+  'PATCH /api/library/:id': {
+    as: 'buyer',
+    params: id('libraryDie'),
+    body: { example: () => libraryDieExample, schema: LibraryDieUpdate },
+  },
   'POST /api/library/:id/runs': {
     as: 'buyer',
     params: id('libraryDie'),
-    body: { example: () => ({ runOn: '2026-11-30', impressions: 6_000, jobReference: 'J-1', notes: 'Clean run' }), schema: DieRunInput },
+    body: {
+      example: () => ({ runOn: '2026-11-30', impressions: 6_000, jobReference: 'J-1', notes: 'Clean run' }),
+      schema: DieRunInput,
+    },
   },
   'GET /api/requests/:id/library-matches': { as: 'buyer', params: id('open') },
   'GET /api/marketplace/requests': { as: 'estimator', query: MarketplaceQuery },
@@ -163,7 +254,8 @@ const cases: Record<string, Case> = {
 
 /** Write routes not fuzzed with JSON, and why. */
 const excluded: Record<string, string> = {
-  'POST /api/requests/:id/files': 'a multipart dieline upload; wrong type, empty, missing and oversized files are tested in requestRoutes.test.ts',
+  'POST /api/requests/:id/files':
+    'a multipart dieline upload; wrong type, empty, missing and oversized files are tested in requestRoutes.test.ts',
 };
 
 const bearer = (actor: Actor | null) => (actor ? { Authorization: `Bearer ${tokens[actor]}` } : {});
@@ -172,7 +264,9 @@ const bearer = (actor: Actor | null) => (actor ? { Authorization: `Bearer ${toke
 function send(route: string, params: Record<string, string | number> = {}): request.Test {
   const [method, template] = route.split(' ') as [string, string];
   const path = template.replace(/:(\w+)/g, (_, name: string) => String(params[name]));
-  return (request(app) as unknown as Record<string, (p: string) => request.Test>)[method.toLowerCase()]!(path).set(bearer(cases[route]!.as));
+  return (request(app) as unknown as Record<string, (p: string) => request.Test>)[method.toLowerCase()]!(path).set(
+    bearer(cases[route]!.as),
+  );
 }
 
 const sendJson = (route: string, params: Record<string, string | number> | undefined, body: unknown) =>
@@ -193,10 +287,15 @@ async function succeeded(req: request.Test) {
 }
 
 /** A fixture's step through a route, as its case's actor. */
-const ok = (route: string, params: Record<string, number>, body: object = {}) => succeeded(sendJson(route, params, body));
+const ok = (route: string, params: Record<string, number>, body: object = {}) =>
+  succeeded(sendJson(route, params, body));
 
-const bidOn = async (requestId: number) => (await ok('POST /api/requests/:id/bids', { id: requestId }, bidBody(50_000))).id as number;
-const pastDeadline = (requestId: number) => DieRequest.query().patch({ bidDeadline: new Date(Date.now() - 60_000) }).findById(requestId);
+const bidOn = async (requestId: number) =>
+  (await ok('POST /api/requests/:id/bids', { id: requestId }, bidBody(50_000))).id as number;
+const pastDeadline = (requestId: number) =>
+  DieRequest.query()
+    .patch({ bidDeadline: new Date(Date.now() - 60_000) })
+    .findById(requestId);
 
 /** An open request with our shop's bid, past its deadline, awarded, and moved on as far as `to`. */
 async function awarded(to: 'awarded' | 'in_production' | 'shipped' = 'awarded') {
@@ -216,15 +315,33 @@ beforeAll(async () => {
   tokens = { ...w.tokens, spare: await signIn(await createUser(w.printer, 'buyer')) };
   f.user = (await createUser(w.printer, 'buyer')).id;
   f.press = (await createPress(w.printer)).id;
-  const invite = async () => (await ok('POST /api/users', {}, { email: `invitee-${unique()}@test.example`, name: 'Invitee', role: 'buyer' })).id as number;
+  const invite = async () =>
+    (await ok('POST /api/users', {}, { email: `invitee-${unique()}@test.example`, name: 'Invitee', role: 'buyer' }))
+      .id as number;
   f.invitation = await invite();
   f.revocable = await invite();
 
   f.draft = (await ok('POST /api/requests', {}, { title: 'Draft', quantity: 1, ups: 1, ruleTypes: ['cut'] })).id;
-  f.draftFile = (await succeeded(send('POST /api/requests/:id/files', { id: f.draft! }).attach('file', Buffer.from(rectangleDxf), 'c.dxf'))).id;
-  for (const key of ['open', 'cancellable', 'declinable', 'closable', 'biddable', 'revisable', 'withdrawable', 'awardable']) f[key] = (await createOpenRequest(w)).id;
+  f.draftFile = (
+    await succeeded(
+      send('POST /api/requests/:id/files', { id: f.draft! }).attach('file', Buffer.from(rectangleDxf), 'c.dxf'),
+    )
+  ).id;
+  for (const key of [
+    'open',
+    'cancellable',
+    'declinable',
+    'closable',
+    'biddable',
+    'revisable',
+    'withdrawable',
+    'awardable',
+  ])
+    f[key] = (await createOpenRequest(w)).id;
   f.file = (await DielineFile.query().findOne({ requestId: f.open! }))!.id;
-  f.question = (await ok('POST /api/requests/:id/questions', { id: f.open! }, { question: 'Which layer has the nicks?' })).id;
+  f.question = (
+    await ok('POST /api/requests/:id/questions', { id: f.open! }, { question: 'Which layer has the nicks?' })
+  ).id;
   f.revisableBid = await bidOn(f.revisable!);
   f.withdrawableBid = await bidOn(f.withdrawable!);
   f.awardableBid = await bidOn(f.awardable!);
@@ -232,8 +349,19 @@ beforeAll(async () => {
   ({ id: f.awarded, purchaseOrder: f.purchaseOrder } = await awarded());
   f.inProduction = (await awarded('in_production')).id;
   f.shipped = (await awarded('shipped')).id;
-  f.notification = await inserted('notifications', { userId: w.users.buyer.id, kind: 'bids_ready', title: 'Bids ready', body: 'Two bids' });
-  f.libraryDie = await inserted('libraryDies', { organisationId: w.printer.id, name: 'Sleeve die', ups: 1, ruleTypes: ['cut'], impressionLimit: 100_000 });
+  f.notification = await inserted('notifications', {
+    userId: w.users.buyer.id,
+    kind: 'bids_ready',
+    title: 'Bids ready',
+    body: 'Two bids',
+  });
+  f.libraryDie = await inserted('libraryDies', {
+    organisationId: w.printer.id,
+    name: 'Sleeve die',
+    ups: 1,
+    ruleTypes: ['cut'],
+    impressionLimit: 100_000,
+  });
 }, 60_000);
 
 const shapeKeys = (schema?: { shape: object }) => Object.keys(schema?.shape ?? {});
@@ -270,10 +398,16 @@ describe('fuzzing every route that takes input', () => {
       it(`${route}: multipart CSV uploads never answer 500`, async () => {
         const headers = Object.values(importFields).map((field) => field.label);
         const mapping = fc.oneof(
-          fc.dictionary(fc.constantFrom(...Object.keys(importFields)), fc.oneof(fc.constantFrom(...headers), junkText)).map((m) => JSON.stringify(m)),
+          fc
+            .dictionary(fc.constantFrom(...Object.keys(importFields)), fc.oneof(fc.constantFrom(...headers), junkText))
+            .map((m) => JSON.stringify(m)),
           junkText,
         );
-        const upload = fc.record({ csv: fc.oneof(csvText(headers), junkText), field: fc.constantFrom('file', 'other'), mapping: fc.option(mapping) });
+        const upload = fc.record({
+          csv: fc.oneof(csvText(headers), junkText),
+          field: fc.constantFrom('file', 'other'),
+          mapping: fc.option(mapping),
+        });
         await fc.assert(
           fc.asyncProperty(upload, async ({ csv, field, mapping }) => {
             let req = send(route).attach(field, Buffer.from(csv), 'history.csv');
@@ -289,7 +423,8 @@ describe('fuzzing every route that takes input', () => {
       const keys = shapeKeys(c.query);
       it(`${route}: injection-shaped and random values in each of ${keys.join(', ')} never answer 500`, async () => {
         for (const key of keys) {
-          for (const value of queryEdges) expectClearAnswer(await send(route).query({ [key]: value }), { [key]: value });
+          for (const value of queryEdges)
+            expectClearAnswer(await send(route).query({ [key]: value }), { [key]: value });
         }
         await fc.assert(
           fc.asyncProperty(queryString(keys), async (query) => {
@@ -329,7 +464,8 @@ describe('extreme dates in every date field', () => {
           const body = { ...c.body!.example(), [key]: value };
           expectClearAnswer(await sendJson(route, c.params?.(), body), body);
         }
-        for (const key of queryKeys) expectClearAnswer(await send(route, c.params?.()).query({ [key]: value }), { [key]: value });
+        for (const key of queryKeys)
+          expectClearAnswer(await send(route, c.params?.()).query({ [key]: value }), { [key]: value });
       }
     });
   }
@@ -348,17 +484,33 @@ describe('inputs that once answered 500', () => {
   });
 
   it('a NUL character or half a character pair in text', async () => {
-    await refused(sendJson('POST /api/library/:id/runs', { id: f.libraryDie! }, { runOn: '2026-11-30', impressions: 1, jobReference: '\u0000' }), 'jobReference');
+    await refused(
+      sendJson(
+        'POST /api/library/:id/runs',
+        { id: f.libraryDie! },
+        { runOn: '2026-11-30', impressions: 1, jobReference: '\u0000' },
+      ),
+      'jobReference',
+    );
     const line = { kind: 'die', amountCents: 1_000, description: 'a\ud800b' };
-    await refused(sendJson('PATCH /api/bids/:id', { id: f.revisableBid! }, bidBody(1_000, { lines: [line] })), 'lines.0.description');
-    await refused(sendJson('PUT /api/files/:id/layers', { id: f.file! }, { layerMap: { 'CUT\u0000': 'cut' } }), 'layerMap.CUT\u0000');
+    await refused(
+      sendJson('PATCH /api/bids/:id', { id: f.revisableBid! }, bidBody(1_000, { lines: [line] })),
+      'lines.0.description',
+    );
+    await refused(
+      sendJson('PUT /api/files/:id/layers', { id: f.file! }, { layerMap: { 'CUT\u0000': 'cut' } }),
+      'layerMap.CUT\u0000',
+    );
     await refused(send('GET /api/requests').query({ q: '\u0000' }), 'q');
     await refused(send('GET /api/price-history').query({ shop: '\u0000' }), 'shop');
   });
 
   it('an id past the 4-byte id column', async () => {
     await refused(sendJson('POST /api/requests', {}, { ...requestExample(), pressId: 2_147_483_648 }), 'pressId');
-    await refused(sendJson('POST /api/requests', {}, { ...requestExample(), invitedShopIds: [9_999_999_999_999] }), 'invitedShopIds.0');
+    await refused(
+      sendJson('POST /api/requests', {}, { ...requestExample(), invitedShopIds: [9_999_999_999_999] }),
+      'invitedShopIds.0',
+    );
     await refused(sendJson('POST /api/requests/:id/award', { id: f.awardable! }, { bidId: 2_147_483_648 }), 'bidId');
     await refused(send('GET /api/requests').query({ pressId: '2147483648' }), 'pressId');
   });

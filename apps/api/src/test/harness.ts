@@ -27,7 +27,16 @@ redis.on('error', () => undefined);
 const queues = createJobQueues(config.redisUrl, logger);
 export const storage = createStorage(config.storage);
 
-export const app: Express = createApp({ config, knex, redis, logger, emails: queues.emails, analyses: queues.analyses, reminders: queues.reminders, storage });
+export const app: Express = createApp({
+  config,
+  knex,
+  redis,
+  logger,
+  emails: queues.emails,
+  analyses: queues.analyses,
+  reminders: queues.reminders,
+  storage,
+});
 export const testConfig = config;
 export const PASSWORD = 'correct horse battery';
 
@@ -40,7 +49,13 @@ afterAll(async () => {
 export const unique = () => randomUUID().slice(0, 8);
 
 export async function createOrg(kind: OrgKind, name = `${kind === 'printer' ? 'Printer' : 'Die shop'} ${unique()}`) {
-  return Organisation.query().insertAndFetch({ name, kind, timeZone: 'America/Chicago', postcode: '60614', country: 'US' });
+  return Organisation.query().insertAndFetch({
+    name,
+    kind,
+    timeZone: 'America/Chicago',
+    postcode: '60614',
+    country: 'US',
+  });
 }
 
 export async function createUser(org: Organisation, role: Role, opts: { status?: 'active' | 'disabled' } = {}) {
@@ -104,7 +119,9 @@ export async function waitForEmail(
   while (Date.now() < until) {
     const res = await fetch(`${process.env.MAIL_CATCHER_URL}/api/messages?to=${encodeURIComponent(to)}`);
     const messages = (await res.json()) as Array<{ subject: string; text: string; html: string | null }>;
-    const match = messages.find((m) => (typeof subject === 'string' ? m.subject.includes(subject) : subject.test(m.subject)));
+    const match = messages.find((m) =>
+      typeof subject === 'string' ? m.subject.includes(subject) : subject.test(m.subject),
+    );
     if (match) return match;
     await new Promise((r) => setTimeout(r, 200));
   }
@@ -115,7 +132,10 @@ export async function waitForEmail(
  * An open request with a measured dieline (the 4 × 3 in test rectangle: 14 in of cutting rule and
  * 4 in of creasing rule), made straight in the database so marketplace tests need no worker.
  */
-export async function createOpenRequest(world: { printer: Organisation; users: { buyer: User } }, opts: { deadline?: Date; needByDate?: string } = {}) {
+export async function createOpenRequest(
+  world: { printer: Organisation; users: { buyer: User } },
+  opts: { deadline?: Date; needByDate?: string } = {},
+) {
   return insertOpenRequest(world.printer.id, world.users.buyer.id, opts);
 }
 

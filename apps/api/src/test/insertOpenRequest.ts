@@ -7,7 +7,11 @@ import { rectangleDxf } from './fixtures';
  * Inserts an open, public request with a measured dieline (the fixture's 4 × 3 in rectangle), as
  * the printer's buyer would have posted it, through whatever knex the models are bound to.
  */
-export async function insertOpenRequest(printerId: number, buyerId: number, opts: { deadline?: Date; needByDate?: string } = {}): Promise<DieRequest> {
+export async function insertOpenRequest(
+  printerId: number,
+  buyerId: number,
+  opts: { deadline?: Date; needByDate?: string } = {},
+): Promise<DieRequest> {
   const { metrics, preview } = analyseDieline(rectangleDxf);
   const request = await DieRequest.query().insertAndFetch({
     organisationId: printerId,

@@ -9,7 +9,8 @@ const reference = (name: string): unknown =>
 
 /** JSON Merge Patch, RFC 7386 section 2: objects merge key by key, null deletes, anything else replaces. */
 export function mergePatch(target: unknown, patch: unknown): unknown {
-  const isObject = (v: unknown): v is Record<string, unknown> => typeof v === 'object' && v !== null && !Array.isArray(v);
+  const isObject = (v: unknown): v is Record<string, unknown> =>
+    typeof v === 'object' && v !== null && !Array.isArray(v);
   if (!isObject(patch)) return patch;
   const result: Record<string, unknown> = isObject(target) ? { ...target } : {};
   for (const [key, value] of Object.entries(patch)) {
@@ -19,7 +20,10 @@ export function mergePatch(target: unknown, patch: unknown): unknown {
   return result;
 }
 
-export const releaseSchema = mergePatch(reference('release-schema-1.1.5.json'), reference('bid-extension-release-schema.json'));
+export const releaseSchema = mergePatch(
+  reference('release-schema-1.1.5.json'),
+  reference('bid-extension-release-schema.json'),
+);
 
 // OCDS 1.1 schemas are JSON Schema draft-04 and carry their own keywords (codelist, openCodelist…).
 const ajv = new Ajv({ strict: false, allErrors: true });

@@ -31,7 +31,11 @@ export function freePort(): Promise<number> {
 }
 
 /** Polls until `check` gives a value, or fails naming what was awaited. */
-export async function until<T>(what: string, check: () => Promise<T | undefined | false>, timeoutMs = 20_000): Promise<T> {
+export async function until<T>(
+  what: string,
+  check: () => Promise<T | undefined | false>,
+  timeoutMs = 20_000,
+): Promise<T> {
   const end = Date.now() + timeoutMs;
   while (Date.now() < end) {
     const value = await check().catch(() => undefined);
@@ -54,7 +58,11 @@ export class ProcessHarness {
 
   /** Starts an app process with the test stack's environment and the overrides given. */
   start(entry: string, env: Record<string, string | undefined>): Run {
-    const child = spawn(process.execPath, [TSX, entry], { cwd: repoRoot, env: { ...process.env, ...env }, stdio: ['ignore', 'pipe', 'pipe'] });
+    const child = spawn(process.execPath, [TSX, entry], {
+      cwd: repoRoot,
+      env: { ...process.env, ...env },
+      stdio: ['ignore', 'pipe', 'pipe'],
+    });
     this.children.push(child);
     let output = '';
     child.stdout!.on('data', (chunk) => (output += chunk));
@@ -66,13 +74,34 @@ export class ProcessHarness {
   /** Debian's redis-server on a free port, nothing saved; `args` add e.g. users and passwords. `url` builds the clients' URL. */
   async redis(url: (port: number) => string, args: string[] = []): Promise<string> {
     const port = await freePort();
-    const server = spawn('/usr/bin/redis-server', ['--port', String(port), '--bind', '127.0.0.1', '--save', '', '--appendonly', 'no', '--dir', os.tmpdir(), ...args], { stdio: 'ignore' });
+    const server = spawn(
+      '/usr/bin/redis-server',
+      [
+        '--port',
+        String(port),
+        '--bind',
+        '127.0.0.1',
+        '--save',
+        '',
+        '--appendonly',
+        'no',
+        '--dir',
+        os.tmpdir(),
+        ...args,
+      ],
+      { stdio: 'ignore' },
+    );
     this.closers.push(async () => {
       server.kill('SIGTERM');
       if (server.exitCode === null) await once(server, 'exit');
     });
     const redisUrl = url(port);
-    const probe = new Redis({ ...redisOptions(redisUrl), lazyConnect: true, maxRetriesPerRequest: 0, retryStrategy: () => null });
+    const probe = new Redis({
+      ...redisOptions(redisUrl),
+      lazyConnect: true,
+      maxRetriesPerRequest: 0,
+      retryStrategy: () => null,
+    });
     probe.on('error', () => undefined); // refused until the server is up
     await until('redis-server answers', async () => {
       await probe.connect().catch(() => undefined);
@@ -88,7 +117,10 @@ export class ProcessHarness {
     const databaseUrl = `postgres://kerfmark@127.0.0.1:${stackDb.port}/${name}`;
     await ensureDatabase(Number(stackDb.port), name, true);
     // knex loads the .ts migrations with Node's import(), which vitest's module runner does not serve.
-    await promisify(execFile)(process.execPath, [TSX, 'scripts/migrate.ts'], { cwd: repoRoot, env: { ...process.env, DATABASE_URL: databaseUrl } });
+    await promisify(execFile)(process.execPath, [TSX, 'scripts/migrate.ts'], {
+      cwd: repoRoot,
+      env: { ...process.env, DATABASE_URL: databaseUrl },
+    });
     const knex = createKnex(databaseUrl);
     bindModels(knex); // each test file runs in a vitest worker of its own
     this.closers.push(() => knex.destroy());

@@ -45,7 +45,17 @@ async function scansOf(send: () => Promise<{ status: number }>) {
       const { rows } = await client.query(`explain (format json) ${q.sql}`, q.bindings as unknown[]);
       const tables = seqScans(rows[0]['QUERY PLAN'][0].Plan);
       // SHOW_PLANS=1 prints each plan, to see which index a query uses.
-      if (process.env.SHOW_PLANS) console.log(q.sql.slice(0, 120), JSON.stringify(rows[0]['QUERY PLAN'][0].Plan, ['Node Type', 'Relation Name', 'Index Name', 'Index Cond', 'Plans']));
+      if (process.env.SHOW_PLANS)
+        console.log(
+          q.sql.slice(0, 120),
+          JSON.stringify(rows[0]['QUERY PLAN'][0].Plan, [
+            'Node Type',
+            'Relation Name',
+            'Index Name',
+            'Index Cond',
+            'Plans',
+          ]),
+        );
       if (tables.length) found.push({ sql: q.sql, tables });
     }
     return found;
@@ -68,20 +78,30 @@ const bearer = (token: string) => ({ Authorization: `Bearer ${token}` });
 
 describe('the hot queries use indexes', () => {
   it('the open-requests board', async () => {
-    expect(await scansOf(() => request(app).get('/api/marketplace/requests').set(bearer(w.tokens.estimator)))).toEqual([]);
+    expect(await scansOf(() => request(app).get('/api/marketplace/requests').set(bearer(w.tokens.estimator)))).toEqual(
+      [],
+    );
   });
 
   it('a request’s detail, for the printer and for a die shop', async () => {
-    expect(await scansOf(() => request(app).get(`/api/requests/${closedId}`).set(bearer(w.tokens.purchasing)))).toEqual([]);
-    expect(await scansOf(() => request(app).get(`/api/requests/${closedId}`).set(bearer(w.tokens.estimator)))).toEqual([]);
+    expect(await scansOf(() => request(app).get(`/api/requests/${closedId}`).set(bearer(w.tokens.purchasing)))).toEqual(
+      [],
+    );
+    expect(await scansOf(() => request(app).get(`/api/requests/${closedId}`).set(bearer(w.tokens.estimator)))).toEqual(
+      [],
+    );
   });
 
   it('the bid comparison and its fair-price band', async () => {
-    expect(await scansOf(() => request(app).get(`/api/requests/${closedId}/bids`).set(bearer(w.tokens.purchasing)))).toEqual([]);
+    expect(
+      await scansOf(() => request(app).get(`/api/requests/${closedId}/bids`).set(bearer(w.tokens.purchasing))),
+    ).toEqual([]);
   });
 
   it('the printer’s request list and price history', async () => {
-    expect(await scansOf(() => request(app).get('/api/requests?sort=-needByDate').set(bearer(w.tokens.buyer)))).toEqual([]);
+    expect(await scansOf(() => request(app).get('/api/requests?sort=-needByDate').set(bearer(w.tokens.buyer)))).toEqual(
+      [],
+    );
     expect(await scansOf(() => request(app).get('/api/price-history').set(bearer(w.tokens.purchasing)))).toEqual([]);
   });
 });

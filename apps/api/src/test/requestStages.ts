@@ -6,16 +6,27 @@ import { app, createOpenRequest, type World } from './harness';
 type Member = keyof World['tokens'];
 
 /** One call through the API as a member of the world, for setting up; any other status stops the run with the answer. */
-export async function callAs(w: World, who: Member, method: 'get' | 'post' | 'patch', path: string, body: object | undefined, status: number) {
+export async function callAs(
+  w: World,
+  who: Member,
+  method: 'get' | 'post' | 'patch',
+  path: string,
+  body: object | undefined,
+  status: number,
+) {
   const req = request(app)[method](path).set('Authorization', `Bearer ${w.tokens[who]}`);
   const res = await (body ? req.send(body) : req);
-  if (res.status !== status) throw new Error(`${method.toUpperCase()} ${path} as ${who}: ${res.status} ${JSON.stringify(res.body)}`);
+  if (res.status !== status)
+    throw new Error(`${method.toUpperCase()} ${path} as ${who}: ${res.status} ${JSON.stringify(res.body)}`);
   return res.body;
 }
 
 /** Uploads the 2 × 1 in test SVG to the printer's request as its buyer; the file's id. */
 export async function addDieline(w: World, requestId: number): Promise<number> {
-  const res = await request(app).post(`/api/requests/${requestId}/files`).set('Authorization', `Bearer ${w.tokens.buyer}`).attach('file', Buffer.from(rectangleSvg), 'label.svg');
+  const res = await request(app)
+    .post(`/api/requests/${requestId}/files`)
+    .set('Authorization', `Bearer ${w.tokens.buyer}`)
+    .attach('file', Buffer.from(rectangleSvg), 'label.svg');
   if (res.status !== 201) throw new Error(`upload to request ${requestId}: ${res.status} ${JSON.stringify(res.body)}`);
   return res.body.id;
 }
@@ -48,10 +59,20 @@ export async function createRequestAt(w: World, stage: Stage): Promise<StagedReq
   const steps = [
     () => callAs(w, 'purchasing', 'post', `/api/requests/${id}/close-bidding`, undefined, 200),
     async () => {
-      staged.awardId = (await callAs(w, 'purchasing', 'post', `/api/requests/${id}/award`, { bidId: bid.id }, 200)).award.id;
+      staged.awardId = (
+        await callAs(w, 'purchasing', 'post', `/api/requests/${id}/award`, { bidId: bid.id }, 200)
+      ).award.id;
     },
     () => callAs(w, 'estimator', 'post', `/api/requests/${id}/start-production`, undefined, 200),
-    () => callAs(w, 'estimator', 'post', `/api/requests/${id}/ship`, { trackingNote: 'Ground parcel, tracking 1Z-TEST-0001' }, 200),
+    () =>
+      callAs(
+        w,
+        'estimator',
+        'post',
+        `/api/requests/${id}/ship`,
+        { trackingNote: 'Ground parcel, tracking 1Z-TEST-0001' },
+        200,
+      ),
   ];
   for (const step of steps.slice(0, stages.indexOf(stage))) await step();
   return staged;

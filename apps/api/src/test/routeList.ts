@@ -17,7 +17,9 @@ function routeHandlers(app: Express): Map<string, Array<(...args: never[]) => un
         for (const [method, on] of Object.entries(layer.route.methods)) {
           if (!on || method === '_all') continue;
           const name = `${method.toUpperCase()} ${`${prefix}${layer.route.path}`.replace(/\/$/, '') || '/'}`;
-          const handlers = layer.route.stack.filter((l) => l.method === undefined || l.method === method).map((l) => l.handle as never);
+          const handlers = layer.route.stack
+            .filter((l) => l.method === undefined || l.method === method)
+            .map((l) => l.handle as never);
           found.set(name, [...(found.get(name) ?? []), ...handlers]);
         }
       } else if (layer.handle.stack) {

@@ -117,7 +117,15 @@ const cases: Record<string, UpdateCase> = {
   'PATCH /api/presses/:id': {
     as: 'printerAdmin',
     make: async () => (await createPress(w.printer)).id,
-    fields: () => ({ name: `Platen ${Math.random()}`, kind: 'flatbed', maxSheetWidthIn: 28, maxSheetLengthIn: 40, typicalSpeedSph: 3000, maxSpeedSph: 6000, active: false }),
+    fields: () => ({
+      name: `Platen ${Math.random()}`,
+      kind: 'flatbed',
+      maxSheetWidthIn: 28,
+      maxSheetLengthIn: 40,
+      typicalSpeedSph: 3000,
+      maxSpeedSph: 6000,
+      active: false,
+    }),
     read: async (id) => withoutClock(await knex('presses').where({ id }).first()),
     method: 'patch',
     path: (id) => `/api/presses/${id}`,
@@ -136,11 +144,26 @@ const cases: Record<string, UpdateCase> = {
       Number(
         (
           await knex('libraryDies')
-            .insert({ organisationId: w.printer.id, name: 'Sleeve die', ups: 1, ruleTypes: ['cut'], storageLocation: 'Rack A', condition: 'good', impressionLimit: 100_000, listed: true })
+            .insert({
+              organisationId: w.printer.id,
+              name: 'Sleeve die',
+              ups: 1,
+              ruleTypes: ['cut'],
+              storageLocation: 'Rack A',
+              condition: 'good',
+              impressionLimit: 100_000,
+              listed: true,
+            })
             .returning('id')
         )[0].id,
       ),
-    fields: () => ({ name: 'Sleeve die, long', storageLocation: 'Rack B', condition: 'worn', impressionLimit: 200_000, listed: false }),
+    fields: () => ({
+      name: 'Sleeve die, long',
+      storageLocation: 'Rack B',
+      condition: 'worn',
+      impressionLimit: 200_000,
+      listed: false,
+    }),
     read: async (id) => withoutClock(await knex('libraryDies').where({ id }).first()),
     method: 'patch',
     path: (id) => `/api/library/${id}`,
@@ -157,7 +180,10 @@ const cases: Record<string, UpdateCase> = {
     as: 'estimator',
     make: async () => {
       const open = await createOpenRequest(w);
-      const res = await request(app).post(`/api/requests/${open.id}/bids`).set(bearer(w.tokens.estimator)).send(bidBody(50_000, { notes: 'Steel from stock' }));
+      const res = await request(app)
+        .post(`/api/requests/${open.id}/bids`)
+        .set(bearer(w.tokens.estimator))
+        .send(bidBody(50_000, { notes: 'Steel from stock' }));
       expect(res.status, JSON.stringify(res.body)).toBe(201);
       return res.body.id;
     },
@@ -203,7 +229,8 @@ describe('an update changes exactly the fields it names', () => {
           expect(res.status, JSON.stringify(res.body)).toBe(200);
           const after = await c.read(id);
           for (const key of Object.keys(before)) {
-            if (!named.includes(key)) expect(after[key], `${key} after naming ${named.join(', ')}`).toEqual(before[key]);
+            if (!named.includes(key))
+              expect(after[key], `${key} after naming ${named.join(', ')}`).toEqual(before[key]);
           }
         }),
         { numRuns: 12 },

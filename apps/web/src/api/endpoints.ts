@@ -62,7 +62,8 @@ type Query = Record<string, string | number | boolean | undefined>;
 /** A query string of the values that are set. */
 function searchParams(query: Query): URLSearchParams {
   const params = new URLSearchParams();
-  for (const [key, value] of Object.entries(query)) if (value !== undefined && value !== '') params.set(key, String(value));
+  for (const [key, value] of Object.entries(query))
+    if (value !== undefined && value !== '') params.set(key, String(value));
   return params;
 }
 
@@ -70,10 +71,13 @@ export const requestsApi = {
   list: (query: Query) => api<Page<DieRequestSummary>>(`/requests?${searchParams(query)}`),
   get: (id: number) => api<DieRequestDetail>(`/requests/${id}`),
   create: (input: DieRequestCreate) => api<DieRequestDetail>('/requests', { method: 'POST', body: input }),
-  update: (id: number, patch: DieRequestUpdate) => api<DieRequestDetail>(`/requests/${id}`, { method: 'PATCH', body: patch }),
+  update: (id: number, patch: DieRequestUpdate) =>
+    api<DieRequestDetail>(`/requests/${id}`, { method: 'PATCH', body: patch }),
   publish: (id: number) => api<DieRequestDetail>(`/requests/${id}/publish`, { method: 'POST' }),
-  cancel: (id: number, reason: string) => api<DieRequestDetail>(`/requests/${id}/cancel`, { method: 'POST', body: { reason } }),
-  ask: (id: number, question: string) => api<RequestQuestionDto>(`/requests/${id}/questions`, { method: 'POST', body: { question } }),
+  cancel: (id: number, reason: string) =>
+    api<DieRequestDetail>(`/requests/${id}/cancel`, { method: 'POST', body: { reason } }),
+  ask: (id: number, question: string) =>
+    api<RequestQuestionDto>(`/requests/${id}/questions`, { method: 'POST', body: { question } }),
   answer: (id: number, questionId: number, answer: string) =>
     api<RequestQuestionDto>(`/requests/${id}/questions/${questionId}/answer`, { method: 'POST', body: { answer } }),
   marketplace: (query: Query) => api<Page<DieRequestSummary>>(`/marketplace/requests?${searchParams(query)}`),
@@ -85,22 +89,31 @@ export const filesApi = {
   preview: (id: number) => api<{ preview: DielinePreview | null }>(`/files/${id}/preview`),
   download: (id: number) => api<{ url: string; expiresAt: string }>(`/files/${id}/download`),
   makePrimary: (id: number) => api<DielineFileDto>(`/files/${id}/primary`, { method: 'POST' }),
-  remap: (id: number, layerMap: Record<string, string>) => api<DielineFileDto>(`/files/${id}/layers`, { method: 'PUT', body: { layerMap } }),
+  remap: (id: number, layerMap: Record<string, string>) =>
+    api<DielineFileDto>(`/files/${id}/layers`, { method: 'PUT', body: { layerMap } }),
   remove: (id: number) => api<void>(`/files/${id}`, { method: 'DELETE' }),
 };
 
 export const bidsApi = {
-  submit: (requestId: number, input: BidInput) => api<BidDto>(`/requests/${requestId}/bids`, { method: 'POST', body: input }),
+  submit: (requestId: number, input: BidInput) =>
+    api<BidDto>(`/requests/${requestId}/bids`, { method: 'POST', body: input }),
   revise: (bidId: number, input: BidInput) => api<BidDto>(`/bids/${bidId}`, { method: 'PATCH', body: input }),
   withdraw: (bidId: number) => api<BidDto>(`/bids/${bidId}/withdraw`, { method: 'POST' }),
-  decline: (requestId: number, reason: string) => api<void>(`/requests/${requestId}/decline`, { method: 'POST', body: { reason } }),
-  estimateAid: () => api<Array<{ currency: string; dies: number; centsPerInch: number | null; centsPerBend: number | null }>>('/estimate-aid'),
+  decline: (requestId: number, reason: string) =>
+    api<void>(`/requests/${requestId}/decline`, { method: 'POST', body: { reason } }),
+  estimateAid: () =>
+    api<Array<{ currency: string; dies: number; centsPerInch: number | null; centsPerBend: number | null }>>(
+      '/estimate-aid',
+    ),
   compare: (requestId: number) => api<BidComparisonDto>(`/requests/${requestId}/bids`),
-  closeBidding: (requestId: number) => api<DieRequestDetail>(`/requests/${requestId}/close-bidding`, { method: 'POST' }),
+  closeBidding: (requestId: number) =>
+    api<DieRequestDetail>(`/requests/${requestId}/close-bidding`, { method: 'POST' }),
   award: (requestId: number, bidId: number, reason?: string) =>
     api<DieRequestDetail>(`/requests/${requestId}/award`, { method: 'POST', body: { bidId, reason } }),
-  startProduction: (requestId: number) => api<DieRequestDetail>(`/requests/${requestId}/start-production`, { method: 'POST' }),
-  ship: (requestId: number, trackingNote: string) => api<DieRequestDetail>(`/requests/${requestId}/ship`, { method: 'POST', body: { trackingNote } }),
+  startProduction: (requestId: number) =>
+    api<DieRequestDetail>(`/requests/${requestId}/start-production`, { method: 'POST' }),
+  ship: (requestId: number, trackingNote: string) =>
+    api<DieRequestDetail>(`/requests/${requestId}/ship`, { method: 'POST', body: { trackingNote } }),
   receive: (requestId: number, condition: 'good' | 'damaged', notes?: string) =>
     api<DieRequestDetail>(`/requests/${requestId}/receive`, { method: 'POST', body: { condition, notes } }),
 };
@@ -114,7 +127,8 @@ export const notificationsApi = {
 export const meApi = {
   dashboard: () => api<DashboardDto>('/me/dashboard'),
   preferences: () => api<PreferencesDto>('/me/preferences'),
-  savePreferences: (email: Partial<Record<NotificationKind, boolean>>) => api<PreferencesDto>('/me/preferences', { method: 'PUT', body: { email } }),
+  savePreferences: (email: Partial<Record<NotificationKind, boolean>>) =>
+    api<PreferencesDto>('/me/preferences', { method: 'PUT', body: { email } }),
 };
 
 export interface PriceFitView {
@@ -122,13 +136,35 @@ export interface PriceFitView {
   total: number;
   sampled: number;
   fit:
-    | { enough: true; model: 'linear' | 'log'; r2: number; residualStandardErrorCents: number; n: number; df: number; describe: string; coefficients: { intercept: number; perInch: number; perFeature: number } }
+    | {
+        enough: true;
+        model: 'linear' | 'log';
+        r2: number;
+        residualStandardErrorCents: number;
+        n: number;
+        df: number;
+        describe: string;
+        coefficients: { intercept: number; perInch: number; perFeature: number };
+      }
     | { enough: false; reason: string; needed: number };
-  perInch: null | Record<'simple' | 'complex', { enough: true; n: number; q1Cents: number; medianCents: number; q3Cents: number } | { enough: false; reason: string }>;
-  trend: null | { quarters: Array<{ quarter: string; n: number; medianCentsPerInch: number | null; changePct: number | null }> };
+  perInch: null | Record<
+    'simple' | 'complex',
+    | { enough: true; n: number; q1Cents: number; medianCents: number; q3Cents: number }
+    | { enough: false; reason: string }
+  >;
+  trend: null | {
+    quarters: Array<{ quarter: string; n: number; medianCentsPerInch: number | null; changePct: number | null }>;
+  };
   curve: Array<{ ruleLengthIn: number; lowCents: number; typicalCents: number; highCents: number }>;
   typicalFeatures?: number;
-  points: Array<{ ruleLengthIn: number; dieCents: number; complexity: 'simple' | 'complex'; pricedOn: string; shopName: string; features: number }>;
+  points: Array<{
+    ruleLengthIn: number;
+    dieCents: number;
+    complexity: 'simple' | 'complex';
+    pricedOn: string;
+    shopName: string;
+    features: number;
+  }>;
   shops: string[];
   rule: string;
 }
@@ -137,14 +173,22 @@ export const priceHistoryApi = {
   list: (q: Query) => api<Page<PriceRecordDto>>(`/price-history?${searchParams(q)}`),
   fit: (q: Query) => api<PriceFitView>(`/price-history/fit?${searchParams(q)}`),
   exportUrl: (q: Query) => `/price-history/export.csv?${searchParams(q)}`,
-  fairPrice: (requestId: number) => api<{ enough: boolean; reason?: string; band?: { lowCents: number; typicalCents: number; highCents: number; currency: string; extrapolated: boolean } }>(`/requests/${requestId}/fair-price`),
+  fairPrice: (requestId: number) =>
+    api<{
+      enough: boolean;
+      reason?: string;
+      band?: { lowCents: number; typicalCents: number; highCents: number; currency: string; extrapolated: boolean };
+    }>(`/requests/${requestId}/fair-price`),
 };
 
 export const libraryApi = {
   list: () => api<LibraryDieDto[]>('/library'),
   get: (id: number) => api<LibraryDieDto & { preview: DielinePreview | null }>(`/library/${id}`),
-  update: (id: number, patch: Record<string, unknown>) => api<LibraryDieDto>(`/library/${id}`, { method: 'PATCH', body: patch }),
-  addRun: (id: number, run: { runOn: string; impressions: number; jobReference?: string | null; notes?: string | null }) =>
-    api<LibraryDieDto>(`/library/${id}/runs`, { method: 'POST', body: run }),
+  update: (id: number, patch: Record<string, unknown>) =>
+    api<LibraryDieDto>(`/library/${id}`, { method: 'PATCH', body: patch }),
+  addRun: (
+    id: number,
+    run: { runOn: string; impressions: number; jobReference?: string | null; notes?: string | null },
+  ) => api<LibraryDieDto>(`/library/${id}/runs`, { method: 'POST', body: run }),
   matches: (requestId: number) => api<LibraryDieDto[]>(`/requests/${requestId}/library-matches`),
 };

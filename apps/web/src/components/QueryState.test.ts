@@ -5,17 +5,27 @@ import QueryState from './QueryState.vue';
 
 const stubs = {
   'a-skeleton': { template: '<div class="skeleton" />' },
-  'a-result': { props: ['title', 'subTitle'], template: '<div class="result">{{ title }}: {{ subTitle }}<slot name="extra" /></div>' },
+  'a-result': {
+    props: ['title', 'subTitle'],
+    template: '<div class="result">{{ title }}: {{ subTitle }}<slot name="extra" /></div>',
+  },
   'a-empty': { props: ['description'], template: '<div class="empty">{{ description }}</div>' },
   'a-button': { template: '<button><slot /></button>' },
 };
 
 describe('QueryState', () => {
   it('shows loading, then the error with a retry, then empty, then the content', async () => {
-    const wrapper = mount(QueryState, { props: { loading: true, error: null }, slots: { default: '<p>content</p>' }, global: { stubs } });
+    const wrapper = mount(QueryState, {
+      props: { loading: true, error: null },
+      slots: { default: '<p>content</p>' },
+      global: { stubs },
+    });
     expect(wrapper.find('.skeleton').exists()).toBe(true);
 
-    await wrapper.setProps({ loading: false, error: new ApiRequestError(503, 'service_unavailable', 'Kerfmark is briefly unavailable.') });
+    await wrapper.setProps({
+      loading: false,
+      error: new ApiRequestError(503, 'service_unavailable', 'Kerfmark is briefly unavailable.'),
+    });
     expect(wrapper.text()).toContain('Kerfmark is briefly unavailable.');
     await wrapper.find('button').trigger('click');
     expect(wrapper.emitted('retry')).toHaveLength(1);

@@ -5,7 +5,9 @@ import { useAuthStore } from '../stores/auth';
 export function useDownload() {
   const auth = useAuthStore();
   return async function open(path: string, fileName: string) {
-    const response = await fetch(`/api${path}`, { headers: { Authorization: `Bearer ${auth.session?.token ?? ''}` } }).catch(() => null);
+    const response = await fetch(`/api${path}`, {
+      headers: { Authorization: `Bearer ${auth.session?.token ?? ''}` },
+    }).catch(() => null);
     if (!response?.ok) {
       message.error('The document could not be opened. Try again.');
       return;

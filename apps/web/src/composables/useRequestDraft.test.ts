@@ -4,7 +4,13 @@ import { emptyRequestForm, toRequestInput } from './useRequestDraft';
 
 describe('request form conversion', () => {
   it('turns caliper points into inches (1 pt = 0.001 in, common practice) and blanks into nulls', () => {
-    const input = toRequestInput({ ...emptyRequestForm(), title: 'Tray', caliperPt: 18, jobReference: '  ', needByDate: dayjs('2026-12-18') });
+    const input = toRequestInput({
+      ...emptyRequestForm(),
+      title: 'Tray',
+      caliperPt: 18,
+      jobReference: '  ',
+      needByDate: dayjs('2026-12-18'),
+    });
     expect(input.caliperIn).toBe(0.018);
     expect(input.jobReference).toBeNull();
     expect(input.needByDate).toBe('2026-12-18');

@@ -154,8 +154,13 @@ export function fromRequest(request: DieRequestDetail): RequestForm {
 }
 
 /** Back to what the buyer typed: "80 lb cover" stays in pounds of cover; otherwise g/m². */
-function weightFromEntry(entry: string | null, gsm: number | null): { stockWeight: number | undefined; weightUnit: WeightUnit } {
-  const unit = (Object.entries(weightUnitLabels) as Array<[WeightUnit, string]>).find(([, label]) => entry?.endsWith(` ${label}`))?.[0];
+function weightFromEntry(
+  entry: string | null,
+  gsm: number | null,
+): { stockWeight: number | undefined; weightUnit: WeightUnit } {
+  const unit = (Object.entries(weightUnitLabels) as Array<[WeightUnit, string]>).find(([, label]) =>
+    entry?.endsWith(` ${label}`),
+  )?.[0];
   if (entry && unit) return { stockWeight: Number(entry.split(' ')[0]), weightUnit: unit };
   return { stockWeight: gsm ?? undefined, weightUnit: 'gsm' };
 }

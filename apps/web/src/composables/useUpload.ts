@@ -30,7 +30,14 @@ export function useUpload<T>() {
           body = null;
         }
         if (xhr.status >= 200 && xhr.status < 300) return resolve(body as T);
-        reject(new ApiRequestError(xhr.status, body?.error?.code ?? 'upload_failed', body?.error?.message ?? `The upload failed (${xhr.status}).`, body?.error?.fields));
+        reject(
+          new ApiRequestError(
+            xhr.status,
+            body?.error?.code ?? 'upload_failed',
+            body?.error?.message ?? `The upload failed (${xhr.status}).`,
+            body?.error?.fields,
+          ),
+        );
       };
       xhr.onerror = () => {
         uploading.value = false;

@@ -72,7 +72,12 @@ export const appRoutes: RouteRecordRaw[] = [
 ];
 
 const routes: RouteRecordRaw[] = [
-  { path: '/sign-in', name: 'sign-in', component: () => import('../views/SignInView.vue'), meta: { public: true, title: 'Sign in' } },
+  {
+    path: '/sign-in',
+    name: 'sign-in',
+    component: () => import('../views/SignInView.vue'),
+    meta: { public: true, title: 'Sign in' },
+  },
   {
     path: '/accept-invitation',
     name: 'accept-invitation',
@@ -80,7 +85,12 @@ const routes: RouteRecordRaw[] = [
     meta: { public: true, title: 'Accept invitation' },
   },
   { path: '/', component: () => import('../layouts/AppLayout.vue'), children: appRoutes },
-  { path: '/:rest(.*)*', name: 'not-found', component: () => import('../views/NotFoundView.vue'), meta: { public: true, title: 'Not found' } },
+  {
+    path: '/:rest(.*)*',
+    name: 'not-found',
+    component: () => import('../views/NotFoundView.vue'),
+    meta: { public: true, title: 'Not found' },
+  },
 ];
 
 export const router = createRouter({ history: createWebHistory(), routes });
@@ -92,7 +102,8 @@ router.beforeEach(async (to) => {
   // Fetch the route's lazy views while the user is checked, not after: the browser caches the
   // modules, so the router's own import later finds them loaded.
   for (const record of to.matched) {
-    for (const view of Object.values(record.components ?? {})) if (typeof view === 'function') void (view as () => Promise<unknown>)().catch(() => undefined);
+    for (const view of Object.values(record.components ?? {}))
+      if (typeof view === 'function') void (view as () => Promise<unknown>)().catch(() => undefined);
   }
   try {
     const me = await auth.loadMe();

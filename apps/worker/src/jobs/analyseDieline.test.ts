@@ -12,12 +12,61 @@ afterAll(() => knex.destroy());
 
 /** A 4 × 3 in rectangle of cutting rule (perimeter 2 × (4 + 3) = 14 in) and a 4 in crease across it. */
 const rectangleDxf = [
-  '0', 'SECTION', '2', 'HEADER', '9', '$INSUNITS', '70', '1', '0', 'ENDSEC',
-  '0', 'SECTION', '2', 'ENTITIES',
-  '0', 'LWPOLYLINE', '8', 'CUT', '90', '4', '70', '1',
-  '10', '0', '20', '0', '10', '4', '20', '0', '10', '4', '20', '3', '10', '0', '20', '3',
-  '0', 'LINE', '8', 'CREASE', '10', '0', '20', '1.5', '11', '4', '21', '1.5',
-  '0', 'ENDSEC', '0', 'EOF', '',
+  '0',
+  'SECTION',
+  '2',
+  'HEADER',
+  '9',
+  '$INSUNITS',
+  '70',
+  '1',
+  '0',
+  'ENDSEC',
+  '0',
+  'SECTION',
+  '2',
+  'ENTITIES',
+  '0',
+  'LWPOLYLINE',
+  '8',
+  'CUT',
+  '90',
+  '4',
+  '70',
+  '1',
+  '10',
+  '0',
+  '20',
+  '0',
+  '10',
+  '4',
+  '20',
+  '0',
+  '10',
+  '4',
+  '20',
+  '3',
+  '10',
+  '0',
+  '20',
+  '3',
+  '0',
+  'LINE',
+  '8',
+  'CREASE',
+  '10',
+  '0',
+  '20',
+  '1.5',
+  '11',
+  '4',
+  '21',
+  '1.5',
+  '0',
+  'ENDSEC',
+  '0',
+  'EOF',
+  '',
 ].join('\n');
 
 /** A store that hands out the rectangle after `delayMs`, and can run a step while it waits. */
@@ -39,10 +88,23 @@ function slowStore(delayMs: number, during?: () => Promise<void>): Storage & { r
 }
 
 async function uploadedFile(over: Record<string, unknown> = {}): Promise<number> {
-  const [org] = await knex('organisations').insert({ name: `printer ${randomUUID().slice(0, 8)}`, kind: 'printer', time_zone: 'America/Chicago' }).returning('id');
-  const [request] = await knex('die_requests').insert({ organisation_id: org.id, title: 'Sleeve', status: 'draft', visibility: 'public' }).returning('id');
+  const [org] = await knex('organisations')
+    .insert({ name: `printer ${randomUUID().slice(0, 8)}`, kind: 'printer', time_zone: 'America/Chicago' })
+    .returning('id');
+  const [request] = await knex('die_requests')
+    .insert({ organisation_id: org.id, title: 'Sleeve', status: 'draft', visibility: 'public' })
+    .returning('id');
   const [file] = await knex('dieline_files')
-    .insert({ request_id: request.id, file_name: 'sleeve.dxf', format: 'dxf', content_type: 'application/dxf', byte_size: rectangleDxf.length, sha256: 'x', s3_key: `test/${randomUUID()}`, ...over })
+    .insert({
+      request_id: request.id,
+      file_name: 'sleeve.dxf',
+      format: 'dxf',
+      content_type: 'application/dxf',
+      byte_size: rectangleDxf.length,
+      sha256: 'x',
+      s3_key: `test/${randomUUID()}`,
+      ...over,
+    })
     .returning('id');
   return file.id as number;
 }
@@ -64,7 +126,11 @@ describe('analysing a dieline with more than one worker', () => {
   it('keeps the remap that came during a run: the run is dropped and the next one measures the new layers', async () => {
     const id = await uploadedFile();
     // What the API's remap does: new layers, and the file waits for a run again.
-    const remap = () => knex('dieline_files').where({ id }).update({ layer_map: JSON.stringify({ CREASE: 'cut' }), analysis_status: 'pending' }).then(() => undefined);
+    const remap = () =>
+      knex('dieline_files')
+        .where({ id })
+        .update({ layer_map: JSON.stringify({ CREASE: 'cut' }), analysis_status: 'pending' })
+        .then(() => undefined);
     expect(await analyseDielineFile(knex, slowStore(50, remap), id)).toBe('superseded');
     expect((await fileRow(id)).analysis_status).toBe('pending');
     expect(await analyseDielineFile(knex, slowStore(0), id)).toBe('done');
@@ -75,8 +141,16 @@ describe('analysing a dieline with more than one worker', () => {
   });
 
   it('claims a run again only once it has gone stale, as when its worker died', async () => {
-    const fresh = await uploadedFile({ analysis_status: 'analysing', analysis_started_at: new Date(), analysis_runs: 1 });
-    const stale = await uploadedFile({ analysis_status: 'analysing', analysis_started_at: new Date(Date.now() - 3_600_000), analysis_runs: 1 });
+    const fresh = await uploadedFile({
+      analysis_status: 'analysing',
+      analysis_started_at: new Date(),
+      analysis_runs: 1,
+    });
+    const stale = await uploadedFile({
+      analysis_status: 'analysing',
+      analysis_started_at: new Date(Date.now() - 3_600_000),
+      analysis_runs: 1,
+    });
     expect(await analyseDielineFile(knex, slowStore(0), fresh)).toBe('skipped');
     expect(await analyseDielineFile(knex, slowStore(0), stale)).toBe('done');
     expect((await fileRow(stale)).analysis_runs).toBe(2);
@@ -87,8 +161,16 @@ describe('analysing a dieline with more than one worker', () => {
     // A little older than the sweep's wait below, and newer than the running worker's.
     const old = new Date(Date.now() - 2_000);
     const waiting = await uploadedFile({ uploaded_at: old });
-    const running = await uploadedFile({ uploaded_at: old, analysis_status: 'analysing', analysis_started_at: new Date() });
-    const stale = await uploadedFile({ uploaded_at: old, analysis_status: 'analysing', analysis_started_at: new Date(Date.now() - 3_600_000) });
+    const running = await uploadedFile({
+      uploaded_at: old,
+      analysis_status: 'analysing',
+      analysis_started_at: new Date(),
+    });
+    const stale = await uploadedFile({
+      uploaded_at: old,
+      analysis_status: 'analysing',
+      analysis_started_at: new Date(Date.now() - 3_600_000),
+    });
     const recent = await uploadedFile();
     const listed = await waitingAnalyses(knex, 1_000, { limit: 10_000 });
     expect(listed).toEqual(expect.arrayContaining([waiting, stale]));

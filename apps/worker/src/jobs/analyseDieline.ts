@@ -2,7 +2,8 @@ import { analyseDieline, DielineError, type LayerMap } from '@kerfmark/dieline';
 import type { Storage } from '@kerfmark/storage';
 import type { Knex } from 'knex';
 
-const UNREADABLE = 'Kerfmark could not measure this file. Save it again from your drawing program as DXF, SVG or PDF and upload it again.';
+const UNREADABLE =
+  'Kerfmark could not measure this file. Save it again from your drawing program as DXF, SVG or PDF and upload it again.';
 
 /** `superseded`: the layers were remapped during the run, so its figures are dropped for the new run's. */
 export type AnalysisResult = 'done' | 'failed' | 'skipped' | 'superseded';
@@ -14,7 +15,9 @@ export const STALE_ANALYSIS_MS = 10 * 60_000;
 function staleRun(q: Knex.QueryBuilder, staleMs: number): Knex.QueryBuilder {
   return q
     .where('analysis_status', 'analysing')
-    .andWhere((t) => t.whereNull('analysis_started_at').orWhere('analysis_started_at', '<', new Date(Date.now() - staleMs)));
+    .andWhere((t) =>
+      t.whereNull('analysis_started_at').orWhere('analysis_started_at', '<', new Date(Date.now() - staleMs)),
+    );
 }
 
 interface ClaimedFile {
@@ -35,7 +38,11 @@ async function claim(knex: Knex, fileId: number, staleMs: number): Promise<Claim
   const [row] = await knex('dieline_files')
     .where({ id: fileId })
     .andWhere((q) => q.where('analysis_status', 'pending').orWhere((s) => staleRun(s, staleMs)))
-    .update({ analysis_status: 'analysing', analysis_started_at: new Date(), analysis_runs: knex.raw('analysis_runs + 1') })
+    .update({
+      analysis_status: 'analysing',
+      analysis_started_at: new Date(),
+      analysis_runs: knex.raw('analysis_runs + 1'),
+    })
     .returning(['id', 'request_id', 'file_name', 's3_key', 'layer_map', 'analysis_runs']);
   return row as ClaimedFile | undefined;
 }
@@ -46,10 +53,16 @@ async function claim(knex: Knex, fileId: number, staleMs: number): Promise<Claim
  * retries (and the sweep after that). Every write after the claim names the run it belongs to:
  * a remap during the run (which makes the file wait again) wins over the run's stale figures.
  */
-export async function analyseDielineFile(knex: Knex, storage: Storage, fileId: number, opts: { staleMs?: number } = {}): Promise<AnalysisResult> {
+export async function analyseDielineFile(
+  knex: Knex,
+  storage: Storage,
+  fileId: number,
+  opts: { staleMs?: number } = {},
+): Promise<AnalysisResult> {
   const file = await claim(knex, fileId, opts.staleMs ?? STALE_ANALYSIS_MS);
   if (!file) return 'skipped';
-  const thisRun = () => knex('dieline_files').where({ id: fileId, analysis_status: 'analysing', analysis_runs: file.analysis_runs });
+  const thisRun = () =>
+    knex('dieline_files').where({ id: fileId, analysis_status: 'analysing', analysis_runs: file.analysis_runs });
   const request = await knex('die_requests').where({ id: file.request_id }).first();
   const press = request?.press_id ? await knex('presses').where({ id: request.press_id }).first() : null;
 
@@ -68,13 +81,25 @@ export async function analyseDielineFile(knex: Knex, storage: Storage, fileId: n
       layerMap: file.layer_map ?? {},
       press: press ? { widthIn: Number(press.max_sheet_width_in), lengthIn: Number(press.max_sheet_length_in) } : null,
     });
-    update = { analysis_status: 'done', analysis_error: null, metrics: JSON.stringify(metrics), preview: JSON.stringify(preview), analysed_at: new Date() };
+    update = {
+      analysis_status: 'done',
+      analysis_error: null,
+      metrics: JSON.stringify(metrics),
+      preview: JSON.stringify(preview),
+      analysed_at: new Date(),
+    };
     result = 'done';
   } catch (error) {
     // Whatever the reading throws is about this file (a parser library's plain Error included):
     // settle it as failed, or it stays "measuring" and every sweep trips on it again.
     const reason = error instanceof DielineError ? error.message : UNREADABLE;
-    update = { analysis_status: 'failed', analysis_error: reason, metrics: null, preview: null, analysed_at: new Date() };
+    update = {
+      analysis_status: 'failed',
+      analysis_error: reason,
+      metrics: null,
+      preview: null,
+      analysed_at: new Date(),
+    };
     result = 'failed';
   }
   const written = await thisRun().update(update);
@@ -85,7 +110,11 @@ export async function analyseDielineFile(knex: Knex, storage: Storage, fileId: n
  * Files whose analysis job was lost (Redis down or flushed), oldest first: waiting ones
  * uploaded more than `olderThanMs` ago, and runs that went stale. The claim decides who runs them.
  */
-export async function waitingAnalyses(knex: Knex, olderThanMs: number, opts: { staleMs?: number; limit?: number } = {}): Promise<number[]> {
+export async function waitingAnalyses(
+  knex: Knex,
+  olderThanMs: number,
+  opts: { staleMs?: number; limit?: number } = {},
+): Promise<number[]> {
   const rows = await knex('dieline_files')
     .where((q) => q.where('analysis_status', 'pending').orWhere((s) => staleRun(s, opts.staleMs ?? STALE_ANALYSIS_MS)))
     .andWhere('uploaded_at', '<', new Date(Date.now() - olderThanMs))

@@ -17,13 +17,27 @@ vi.mock('@kerfmark/dieline', async (original) => ({
 const knex = knexFactory({ client: 'pg', connection: process.env.DATABASE_URL });
 afterAll(() => knex.destroy());
 
-const storage = { get: async () => new TextEncoder().encode('<svg xmlns="http://www.w3.org/2000/svg"/>') } as unknown as Storage;
+const storage = {
+  get: async () => new TextEncoder().encode('<svg xmlns="http://www.w3.org/2000/svg"/>'),
+} as unknown as Storage;
 
 async function waitingFile(): Promise<number> {
-  const [org] = await knex('organisations').insert({ name: `Printer ${randomUUID()}`, kind: 'printer', time_zone: 'UTC', country: 'US' }).returning('id');
-  const [request] = await knex('die_requests').insert({ organisation_id: org.id, title: 'Carton', quantity: 1, ups: 1, rule_types: ['cut'] }).returning('id');
+  const [org] = await knex('organisations')
+    .insert({ name: `Printer ${randomUUID()}`, kind: 'printer', time_zone: 'UTC', country: 'US' })
+    .returning('id');
+  const [request] = await knex('die_requests')
+    .insert({ organisation_id: org.id, title: 'Carton', quantity: 1, ups: 1, rule_types: ['cut'] })
+    .returning('id');
   const [file] = await knex('dieline_files')
-    .insert({ request_id: request.id, file_name: 'carton.svg', format: 'svg', content_type: 'image/svg+xml', byte_size: 40, sha256: 'test', s3_key: `test/${randomUUID()}.svg` })
+    .insert({
+      request_id: request.id,
+      file_name: 'carton.svg',
+      format: 'svg',
+      content_type: 'image/svg+xml',
+      byte_size: 40,
+      sha256: 'test',
+      s3_key: `test/${randomUUID()}.svg`,
+    })
     .returning('id');
   return file.id;
 }

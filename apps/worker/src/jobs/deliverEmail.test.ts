@@ -19,7 +19,13 @@ afterAll(async () => {
 
 async function outboxRow(to: string) {
   const [row] = await knex('email_outbox')
-    .insert({ to_address: to, subject: `Test ${to}`, text_body: 'Plain text body', kind: 'test', next_attempt_at: new Date(Date.now() + 3600_000) })
+    .insert({
+      to_address: to,
+      subject: `Test ${to}`,
+      text_body: 'Plain text body',
+      kind: 'test',
+      next_attempt_at: new Date(Date.now() + 3600_000),
+    })
     .returning('*');
   return row as { id: number };
 }
@@ -33,7 +39,10 @@ describe('e-mail delivery from the outbox', () => {
   it('sends once when the same job runs twice at the same time', async () => {
     const to = `once-${Date.now()}@test.example`;
     const row = await outboxRow(to);
-    const results = await Promise.all([deliverEmail(knex, mailer, FROM, row.id), deliverEmail(knex, mailer, FROM, row.id)]);
+    const results = await Promise.all([
+      deliverEmail(knex, mailer, FROM, row.id),
+      deliverEmail(knex, mailer, FROM, row.id),
+    ]);
     expect(results.sort()).toEqual(['sent', 'skipped']);
     expect(await deliverEmail(knex, mailer, FROM, row.id)).toBe('skipped');
     const messages = await caught(to);
@@ -52,7 +61,9 @@ describe('e-mail delivery from the outbox', () => {
     expect(await caught(to)).toHaveLength(0);
 
     // Its retry time comes round; the sweep (which also stands in for a lost queue job) sends it.
-    await knex('email_outbox').where({ id: row.id }).update({ next_attempt_at: new Date(Date.now() - 1000) });
+    await knex('email_outbox')
+      .where({ id: row.id })
+      .update({ next_attempt_at: new Date(Date.now() - 1000) });
     // The running worker's own sweep may take it first; either way it arrives exactly once.
     await sweepOutbox(knex, mailer, FROM);
     await sweepOutbox(knex, mailer, FROM);

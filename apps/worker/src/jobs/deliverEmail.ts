@@ -14,13 +14,14 @@ export type DeliveryResult = 'sent' | 'skipped' | 'retry-later' | 'gave-up';
  * Sends one outbox e-mail at most once. The row is locked while it is sent, so a second worker
  * (or the same job run twice) skips it; a failed send is recorded and retried later with backoff.
  */
-export async function deliverEmail(knex: Knex, mailer: Mailer, from: string, outboxId: number): Promise<DeliveryResult> {
+export async function deliverEmail(
+  knex: Knex,
+  mailer: Mailer,
+  from: string,
+  outboxId: number,
+): Promise<DeliveryResult> {
   return knex.transaction(async (trx) => {
-    const row = await trx('email_outbox')
-      .where({ id: outboxId, status: 'pending' })
-      .forUpdate()
-      .skipLocked()
-      .first();
+    const row = await trx('email_outbox').where({ id: outboxId, status: 'pending' }).forUpdate().skipLocked().first();
     if (!row) return 'skipped';
     try {
       await mailer.sendMail({
@@ -45,7 +46,9 @@ export async function deliverEmail(knex: Knex, mailer: Mailer, from: string, out
         });
       return gaveUp ? 'gave-up' : 'retry-later';
     }
-    await trx('email_outbox').where({ id: outboxId }).update({ status: 'sent', sent_at: new Date(), attempts: row.attempts + 1 });
+    await trx('email_outbox')
+      .where({ id: outboxId })
+      .update({ status: 'sent', sent_at: new Date(), attempts: row.attempts + 1 });
     return 'sent';
   });
 }

@@ -14,7 +14,12 @@ export interface Swept<R> {
  * Runs a sweep's items one at a time, each on its own: an item that throws is logged and counted
  * and the sweep goes on, so one bad record never holds back every record after it.
  */
-export async function sweepEach<T, R>(sweep: string, items: readonly T[], handle: (item: T) => Promise<R>, log: SweepLog = consoleLog): Promise<Swept<R>> {
+export async function sweepEach<T, R>(
+  sweep: string,
+  items: readonly T[],
+  handle: (item: T) => Promise<R>,
+  log: SweepLog = consoleLog,
+): Promise<Swept<R>> {
   const results: R[] = [];
   let failed = 0;
   for (const item of items) {
@@ -22,7 +27,10 @@ export async function sweepEach<T, R>(sweep: string, items: readonly T[], handle
       results.push(await handle(item));
     } catch (error) {
       failed += 1;
-      log.warn({ sweep, item, err: error instanceof Error ? error.message : String(error) }, 'sweep item failed; going on with the next');
+      log.warn(
+        { sweep, item, err: error instanceof Error ? error.message : String(error) },
+        'sweep item failed; going on with the next',
+      );
     }
   }
   if (failed) log.warn({ sweep, failed, total: items.length }, 'sweep finished with failures');

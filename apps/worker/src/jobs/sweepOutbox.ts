@@ -7,7 +7,13 @@ import { consoleLog, sweepEach, type SweepLog } from './sweepEach';
  * Delivers every outbox e-mail that is due: those whose job was lost (Redis down or flushed)
  * and those waiting out a retry. PostgreSQL is the source of truth, not the queue.
  */
-export async function sweepOutbox(knex: Knex, mailer: Mailer, from: string, log: SweepLog = consoleLog, limit = 100): Promise<DeliveryResult[]> {
+export async function sweepOutbox(
+  knex: Knex,
+  mailer: Mailer,
+  from: string,
+  log: SweepLog = consoleLog,
+  limit = 100,
+): Promise<DeliveryResult[]> {
   const due = await knex('email_outbox')
     .where({ status: 'pending' })
     .andWhere('next_attempt_at', '<=', new Date())

@@ -6,7 +6,16 @@ export async function loadReminderState(knex: Knex, requestId: number): Promise<
   const request = await knex('die_requests as r')
     .join('organisations as o', 'o.id', 'r.organisation_id')
     .where('r.id', requestId)
-    .first('r.id', 'r.status', 'o.time_zone', 'r.published_at', 'r.bid_deadline', 'r.bidding_closed_at', 'r.need_by_date', 'r.shipped_at');
+    .first(
+      'r.id',
+      'r.status',
+      'o.time_zone',
+      'r.published_at',
+      'r.bid_deadline',
+      'r.bidding_closed_at',
+      'r.need_by_date',
+      'r.shipped_at',
+    );
   if (!request) return null;
   const award = await knex('awards as a')
     .join('organisations as s', 's.id', 'a.shop_id')
@@ -14,8 +23,12 @@ export async function loadReminderState(knex: Knex, requestId: number): Promise<
     .first('a.awarded_at', 'a.promised_ship_date', 's.time_zone');
   const best = award
     ? undefined
-    : await knex('bids').where({ request_id: requestId, status: 'submitted' }).orderBy('total_cents').first('valid_until');
-  const date = (v: unknown) => (v === null || v === undefined ? null : v instanceof Date ? v.toISOString().slice(0, 10) : String(v));
+    : await knex('bids')
+        .where({ request_id: requestId, status: 'submitted' })
+        .orderBy('total_cents')
+        .first('valid_until');
+  const date = (v: unknown) =>
+    v === null || v === undefined ? null : v instanceof Date ? v.toISOString().slice(0, 10) : String(v);
   return {
     request: {
       id: request.id,
@@ -27,7 +40,13 @@ export async function loadReminderState(knex: Knex, requestId: number): Promise<
       needByDate: date(request.need_by_date),
       shippedAt: request.shipped_at,
     },
-    award: award ? { awardedAt: award.awarded_at, promisedShipDate: date(award.promised_ship_date)!, shopTimeZone: award.time_zone } : null,
+    award: award
+      ? {
+          awardedAt: award.awarded_at,
+          promisedShipDate: date(award.promised_ship_date)!,
+          shopTimeZone: award.time_zone,
+        }
+      : null,
     bestBidValidUntil: best ? date(best.valid_until) : null,
   };
 }

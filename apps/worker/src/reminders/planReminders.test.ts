@@ -72,7 +72,11 @@ describe('reminder rules', () => {
   });
 
   it('reminds the awarded shop and the buyer 7 and 2 days before the need-by date, and flags a late die', () => {
-    const award = { awardedAt: new Date('2026-12-11T16:00:00Z'), promisedShipDate: '2026-12-21', shopTimeZone: 'America/Indiana/Indianapolis' };
+    const award = {
+      awardedAt: new Date('2026-12-11T16:00:00Z'),
+      promisedShipDate: '2026-12-21',
+      shopTimeZone: 'America/Indiana/Indianapolis',
+    };
     const state = base({ status: 'awarded' }, { award });
     expect(kinds(state)).toEqual(['need_by_7d', 'need_by_2d', 'late_shipment']);
     expect(at(state, 'need_by_7d').fireAt.toISOString()).toBe('2026-12-24T15:00:00.000Z');

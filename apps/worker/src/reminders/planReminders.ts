@@ -60,15 +60,30 @@ export function planReminders(state: ReminderState): PlannedReminder[] {
   };
 
   if (request.status === 'open' && request.bidDeadline) {
-    add('bid_deadline_48h', new Date(request.bidDeadline.getTime() - 48 * HOUR), request.bidDeadline, request.publishedAt);
-    add('bid_deadline_24h', new Date(request.bidDeadline.getTime() - 24 * HOUR), request.bidDeadline, request.publishedAt);
+    add(
+      'bid_deadline_48h',
+      new Date(request.bidDeadline.getTime() - 48 * HOUR),
+      request.bidDeadline,
+      request.publishedAt,
+    );
+    add(
+      'bid_deadline_24h',
+      new Date(request.bidDeadline.getTime() - 24 * HOUR),
+      request.bidDeadline,
+      request.publishedAt,
+    );
   }
   if ((request.status === 'open' || request.status === 'bidding_closed') && !award) {
     const due = request.biddingClosedAt ?? request.bidDeadline;
     if (due) add('bids_ready', due, null, null);
     if (state.bestBidValidUntil && due) {
       const lapses = zonedTime(state.bestBidValidUntil, 23, request.timeZone);
-      add('validity_ending', new Date(zonedTime(state.bestBidValidUntil, MORNING, request.timeZone).getTime() - 2 * DAY), lapses, due);
+      add(
+        'validity_ending',
+        new Date(zonedTime(state.bestBidValidUntil, MORNING, request.timeZone).getTime() - 2 * DAY),
+        lapses,
+        due,
+      );
     }
   }
   if (award && (request.status === 'awarded' || request.status === 'in_production') && !request.shippedAt) {
@@ -85,5 +100,7 @@ export function planReminders(state: ReminderState): PlannedReminder[] {
 
 /** Due now: its time has come, it has not expired. */
 export function isDue(reminder: PlannedReminder, now: Date): boolean {
-  return reminder.fireAt.getTime() <= now.getTime() && (!reminder.expiresAt || reminder.expiresAt.getTime() > now.getTime());
+  return (
+    reminder.fireAt.getTime() <= now.getTime() && (!reminder.expiresAt || reminder.expiresAt.getTime() > now.getTime())
+  );
 }

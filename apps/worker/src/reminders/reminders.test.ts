@@ -29,12 +29,21 @@ afterAll(async () => {
 
 async function org(kind: 'printer' | 'die_shop') {
   const timeZone = kind === 'printer' ? 'America/Chicago' : 'America/Indiana/Indianapolis';
-  const [row] = await knex('organisations').insert({ name: `${kind} ${randomUUID().slice(0, 8)}`, kind, time_zone: timeZone }).returning('id');
+  const [row] = await knex('organisations')
+    .insert({ name: `${kind} ${randomUUID().slice(0, 8)}`, kind, time_zone: timeZone })
+    .returning('id');
   return row.id as number;
 }
 async function user(organisationId: number, role: string, preferences = {}) {
   const [row] = await knex('users')
-    .insert({ organisation_id: organisationId, email: `${role}-${randomUUID().slice(0, 8)}@test.example`, name: `Test ${role}`, role, password_hash: 'x', preferences: JSON.stringify(preferences) })
+    .insert({
+      organisation_id: organisationId,
+      email: `${role}-${randomUUID().slice(0, 8)}@test.example`,
+      name: `Test ${role}`,
+      role,
+      password_hash: 'x',
+      preferences: JSON.stringify(preferences),
+    })
     .returning(['id', 'email']);
   return row as { id: number; email: string };
 }
@@ -48,15 +57,22 @@ async function openRequest(deadline: Date, opts: { preferences?: Record<string, 
   const estimator = await user(shop, 'estimator', opts.preferences);
   const [request] = await knex('die_requests')
     .insert({
-      organisation_id: printer, created_by: buyer.id, title: `Carton ${randomUUID().slice(0, 6)}`, status: 'open', visibility: 'invited',
-      bid_deadline: deadline, published_at: new Date(deadline.getTime() - 10 * 24 * HOUR), need_by_date: '2027-03-01',
+      organisation_id: printer,
+      created_by: buyer.id,
+      title: `Carton ${randomUUID().slice(0, 6)}`,
+      status: 'open',
+      visibility: 'invited',
+      bid_deadline: deadline,
+      published_at: new Date(deadline.getTime() - 10 * 24 * HOUR),
+      need_by_date: '2027-03-01',
     })
     .returning('id');
   await knex('request_invitations').insert({ request_id: request.id, shop_id: shop });
   return { id: request.id as number, printer, buyer, purchasing, shop, estimator };
 }
 
-const keyOf = async (requestId: number, kind: string) => planReminders((await loadReminderState(knex, requestId))!).find((r) => r.kind === kind)!.key;
+const keyOf = async (requestId: number, kind: string) =>
+  planReminders((await loadReminderState(knex, requestId))!).find((r) => r.kind === kind)!.key;
 const outboxTo = (email: string) => knex('email_outbox').where({ to_address: email });
 
 describe('reminders against PostgreSQL and Redis', () => {
@@ -64,12 +80,17 @@ describe('reminders against PostgreSQL and Redis', () => {
     const deadline = new Date('2027-01-15T23:00:00Z');
     const r = await openRequest(deadline);
     const key = await keyOf(r.id, 'bid_deadline_24h');
-    expect((await sendReminder(knex, { ...APP, now: new Date(deadline.getTime() - 30 * HOUR) }, r.id, key)).result).toBe('not-due');
+    expect(
+      (await sendReminder(knex, { ...APP, now: new Date(deadline.getTime() - 30 * HOUR) }, r.id, key)).result,
+    ).toBe('not-due');
     const at = new Date(deadline.getTime() - 24 * HOUR + 60_000);
     const first = await sendReminder(knex, { ...APP, now: at }, r.id, key);
     expect(first.result).toBe('sent');
     // A job that runs twice (or two workers at once) sends one e-mail.
-    const again = await Promise.all([sendReminder(knex, { ...APP, now: at }, r.id, key), sendReminder(knex, { ...APP, now: at }, r.id, key)]);
+    const again = await Promise.all([
+      sendReminder(knex, { ...APP, now: at }, r.id, key),
+      sendReminder(knex, { ...APP, now: at }, r.id, key),
+    ]);
     expect(again.map((x) => x.result)).toEqual(['already-sent', 'already-sent']);
     const mail = await outboxTo(r.estimator.email);
     expect(mail).toHaveLength(1);
@@ -82,23 +103,54 @@ describe('reminders against PostgreSQL and Redis', () => {
 
   it('tells purchasing when the best bid is about to lapse, and the awarded shop and buyer before the need-by date', async () => {
     const r = await openRequest(new Date('2026-12-01T23:00:00Z'));
-    await knex('die_requests').where({ id: r.id }).update({ status: 'bidding_closed', bidding_closed_at: new Date('2026-12-01T23:00:00Z') });
-    await knex('bids').insert({ request_id: r.id, shop_id: r.shop, lines: '[]', currency: 'USD', total_cents: 50_000, die_cents: 45_000, lead_days: 5, promised_ship_date: '2026-12-09', valid_until: '2026-12-20' });
+    await knex('die_requests')
+      .where({ id: r.id })
+      .update({ status: 'bidding_closed', bidding_closed_at: new Date('2026-12-01T23:00:00Z') });
+    await knex('bids').insert({
+      request_id: r.id,
+      shop_id: r.shop,
+      lines: '[]',
+      currency: 'USD',
+      total_cents: 50_000,
+      die_cents: 45_000,
+      lead_days: 5,
+      promised_ship_date: '2026-12-09',
+      valid_until: '2026-12-20',
+    });
     const lapse = await keyOf(r.id, 'validity_ending');
     // 09:00 Chicago on 18 Dec (two days before 20 Dec) = 15:00 UTC.
-    expect((await sendReminder(knex, { ...APP, now: new Date('2026-12-18T15:00:00Z') }, r.id, lapse)).result).toBe('sent');
+    expect((await sendReminder(knex, { ...APP, now: new Date('2026-12-18T15:00:00Z') }, r.id, lapse)).result).toBe(
+      'sent',
+    );
     // (The running worker may also have sent "bids ready" for this request: look at this rule's e-mails.)
-    const lapseMail = (email: string) => outboxTo(email).then((rows) => rows.filter((m) => /^Best bid lapses soon/.test(m.subject)));
+    const lapseMail = (email: string) =>
+      outboxTo(email).then((rows) => rows.filter((m) => /^Best bid lapses soon/.test(m.subject)));
     expect(await lapseMail(r.purchasing.email)).toHaveLength(1);
     expect(await lapseMail(r.buyer.email)).toHaveLength(0);
 
     const bid = await knex('bids').where({ request_id: r.id }).first('id');
-    await knex('awards').insert({ request_id: r.id, bid_id: bid.id, shop_id: r.shop, revision: 1, total_cents: 50_000, die_cents: 45_000, currency: 'USD', lead_days: 5, promised_ship_date: '2027-02-20', awarded_at: new Date('2026-12-19T15:00:00Z'), po_number: `PO-T-${randomUUID().slice(0, 8)}` });
+    await knex('awards').insert({
+      request_id: r.id,
+      bid_id: bid.id,
+      shop_id: r.shop,
+      revision: 1,
+      total_cents: 50_000,
+      die_cents: 45_000,
+      currency: 'USD',
+      lead_days: 5,
+      promised_ship_date: '2027-02-20',
+      awarded_at: new Date('2026-12-19T15:00:00Z'),
+      po_number: `PO-T-${randomUUID().slice(0, 8)}`,
+    });
     await knex('die_requests').where({ id: r.id }).update({ status: 'awarded' });
     const week = await keyOf(r.id, 'need_by_7d');
     // Need-by 1 Mar 2027, 09:00 Chicago = 15:00 UTC; seven days before: 22 Feb 15:00 UTC.
-    expect((await sendReminder(knex, { ...APP, now: new Date('2027-02-22T15:00:00Z') }, r.id, week)).result).toBe('sent');
-    expect((await outboxTo(r.estimator.email)).map((m) => m.subject)).toContain(`Needed in 7 days: ${(await knex('die_requests').where({ id: r.id }).first('title')).title}`);
+    expect((await sendReminder(knex, { ...APP, now: new Date('2027-02-22T15:00:00Z') }, r.id, week)).result).toBe(
+      'sent',
+    );
+    expect((await outboxTo(r.estimator.email)).map((m) => m.subject)).toContain(
+      `Needed in 7 days: ${(await knex('die_requests').where({ id: r.id }).first('title')).title}`,
+    );
     expect((await outboxTo(r.buyer.email)).filter((m) => /^Needed in 7 days/.test(m.subject))).toHaveLength(1);
   });
 
@@ -107,7 +159,9 @@ describe('reminders against PostgreSQL and Redis', () => {
     const r = await openRequest(deadline);
     const key = await keyOf(r.id, 'bid_deadline_48h');
     await knex('die_requests').where({ id: r.id }).update({ status: 'cancelled' });
-    expect((await sendReminder(knex, { ...APP, now: new Date(deadline.getTime() - 47 * HOUR) }, r.id, key)).result).toBe('no-longer-applies');
+    expect(
+      (await sendReminder(knex, { ...APP, now: new Date(deadline.getTime() - 47 * HOUR) }, r.id, key)).result,
+    ).toBe('no-longer-applies');
     expect(await outboxTo(r.estimator.email)).toHaveLength(0);
   });
 
@@ -115,7 +169,9 @@ describe('reminders against PostgreSQL and Redis', () => {
     const deadline = new Date('2027-01-22T23:00:00Z');
     const r = await openRequest(deadline, { preferences: { bid_deadline_24h: false } });
     const key = await keyOf(r.id, 'bid_deadline_24h');
-    expect((await sendReminder(knex, { ...APP, now: new Date(deadline.getTime() - 23 * HOUR) }, r.id, key)).result).toBe('sent');
+    expect(
+      (await sendReminder(knex, { ...APP, now: new Date(deadline.getTime() - 23 * HOUR) }, r.id, key)).result,
+    ).toBe('sent');
     expect(await outboxTo(r.estimator.email)).toHaveLength(0);
     expect(await knex('notifications').where({ user_id: r.estimator.id, kind: 'bid_deadline_24h' })).toHaveLength(1);
   });
@@ -131,7 +187,9 @@ describe('reminders against PostgreSQL and Redis', () => {
     // Fires 24 h before the deadline: 25 Jan 23:00 − 24 h − now = 23 days 11 h.
     expect(job?.opts.delay).toBe((23 * 24 + 11) * HOUR);
 
-    await knex('die_requests').where({ id: r.id }).update({ bid_deadline: new Date('2027-01-27T23:00:00Z') });
+    await knex('die_requests')
+      .where({ id: r.id })
+      .update({ bid_deadline: new Date('2027-01-27T23:00:00Z') });
     const moved = await planRequestReminders(knex, queue, r.id, now);
     for (const id of first) expect(await queue.getJob(id)).toBeUndefined();
     for (const id of moved) expect(await queue.getJob(id)).toBeDefined();
@@ -155,16 +213,42 @@ describe('reminders against PostgreSQL and Redis', () => {
   it('flags a die not shipped by the day after its promised date, and tells both sides', async () => {
     const r = await openRequest(new Date('2026-11-01T23:00:00Z'));
     const [bid] = await knex('bids')
-      .insert({ request_id: r.id, shop_id: r.shop, lines: '[]', currency: 'USD', total_cents: 100_000, die_cents: 90_000, lead_days: 5, promised_ship_date: '2026-11-10', valid_until: '2026-12-31' })
+      .insert({
+        request_id: r.id,
+        shop_id: r.shop,
+        lines: '[]',
+        currency: 'USD',
+        total_cents: 100_000,
+        die_cents: 90_000,
+        lead_days: 5,
+        promised_ship_date: '2026-11-10',
+        valid_until: '2026-12-31',
+      })
       .returning('id');
-    await knex('awards').insert({ request_id: r.id, bid_id: bid.id, shop_id: r.shop, revision: 1, total_cents: 100_000, die_cents: 90_000, currency: 'USD', lead_days: 5, promised_ship_date: '2026-11-10', awarded_at: new Date('2026-11-02T15:00:00Z'), po_number: `PO-T-${randomUUID().slice(0, 8)}` });
+    await knex('awards').insert({
+      request_id: r.id,
+      bid_id: bid.id,
+      shop_id: r.shop,
+      revision: 1,
+      total_cents: 100_000,
+      die_cents: 90_000,
+      currency: 'USD',
+      lead_days: 5,
+      promised_ship_date: '2026-11-10',
+      awarded_at: new Date('2026-11-02T15:00:00Z'),
+      po_number: `PO-T-${randomUUID().slice(0, 8)}`,
+    });
     await knex('die_requests').where({ id: r.id }).update({ status: 'in_production' });
     const key = await keyOf(r.id, 'late_shipment');
     // The day after 10 Nov, 09:00 in the shop's zone (Indianapolis, UTC−5): 11 Nov 14:00 UTC.
-    expect((await sendReminder(knex, { ...APP, now: new Date('2026-11-11T13:59:00Z') }, r.id, key)).result).toBe('not-due');
+    expect((await sendReminder(knex, { ...APP, now: new Date('2026-11-11T13:59:00Z') }, r.id, key)).result).toBe(
+      'not-due',
+    );
     // The running worker's sweep works in real time, when this date is long past, and may send it
     // first: either way the key is recorded once and the notices exist once.
-    expect(['sent', 'already-sent']).toContain((await sendReminder(knex, { ...APP, now: new Date('2026-11-11T14:00:00Z') }, r.id, key)).result);
+    expect(['sent', 'already-sent']).toContain(
+      (await sendReminder(knex, { ...APP, now: new Date('2026-11-11T14:00:00Z') }, r.id, key)).result,
+    );
     expect(await knex('reminders_sent').where({ key })).toHaveLength(1);
     expect((await knex('die_requests').where({ id: r.id }).first()).late_flagged_at).toBeTruthy();
     expect((await outboxTo(r.estimator.email)).filter((m) => /^Late:/.test(m.subject))).toHaveLength(1);

@@ -21,7 +21,12 @@ interface RequestRow {
 async function shopsYetToBid(trx: Knex.Transaction, requestId: number): Promise<number[]> {
   const rows = await trx
     .select('shop_id')
-    .from(trx.raw('(select shop_id from request_invitations where request_id = ? union select shop_id from request_questions where request_id = ?) as interested', [requestId, requestId]))
+    .from(
+      trx.raw(
+        '(select shop_id from request_invitations where request_id = ? union select shop_id from request_questions where request_id = ?) as interested',
+        [requestId, requestId],
+      ),
+    )
     .whereNotIn('shop_id', trx('bids').where({ request_id: requestId }).select('shop_id'))
     .whereNotIn('shop_id', trx('request_declines').where({ request_id: requestId }).select('shop_id'));
   return rows.map((r: { shop_id: number }) => r.shop_id);
@@ -31,31 +36,68 @@ async function shopsYetToBid(trx: Knex.Transaction, requestId: number): Promise<
  * Sends one reminder if it still applies: the state is read again from PostgreSQL, the key is
  * recorded in the same transaction as the notices, so a job that runs twice sends once.
  */
-export async function sendReminder(knex: Knex, opts: { appUrl: string; now: Date }, requestId: number, key: string): Promise<{ result: ReminderResult; outboxIds: number[] }> {
+export async function sendReminder(
+  knex: Knex,
+  opts: { appUrl: string; now: Date },
+  requestId: number,
+  key: string,
+): Promise<{ result: ReminderResult; outboxIds: number[] }> {
   const state = await loadReminderState(knex, requestId);
   const reminder = state ? planReminders(state).find((r) => r.key === key) : undefined;
   if (!state || !reminder) return { result: 'no-longer-applies', outboxIds: [] };
   if (!isDue(reminder, opts.now)) return { result: 'not-due', outboxIds: [] };
 
   return knex.transaction(async (trx) => {
-    const inserted = await trx('reminders_sent').insert({ key, request_id: requestId, kind: reminder.kind }).onConflict('key').ignore().returning('key');
+    const inserted = await trx('reminders_sent')
+      .insert({ key, request_id: requestId, kind: reminder.kind })
+      .onConflict('key')
+      .ignore()
+      .returning('key');
     if (inserted.length === 0) return { result: 'already-sent' as const, outboxIds: [] };
     const request = (await trx('die_requests as r')
       .join('organisations as o', 'o.id', 'r.organisation_id')
       .where('r.id', requestId)
-      .first('r.id', 'r.title', 'r.organisation_id', 'r.created_by', 'r.visibility', 'r.bid_deadline', 'r.need_by_date', 'o.time_zone')) as RequestRow;
+      .first(
+        'r.id',
+        'r.title',
+        'r.organisation_id',
+        'r.created_by',
+        'r.visibility',
+        'r.bid_deadline',
+        'r.need_by_date',
+        'o.time_zone',
+      )) as RequestRow;
     const outboxIds = await deliver(trx, opts.appUrl, reminder, request);
     return { result: 'sent' as const, outboxIds };
   });
 }
 
-async function deliver(trx: Knex.Transaction, appUrl: string, reminder: PlannedReminder, request: RequestRow): Promise<number[]> {
+async function deliver(
+  trx: Knex.Transaction,
+  appUrl: string,
+  reminder: PlannedReminder,
+  request: RequestRow,
+): Promise<number[]> {
   const link = `/requests/${request.id}`;
   const ids: number[] = [];
-  const tell = async (organisationId: number, notice: { title: string; body: string }, roles?: string[], onlyUserIds?: number[]) =>
-    ids.push(...(await notifyOrganisation(trx, { appUrl, organisationId, roles, onlyUserIds, notice: { kind: reminder.kind, link, ...notice } })));
+  const tell = async (
+    organisationId: number,
+    notice: { title: string; body: string },
+    roles?: string[],
+    onlyUserIds?: number[],
+  ) =>
+    ids.push(
+      ...(await notifyOrganisation(trx, {
+        appUrl,
+        organisationId,
+        roles,
+        onlyUserIds,
+        notice: { kind: reminder.kind, link, ...notice },
+      })),
+    );
   const deadline = request.bid_deadline ? formatInZone(request.bid_deadline, request.time_zone) : '';
-  const needBy = request.need_by_date instanceof Date ? request.need_by_date.toISOString().slice(0, 10) : request.need_by_date;
+  const needBy =
+    request.need_by_date instanceof Date ? request.need_by_date.toISOString().slice(0, 10) : request.need_by_date;
   const award = await trx('awards').where({ request_id: request.id }).first('shop_id', 'promised_ship_date');
   const buyer = request.created_by ? [request.created_by] : undefined;
 
@@ -66,15 +108,38 @@ async function deliver(trx: Knex.Transaction, appUrl: string, reminder: PlannedR
       for (const shopId of await shopsYetToBid(trx, request.id)) {
         // Each shop reads the deadline in its own time zone.
         const shop = await trx('organisations').where({ id: shopId }).first('time_zone');
-        const due = request.bid_deadline ? formatInZone(request.bid_deadline, shop?.time_zone ?? request.time_zone) : deadline;
-        await tell(shopId, { title: `Bids due in ${hours} hours: ${request.title}`, body: `Bids on "${request.title}" are due by ${due}. Your shop has not bid yet.` });
+        const due = request.bid_deadline
+          ? formatInZone(request.bid_deadline, shop?.time_zone ?? request.time_zone)
+          : deadline;
+        await tell(shopId, {
+          title: `Bids due in ${hours} hours: ${request.title}`,
+          body: `Bids on "${request.title}" are due by ${due}. Your shop has not bid yet.`,
+        });
       }
       break;
     }
     case 'bids_ready': {
-      const count = Number((await trx('bids').where({ request_id: request.id, status: 'submitted' }).count('* as n'))[0]!.n);
-      await tell(request.organisation_id, { title: `Bids ready to compare: ${request.title}`, body: `Bidding on "${request.title}" is over with ${count} bid${count === 1 ? '' : 's'} to compare.` }, ['purchasing', 'admin']);
-      if (buyer) await tell(request.organisation_id, { title: `Bids ready to compare: ${request.title}`, body: `Bidding on "${request.title}" is over with ${count} bid${count === 1 ? '' : 's'}; purchasing can now compare and award.` }, ['buyer'], buyer);
+      const count = Number(
+        (await trx('bids').where({ request_id: request.id, status: 'submitted' }).count('* as n'))[0]!.n,
+      );
+      await tell(
+        request.organisation_id,
+        {
+          title: `Bids ready to compare: ${request.title}`,
+          body: `Bidding on "${request.title}" is over with ${count} bid${count === 1 ? '' : 's'} to compare.`,
+        },
+        ['purchasing', 'admin'],
+      );
+      if (buyer)
+        await tell(
+          request.organisation_id,
+          {
+            title: `Bids ready to compare: ${request.title}`,
+            body: `Bidding on "${request.title}" is over with ${count} bid${count === 1 ? '' : 's'}; purchasing can now compare and award.`,
+          },
+          ['buyer'],
+          buyer,
+        );
       break;
     }
     case 'need_by_7d':
@@ -82,19 +147,42 @@ async function deliver(trx: Knex.Transaction, appUrl: string, reminder: PlannedR
       const days = reminder.kind === 'need_by_7d' ? 7 : 2;
       const body = `The die for "${request.title}" is needed by ${needBy}, ${days} days from now, and has not shipped yet.`;
       if (award) await tell(award.shop_id, { title: `Needed in ${days} days: ${request.title}`, body });
-      if (buyer) await tell(request.organisation_id, { title: `Needed in ${days} days: ${request.title}`, body }, undefined, buyer);
+      if (buyer)
+        await tell(
+          request.organisation_id,
+          { title: `Needed in ${days} days: ${request.title}`, body },
+          undefined,
+          buyer,
+        );
       break;
     }
     case 'late_shipment': {
-      await trx('die_requests').where({ id: request.id }).whereNull('late_flagged_at').update({ late_flagged_at: new Date() });
-      const shipDate = award?.promised_ship_date instanceof Date ? award.promised_ship_date.toISOString().slice(0, 10) : award?.promised_ship_date;
+      await trx('die_requests')
+        .where({ id: request.id })
+        .whereNull('late_flagged_at')
+        .update({ late_flagged_at: new Date() });
+      const shipDate =
+        award?.promised_ship_date instanceof Date
+          ? award.promised_ship_date.toISOString().slice(0, 10)
+          : award?.promised_ship_date;
       const body = `The die for "${request.title}" was promised to ship by ${shipDate} and has not shipped.`;
-      if (award) await tell(award.shop_id, { title: `Late: ${request.title}`, body: `${body} Mark it shipped, or tell the buyer the new date.` });
+      if (award)
+        await tell(award.shop_id, {
+          title: `Late: ${request.title}`,
+          body: `${body} Mark it shipped, or tell the buyer the new date.`,
+        });
       await tell(request.organisation_id, { title: `Late: ${request.title}`, body }, ['buyer', 'purchasing']);
       break;
     }
     case 'validity_ending':
-      await tell(request.organisation_id, { title: `Best bid lapses soon: ${request.title}`, body: `The lowest bid on "${request.title}" holds its price for two more days and nothing is awarded yet.` }, ['purchasing', 'admin']);
+      await tell(
+        request.organisation_id,
+        {
+          title: `Best bid lapses soon: ${request.title}`,
+          body: `The lowest bid on "${request.title}" holds its price for two more days and nothing is awarded yet.`,
+        },
+        ['purchasing', 'admin'],
+      );
       break;
   }
   return ids;

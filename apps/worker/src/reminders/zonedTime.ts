@@ -5,7 +5,15 @@
 export function zonedTime(date: string, hour: number, timeZone: string): Date {
   const guess = Date.parse(`${date}T${String(hour).padStart(2, '0')}:00:00Z`);
   const parts = Object.fromEntries(
-    new Intl.DateTimeFormat('en-US', { timeZone, hourCycle: 'h23', year: 'numeric', month: '2-digit', day: '2-digit', hour: '2-digit', minute: '2-digit' })
+    new Intl.DateTimeFormat('en-US', {
+      timeZone,
+      hourCycle: 'h23',
+      year: 'numeric',
+      month: '2-digit',
+      day: '2-digit',
+      hour: '2-digit',
+      minute: '2-digit',
+    })
       .formatToParts(new Date(guess))
       .map((p) => [p.type, p.value]),
   );

@@ -65,7 +65,8 @@ export function entityGeometry(entity: IEntity, m: Matrix): EntityGeometry | nul
     case 'ARC':
     case 'CIRCLE': {
       const c = point(e.center);
-      if (!c || !finite(e.radius) || e.radius <= 0) return { problem: `a ${e.type} without a centre and a positive radius` };
+      if (!c || !finite(e.radius) || e.radius <= 0)
+        return { problem: `a ${e.type} without a centre and a positive radius` };
       let start = 0;
       let sweep = TAU;
       if (e.type === 'ARC') {
@@ -133,7 +134,10 @@ function ellipse(e: Fields, m: Matrix): EntityGeometry {
   // DXF reference (ELLIPSE): P(t) = centre + major·cos t + minor·sin t, minor = ratio × major turned 90°.
   const minor = { x: -major.y * ratio, y: major.x * ratio };
   const at = (t: number) =>
-    apply(em, { x: c.x + major.x * Math.cos(t) + minor.x * Math.sin(t), y: c.y + major.y * Math.cos(t) + minor.y * Math.sin(t) });
+    apply(em, {
+      x: c.x + major.x * Math.cos(t) + minor.x * Math.sin(t),
+      y: c.y + major.y * Math.cos(t) + minor.y * Math.sin(t),
+    });
   return { segments: [curve(at, t0, t0 + sweep)], closed: full };
 }
 

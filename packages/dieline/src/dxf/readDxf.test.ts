@@ -40,15 +40,27 @@ describe('readDxf entities', () => {
   // LWPOLYLINE (0,0)→(2,0) with bulge 1 (tan(180°/4) = 1, a semicircle of r = 1: π), then a line
   // (2,0)→(2,3) (3): π + 3. Closed, the last vertex's bulge 0 adds the line (2,3)→(0,0) of √13.
   it('reads LWPOLYLINE with bulges, open and closed', () => {
-    const v: Array<[number, number, number?]> = [[0, 0, 1], [2, 0], [2, 3]];
+    const v: Array<[number, number, number?]> = [
+      [0, 0, 1],
+      [2, 0],
+      [2, 3],
+    ];
     expect(cutLength(d.dxf([d.lwpolyline('CUT', v)], { insunits: 1 }))).toBeCloseTo(Math.PI + 3, 12);
-    expect(cutLength(d.dxf([d.lwpolyline('CUT', v, true)], { insunits: 1 }))).toBeCloseTo(Math.PI + 3 + Math.sqrt(13), 12);
+    expect(cutLength(d.dxf([d.lwpolyline('CUT', v, true)], { insunits: 1 }))).toBeCloseTo(
+      Math.PI + 3 + Math.sqrt(13),
+      12,
+    );
   });
 
   // POLYLINE with VERTEX entities: a closed 4 × 2 rectangle, perimeter 12; with a bulge of
   // −1 on its first edge, that edge becomes a semicircle of r = 2: 12 − 4 + 2π.
   it('reads POLYLINE with VERTEX bulges', () => {
-    const rect: Array<[number, number, number?]> = [[0, 0], [4, 0], [4, 2], [0, 2]];
+    const rect: Array<[number, number, number?]> = [
+      [0, 0],
+      [4, 0],
+      [4, 2],
+      [0, 2],
+    ];
     expect(cutLength(d.dxf([d.polyline('CUT', rect, true)], { insunits: 1 }))).toBeCloseTo(12, 12);
     rect[0] = [0, 0, -1];
     expect(cutLength(d.dxf([d.polyline('CUT', rect, true)], { insunits: 1 }))).toBeCloseTo(8 + 2 * Math.PI, 12);
@@ -72,8 +84,45 @@ describe('readDxf entities', () => {
   // like cubic is checked against svg-path-properties in the SVG tests. Degree 1 is a polyline:
   // (0,0)→(3,4)→(3,0) is 5 + 4 = 9.
   it('reads SPLINE', () => {
-    expect(cutLength(d.dxf([d.spline('CUT', 3, [0, 0, 0, 0, 1, 1, 1, 1], [[0, 0], [1, 0], [2, 0], [6, 0]])], { insunits: 1 }))).toBeCloseTo(6, 6);
-    expect(cutLength(d.dxf([d.spline('CUT', 1, [0, 0, 1, 2, 2], [[0, 0], [3, 4], [3, 0]])], { insunits: 1 }))).toBeCloseTo(9, 6);
+    expect(
+      cutLength(
+        d.dxf(
+          [
+            d.spline(
+              'CUT',
+              3,
+              [0, 0, 0, 0, 1, 1, 1, 1],
+              [
+                [0, 0],
+                [1, 0],
+                [2, 0],
+                [6, 0],
+              ],
+            ),
+          ],
+          { insunits: 1 },
+        ),
+      ),
+    ).toBeCloseTo(6, 6);
+    expect(
+      cutLength(
+        d.dxf(
+          [
+            d.spline(
+              'CUT',
+              1,
+              [0, 0, 1, 2, 2],
+              [
+                [0, 0],
+                [3, 4],
+                [3, 0],
+              ],
+            ),
+          ],
+          { insunits: 1 },
+        ),
+      ),
+    ).toBeCloseTo(9, 6);
   });
 
   // DXF reference, Arbitrary Axis Algorithm: extrusion (0,0,−1) mirrors x. An ARC about (2,0),
@@ -87,7 +136,9 @@ describe('readDxf entities', () => {
   });
 
   it('skips entities that are not rules, saying so', () => {
-    const m = analyseDieline(d.dxf([d.line('CUT', 0, 0, 1, 0), d.text('NOTES', 0, 0, 'Job 12'), d.text('NOTES', 0, 1, 'x')], { insunits: 1 })).metrics;
+    const m = analyseDieline(
+      d.dxf([d.line('CUT', 0, 0, 1, 0), d.text('NOTES', 0, 0, 'Job 12'), d.text('NOTES', 0, 1, 'x')], { insunits: 1 }),
+    ).metrics;
     expect(m.length.total).toBe(1);
     expect(m.warnings).toContain('Skipped 2 TEXT: not rules, so not measured.');
   });
@@ -102,7 +153,10 @@ describe('readDxf units', () => {
     expect(l(4)).toBeCloseTo(10, 12);
     expect(l(5)).toBeCloseTo(100, 12);
     expect(l(6)).toBeCloseTo(10_000, 9);
-    expect(analyseDieline(d.dxf([d.line('CUT', 0, 0, 254, 0)], { insunits: 4 })).metrics.lengthMm.cut).toBeCloseTo(254, 9);
+    expect(analyseDieline(d.dxf([d.line('CUT', 0, 0, 254, 0)], { insunits: 4 })).metrics.lengthMm.cut).toBeCloseTo(
+      254,
+      9,
+    );
   });
 
   it('asks the user to confirm when the units are missing or 0, and reads inches', () => {
@@ -141,13 +195,20 @@ describe('readDxf blocks', () => {
   it('expands nested blocks, uneven scales and layer 0 inheritance', () => {
     const blocks = [
       { name: 'INNER', entities: [d.circle('0', 0, 0, 0.5)] },
-      { name: 'OUTER', entities: [d.insert('0', 'INNER', 0, 0, { sx: 2, sy: 2 }), d.insert('0', 'INNER', 10, 0, { sx: 2, sy: 2 })] },
+      {
+        name: 'OUTER',
+        entities: [d.insert('0', 'INNER', 0, 0, { sx: 2, sy: 2 }), d.insert('0', 'INNER', 10, 0, { sx: 2, sy: 2 })],
+      },
       { name: 'ONE', entities: [d.circle('0', 0, 0, 1)] },
     ];
-    const nested = analyseDieline(d.dxf([d.insert('Cut', 'OUTER', 0, 0, { sx: 1.5, sy: 1.5 })], { insunits: 1, blocks })).metrics;
+    const nested = analyseDieline(
+      d.dxf([d.insert('Cut', 'OUTER', 0, 0, { sx: 1.5, sy: 1.5 })], { insunits: 1, blocks }),
+    ).metrics;
     expect(nested.length.cut).toBeCloseTo(6 * Math.PI, 12);
     expect(nested.layers).toEqual([{ name: 'Cut', ruleType: 'cut', entities: 2 }]);
-    const uneven = analyseDieline(d.dxf([d.insert('CREASE', 'ONE', 0, 0, { sx: 2, sy: 1 })], { insunits: 1, blocks })).metrics;
+    const uneven = analyseDieline(
+      d.dxf([d.insert('CREASE', 'ONE', 0, 0, { sx: 2, sy: 1 })], { insunits: 1, blocks }),
+    ).metrics;
     expect(uneven.length.crease / gaussKummer(2, 1)).toBeCloseTo(1, 6);
   });
 
@@ -174,18 +235,25 @@ describe('readDxf bad input', () => {
   it('refuses a damaged group code with its line number', () => {
     const lines = good.split('\n');
     lines[4] = 'banana';
-    expect(fail(lines.join('\n'))).toMatch(/^MALFORMED: The DXF file is damaged: line 5 should hold a group code .* "banana"/);
+    expect(fail(lines.join('\n'))).toMatch(
+      /^MALFORMED: The DXF file is damaged: line 5 should hold a group code .* "banana"/,
+    );
   });
 
   it('refuses a file with no ENTITIES section', () => {
-    expect(fail('0\nSECTION\n2\nHEADER\n0\nENDSEC\n0\nEOF\n')).toMatch(/^MALFORMED: The DXF file has no ENTITIES section/);
+    expect(fail('0\nSECTION\n2\nHEADER\n0\nENDSEC\n0\nEOF\n')).toMatch(
+      /^MALFORMED: The DXF file has no ENTITIES section/,
+    );
   });
 
   it('refuses more entities than the limit allows', () => {
-    const many = d.dxf(Array.from({ length: 11 }, (_, i) => d.line('CUT', i, 0, i, 1)), { insunits: 1 });
-    expect(() => readDxf(many, { resolve: createRuleTypeResolver(), limits: { ...DEFAULT_LIMITS, maxEntities: 10 } })).toThrow(
-      /more than 10 entities/,
+    const many = d.dxf(
+      Array.from({ length: 11 }, (_, i) => d.line('CUT', i, 0, i, 1)),
+      { insunits: 1 },
     );
+    expect(() =>
+      readDxf(many, { resolve: createRuleTypeResolver(), limits: { ...DEFAULT_LIMITS, maxEntities: 10 } }),
+    ).toThrow(/more than 10 entities/);
   });
 
   // A file of a few kilobytes can stand for millions of entities through blocks inserted in
@@ -197,17 +265,38 @@ describe('readDxf bad input', () => {
     const file = d.dxf([d.insert('CUT', 'BIG', 0, 0)], {
       insunits: 1,
       blocks: [
-        { name: 'DUST', entities: Array.from({ length: 1000 }, (_, i) => d.line('0', i * 0.001, 0, i * 0.001 + 0.0005, 0)) },
+        {
+          name: 'DUST',
+          entities: Array.from({ length: 1000 }, (_, i) => d.line('0', i * 0.001, 0, i * 0.001 + 0.0005, 0)),
+        },
         { name: 'MID', entities: inserts('DUST') },
         { name: 'BIG', entities: inserts('MID') },
       ],
     });
     expect(file.length).toBeLessThan(200_000);
-    expect(fail(file)).toMatch(/^TOO_MANY_ENTITIES: The drawing has more than 200000 entities \(after expanding blocks\)/);
+    expect(fail(file)).toMatch(
+      /^TOO_MANY_ENTITIES: The drawing has more than 200000 entities \(after expanding blocks\)/,
+    );
   });
 
   it('skips a broken entity with a warning and keeps the rest', () => {
-    const file = d.dxf([d.line('CUT', 0, 0, 1, 0), d.spline('CUT', 3, [0, 1], [[0, 0], [1, 1], [2, 0], [3, 1]])], { insunits: 1 });
+    const file = d.dxf(
+      [
+        d.line('CUT', 0, 0, 1, 0),
+        d.spline(
+          'CUT',
+          3,
+          [0, 1],
+          [
+            [0, 0],
+            [1, 1],
+            [2, 0],
+            [3, 1],
+          ],
+        ),
+      ],
+      { insunits: 1 },
+    );
     const m = analyseDieline(file).metrics;
     expect(m.length.cut).toBe(1);
     expect(m.warnings.join('\n')).toMatch(/Skipped a SPLINE whose 2 knots do not fit 4 control points of degree 3/);

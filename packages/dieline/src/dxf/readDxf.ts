@@ -109,11 +109,17 @@ function checkGroupCodes(text: string): void {
     lineNo++;
     if (code === '' && end >= text.length - 1) break; // the final newline
     if (!/^-?\d{1,4}$/.test(code)) {
-      throw new DielineError('MALFORMED', `The DXF file is damaged: line ${lineNo} should hold a group code (a whole number) but holds "${code.slice(0, 40)}".`);
+      throw new DielineError(
+        'MALFORMED',
+        `The DXF file is damaged: line ${lineNo} should hold a group code (a whole number) but holds "${code.slice(0, 40)}".`,
+      );
     }
     const valueEnd = text.indexOf('\n', end + 1);
     if (end >= text.length) {
-      throw new DielineError('TRUNCATED', 'The DXF file ends in the middle of a group (a code without its value): it looks cut short. Export it again.');
+      throw new DielineError(
+        'TRUNCATED',
+        'The DXF file ends in the middle of a group (a code without its value): it looks cut short. Export it again.',
+      );
     }
     const value = text.slice(end + 1, valueEnd < 0 ? text.length : valueEnd).trim();
     if (code === '0' && value === 'EOF') sawEof = true;
@@ -121,7 +127,11 @@ function checkGroupCodes(text: string): void {
     start = valueEnd < 0 ? text.length : valueEnd + 1;
     if (sawEof) break;
   }
-  if (!sawEof) throw new DielineError('TRUNCATED', 'The DXF file ends before its EOF marker: it looks cut short. Export it again.');
+  if (!sawEof)
+    throw new DielineError(
+      'TRUNCATED',
+      'The DXF file ends before its EOF marker: it looks cut short. Export it again.',
+    );
 }
 
 function parse(text: string): IDxf {
@@ -132,7 +142,10 @@ function parse(text: string): IDxf {
   } catch (err) {
     const message = err instanceof Error ? err.message : String(err);
     if (/end of input|EOF group/i.test(message)) {
-      throw new DielineError('TRUNCATED', 'The DXF file ends before its EOF marker: it looks cut short. Export it again.');
+      throw new DielineError(
+        'TRUNCATED',
+        'The DXF file ends before its EOF marker: it looks cut short. Export it again.',
+      );
     }
     throw new DielineError('MALFORMED', `The DXF file could not be read: ${message}.`);
   }
@@ -156,4 +169,3 @@ function drawingUnits(dxf: IDxf, override: UnitName | undefined, b: DrawingBuild
   );
   return { name: 'in', inchesPerUnit: 1, source: 'assumed' };
 }
-

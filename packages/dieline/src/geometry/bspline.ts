@@ -10,7 +10,8 @@ export function bspline(degree: number, control: Pt[], knots: number[], weights?
   const p = degree;
   if (!Number.isInteger(p) || p < 1) throw new Error(`degree ${degree} is not a positive whole number`);
   if (n < p + 1) throw new Error(`${n} control points are too few for degree ${p}`);
-  if (knots.length !== n + p + 1) throw new Error(`${knots.length} knots do not fit ${n} control points of degree ${p} (need ${n + p + 1})`);
+  if (knots.length !== n + p + 1)
+    throw new Error(`${knots.length} knots do not fit ${n} control points of degree ${p} (need ${n + p + 1})`);
   for (let i = 1; i < knots.length; i++) if (knots[i]! < knots[i - 1]!) throw new Error('knots are not in order');
   const w = weights && weights.length === n ? weights : control.map(() => 1);
   const t0 = knots[p]!;
@@ -35,7 +36,11 @@ export function bspline(degree: number, control: Pt[], knots: number[], weights?
         const alpha = hi === lo ? 0 : (u - lo) / (hi - lo);
         const a = d[j - 1]!;
         const b = d[j]!;
-        d[j] = [(1 - alpha) * a[0] + alpha * b[0], (1 - alpha) * a[1] + alpha * b[1], (1 - alpha) * a[2] + alpha * b[2]];
+        d[j] = [
+          (1 - alpha) * a[0] + alpha * b[0],
+          (1 - alpha) * a[1] + alpha * b[1],
+          (1 - alpha) * a[2] + alpha * b[2],
+        ];
       }
     }
     const [x, y, h] = d[p]!;

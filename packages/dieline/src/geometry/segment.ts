@@ -69,7 +69,16 @@ export function curve(p: PointAt, t0: number, t1: number): CurveSeg {
   const f = flattenCurve(p, t0, t1);
   const a = f.points[0]!;
   const b = f.points[f.points.length - 1]!;
-  return { kind: 'curve', a, b, points: f.points, length: f.length, minRadius: f.minRadius, startDir: f.startDir, endDir: f.endDir };
+  return {
+    kind: 'curve',
+    a,
+    b,
+    points: f.points,
+    length: f.length,
+    minRadius: f.minRadius,
+    startDir: f.startDir,
+    endDir: f.endDir,
+  };
 }
 
 /** A circular arc drawn under an affine transform: an arc again under a similarity, else a curve. */

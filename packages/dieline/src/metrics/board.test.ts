@@ -19,7 +19,22 @@ describe('board and press', () => {
 
   // The box covers priced rules only: a 2 × 1 in cut rectangle with notes far away.
   it('boxes priced rules only, and gives fitsPress only with a press', () => {
-    const file = d.dxf([d.lwpolyline('CUT', [[0, 0], [2, 0], [2, 1], [0, 1]], true), d.line('NOTES', 50, 50, 60, 60)], { insunits: 1 });
+    const file = d.dxf(
+      [
+        d.lwpolyline(
+          'CUT',
+          [
+            [0, 0],
+            [2, 0],
+            [2, 1],
+            [0, 1],
+          ],
+          true,
+        ),
+        d.line('NOTES', 50, 50, 60, 60),
+      ],
+      { insunits: 1 },
+    );
     const a = analyseDieline(file).metrics;
     expect(a.bbox).toEqual({ width: 2, height: 1 });
     expect(a.board).toEqual({ width: 4, height: 3 });

@@ -21,14 +21,20 @@ export function boundsOf(paths: RulePath[]): Box | null {
     for (const s of p.segments) {
       const b = bbox(s);
       box = box
-        ? { minX: Math.min(box.minX, b.minX), minY: Math.min(box.minY, b.minY), maxX: Math.max(box.maxX, b.maxX), maxY: Math.max(box.maxY, b.maxY) }
+        ? {
+            minX: Math.min(box.minX, b.minX),
+            minY: Math.min(box.minY, b.minY),
+            maxX: Math.max(box.maxX, b.maxX),
+            maxY: Math.max(box.maxY, b.maxY),
+          }
         : b;
     }
   }
   return box;
 }
 
-export const sizeOf = (box: Box | null): Size => (box ? { width: box.maxX - box.minX, height: box.maxY - box.minY } : { width: 0, height: 0 });
+export const sizeOf = (box: Box | null): Size =>
+  box ? { width: box.maxX - box.minX, height: box.maxY - box.minY } : { width: 0, height: 0 };
 
 /** The die board: the rules' box plus the margin on every side. */
 export function boardSize(rules: Size, marginIn: number): Size {

@@ -18,7 +18,23 @@ describe('complexity', () => {
   // A 10 × 10 in square: 4 bends on 40 in (0.1 per inch), simple. A zigzag of 20 teeth 0.5 in
   // wide: 40 segments of √(0.25² + 0.5²) ≈ 0.559 in, 39 bends on 22.4 in (1.7 per inch), complex.
   it('calls a square simple and a zigzag complex', () => {
-    const square = analyseDieline(d.dxf([d.lwpolyline('CUT', [[0, 0], [10, 0], [10, 10], [0, 10]], true)], { insunits: 1 }));
+    const square = analyseDieline(
+      d.dxf(
+        [
+          d.lwpolyline(
+            'CUT',
+            [
+              [0, 0],
+              [10, 0],
+              [10, 10],
+              [0, 10],
+            ],
+            true,
+          ),
+        ],
+        { insunits: 1 },
+      ),
+    );
     expect(square.metrics.complexity).toBe('simple');
     const zig: Array<[number, number]> = Array.from({ length: 41 }, (_, i) => [i * 0.25, i % 2 === 0 ? 0 : 0.5]);
     const zigzag = analyseDieline(d.dxf([d.lwpolyline('CUT', zig)], { insunits: 1 })).metrics;

@@ -31,7 +31,19 @@ describe('joints (all sizes in mm)', () => {
   // A crease ending on a corner of a closed cut rectangle: the cut runs on (a bend), the crease
   // stops there: 1 joint. Three cut lines meeting at one point: 1 joint.
   it('counts a rule ending on another rule’s vertex, and three rules meeting, once each', () => {
-    const r = m(d.lwpolyline('CUT', [[0, 0], [100, 0], [100, 50], [0, 50]], true), d.line('CREASE', 100, 50, 150, 100));
+    const r = m(
+      d.lwpolyline(
+        'CUT',
+        [
+          [0, 0],
+          [100, 0],
+          [100, 50],
+          [0, 50],
+        ],
+        true,
+      ),
+      d.line('CREASE', 100, 50, 150, 100),
+    );
     expect(r.joints).toBe(1);
     expect(r.bends).toBe(4);
     expect(m(d.line('CUT', 0, 0, 10, 0), d.line('CUT', 0, 0, -10, 5), d.line('CUT', 0, 0, -10, -5)).joints).toBe(1);
@@ -39,7 +51,21 @@ describe('joints (all sizes in mm)', () => {
 
   // A box with a crease across it from side to side: 2 joints, one at each end.
   it('counts a rule spanning a box as 2 joints', () => {
-    expect(m(d.lwpolyline('CUT', [[0, 0], [100, 0], [100, 50], [0, 50]], true), d.line('CREASE', 50, 0, 50, 50)).joints).toBe(2);
+    expect(
+      m(
+        d.lwpolyline(
+          'CUT',
+          [
+            [0, 0],
+            [100, 0],
+            [100, 50],
+            [0, 50],
+          ],
+          true,
+        ),
+        d.line('CREASE', 50, 0, 50, 50),
+      ).joints,
+    ).toBe(2);
   });
 
   // Rules of no rule type are not priced and make no joints.

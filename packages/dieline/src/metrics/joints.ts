@@ -46,4 +46,3 @@ function segmentIndex(net: Network, tol: number): Flatbush {
   index.finish();
   return index;
 }
-

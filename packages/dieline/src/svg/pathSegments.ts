@@ -100,7 +100,8 @@ export function pathSegments(d: string, transform: string): PathResult {
 /** A later arc continuing the same ellipse the same way round (the two halves of an ellipse). */
 function sameEllipse(a: EllipseArc, b: EllipseArc): boolean {
   const tol = 1e-9 * Math.max(a.rx, a.ry);
-  const turnsSameWay = Math.sign(a.dtheta) === Math.sign(b.dtheta) && Math.abs(a.dtheta + b.dtheta) <= 2 * Math.PI + 1e-9;
+  const turnsSameWay =
+    Math.sign(a.dtheta) === Math.sign(b.dtheta) && Math.abs(a.dtheta + b.dtheta) <= 2 * Math.PI + 1e-9;
   const end = ellipsePoint(a, a.theta1 + a.dtheta);
   const next = ellipsePoint(b, b.theta1);
   return (
@@ -120,9 +121,14 @@ function bezier(p: Pt[]): Segment {
   const last = p[p.length - 1]!;
   const size = Math.max(...p.map((q) => Math.hypot(q.x - first.x, q.y - first.y)));
   if (p.every((q) => distToSegment(q, first, last) <= 1e-9 * size)) return line(first, last);
-  return curve((t) => {
-    let q = p;
-    while (q.length > 1) q = q.slice(1).map((b, i) => ({ x: q[i]!.x + (b.x - q[i]!.x) * t, y: q[i]!.y + (b.y - q[i]!.y) * t }));
-    return q[0]!;
-  }, 0, 1);
+  return curve(
+    (t) => {
+      let q = p;
+      while (q.length > 1)
+        q = q.slice(1).map((b, i) => ({ x: q[i]!.x + (b.x - q[i]!.x) * t, y: q[i]!.y + (b.y - q[i]!.y) * t }));
+      return q[0]!;
+    },
+    0,
+    1,
+  );
 }

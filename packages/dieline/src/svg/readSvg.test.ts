@@ -81,7 +81,9 @@ describe('readSvg transforms and units', () => {
   // W3C SVG 1.1 7.7: width="210mm" with viewBox 0 0 210 297 makes one user unit 1 mm. A 254-unit
   // line is 254 mm = 10 in (ISO 80000).
   it('reads a viewBox with a physical width (A4 in mm)', () => {
-    const m = metrics(svg('<line id="cut" x1="0" y1="0" x2="254" y2="0"/>', 'width="210mm" height="297mm" viewBox="0 0 210 297"'));
+    const m = metrics(
+      svg('<line id="cut" x1="0" y1="0" x2="254" y2="0"/>', 'width="210mm" height="297mm" viewBox="0 0 210 297"'),
+    );
     expect(m.length.cut).toBeCloseTo(10, 12);
     expect(m.lengthMm.cut).toBeCloseTo(254, 9);
   });
@@ -98,12 +100,16 @@ describe('readSvg transforms and units', () => {
   it('meets the viewBox, or stretches it with "none"', () => {
     const line = '<line id="cut" x1="0" y1="0" x2="100" y2="0"/>';
     expect(metrics(svg(line, 'width="2in" height="1in" viewBox="0 0 100 100"')).length.cut).toBeCloseTo(1, 12);
-    expect(metrics(svg(line, 'width="2in" height="1in" viewBox="0 0 100 100" preserveAspectRatio="none"')).length.cut).toBeCloseTo(2, 12);
+    expect(
+      metrics(svg(line, 'width="2in" height="1in" viewBox="0 0 100 100" preserveAspectRatio="none"')).length.cut,
+    ).toBeCloseTo(2, 12);
   });
 
   // Without a viewBox, width="100mm" does not change user units: still 96 per inch.
   it('keeps 96 user units per inch without a viewBox', () => {
-    expect(metrics(svg('<line id="cut" x1="0" y1="0" x2="96" y2="0"/>', 'width="100mm" height="100mm"')).length.cut).toBeCloseTo(1, 12);
+    expect(
+      metrics(svg('<line id="cut" x1="0" y1="0" x2="96" y2="0"/>', 'width="100mm" height="100mm"')).length.cut,
+    ).toBeCloseTo(1, 12);
   });
 
   // Geometry attributes may carry units: a rect 1in × 25.4mm is 1 × 1 in, perimeter 4 in.
@@ -141,7 +147,8 @@ describe('readSvg labels', () => {
   });
 
   it('skips hidden elements and definitions, with a warning for hidden ones', () => {
-    const body = '<defs><line id="cut" x2="960"/></defs><g style="display:none"><line id="cut" x2="960"/></g><line id="cut" x2="96"/>';
+    const body =
+      '<defs><line id="cut" x2="960"/></defs><g style="display:none"><line id="cut" x2="960"/></g><line id="cut" x2="96"/>';
     const m = metrics(svg(body));
     expect(m.length.cut).toBe(1);
     expect(m.warnings).toContain('Hidden elements (display: none) were skipped.');
@@ -150,7 +157,9 @@ describe('readSvg labels', () => {
 
 describe('readSvg bad input', () => {
   it('refuses malformed XML with its line', () => {
-    expect(fail('<svg xmlns="http://www.w3.org/2000/svg">\n<g><line x2="1"/></svg>')).toMatch(/^MALFORMED: The SVG file is not well-formed XML: .*\(line 2/);
+    expect(fail('<svg xmlns="http://www.w3.org/2000/svg">\n<g><line x2="1"/></svg>')).toMatch(
+      /^MALFORMED: The SVG file is not well-formed XML: .*\(line 2/,
+    );
   });
 
   // fast-xml-parser throws a plain Error on a DOCTYPE with external entities: it must reach the
@@ -162,7 +171,9 @@ describe('readSvg bad input', () => {
 
   it('refuses a truncated SVG', () => {
     const good = svg('<g id="cut"><line x2="96"/><line x2="96" y2="5"/></g>');
-    expect(fail(good.slice(0, good.length - 12))).toMatch(/^TRUNCATED: The SVG file ends before its elements are closed/);
+    expect(fail(good.slice(0, good.length - 12))).toMatch(
+      /^TRUNCATED: The SVG file ends before its elements are closed/,
+    );
   });
 
   it('refuses an SVG with nothing to measure', () => {

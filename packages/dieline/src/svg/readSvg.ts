@@ -22,8 +22,23 @@ type Attrs = Record<string, unknown>;
 
 /** Elements whose content is never drawn as rules. */
 const NOT_DRAWN = new Set([
-  'defs', 'symbol', 'clipPath', 'mask', 'pattern', 'marker', 'metadata', 'title', 'desc', 'style',
-  'script', 'text', 'foreignObject', 'image', 'linearGradient', 'radialGradient', 'filter',
+  'defs',
+  'symbol',
+  'clipPath',
+  'mask',
+  'pattern',
+  'marker',
+  'metadata',
+  'title',
+  'desc',
+  'style',
+  'script',
+  'text',
+  'foreignObject',
+  'image',
+  'linearGradient',
+  'radialGradient',
+  'filter',
 ]);
 
 /** Attributes that may name a rule type, nearest first: labels, then id, then classes. */
@@ -36,7 +51,10 @@ function parseXml(parser: XMLParser, text: string): XmlNode[] {
     return parser.parse(text) as XmlNode[];
   } catch (error) {
     const why = error instanceof Error ? error.message : String(error);
-    throw new DielineError('MALFORMED', `The SVG file could not be read: ${why}. Export it again as plain SVG, without a DOCTYPE.`);
+    throw new DielineError(
+      'MALFORMED',
+      `The SVG file could not be read: ${why}. Export it again as plain SVG, without a DOCTYPE.`,
+    );
   }
 }
 
@@ -83,8 +101,11 @@ export function readSvg(text: string, opts: ReadSvgOptions): Drawing {
     const own = typeof attrs.transform === 'string' ? [attrs.transform] : [];
     if (name === 'svg' && !isRoot) {
       // A nested viewport: its x and y move it; its own viewBox scaling is not applied.
-      own.unshift(`translate(${Number.parseFloat(String(attrs.x ?? 0)) || 0} ${Number.parseFloat(String(attrs.y ?? 0)) || 0})`);
-      if (attrs.viewBox !== undefined) b.warn('A nested <svg> viewBox was not applied; check the scale of its contents.');
+      own.unshift(
+        `translate(${Number.parseFloat(String(attrs.x ?? 0)) || 0} ${Number.parseFloat(String(attrs.y ?? 0)) || 0})`,
+      );
+      if (attrs.viewBox !== undefined)
+        b.warn('A nested <svg> viewBox was not applied; check the scale of its contents.');
     }
     const chain = [...transforms, ...own];
     const nearNames = [...labels(attrs), ...names];

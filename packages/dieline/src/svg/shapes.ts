@@ -66,7 +66,8 @@ export function shapePathData(name: ShapeName, attrs: Record<string, unknown>): 
         if (rx === null) rx = ry;
         if (ry === null) ry = rx;
       }
-      if (cx === null || cy === null || rx === null || ry === null) return `!a ${name} with an unreadable centre or radius`;
+      if (cx === null || cy === null || rx === null || ry === null)
+        return `!a ${name} with an unreadable centre or radius`;
       if (rx < 0 || ry < 0) return `!a ${name} with a negative radius`;
       if (rx === 0 || ry === 0) return '';
       // Two half turns; the reader joins them into one closed curve.

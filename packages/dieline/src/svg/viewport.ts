@@ -15,14 +15,22 @@ export interface Viewport {
  * "none"). Without a viewBox, or without a width and height, one user unit is one px, 1/96 in
  * (CSS Values and Units). A units option says what one user unit is instead.
  */
-export function rootViewport(attrs: Record<string, unknown>, override: UnitName | undefined, warn: (m: string) => void): Viewport {
+export function rootViewport(
+  attrs: Record<string, unknown>,
+  override: UnitName | undefined,
+  warn: (m: string) => void,
+): Viewport {
   if (override) {
-    return { matrix: scale(UNIT_INCHES[override]), units: { name: override, inchesPerUnit: UNIT_INCHES[override], source: 'option' } };
+    return {
+      matrix: scale(UNIT_INCHES[override]),
+      units: { name: override, inchesPerUnit: UNIT_INCHES[override], source: 'option' },
+    };
   }
   const px: DrawingUnits = { name: 'px (1/96 in)', inchesPerUnit: 1 / 96, source: 'file' };
   const vb = parseNumberList(attrs.viewBox);
   const hasViewBox = vb.length === 4 && vb[2]! > 0 && vb[3]! > 0;
-  if (attrs.viewBox !== undefined && !hasViewBox) warn('The svg viewBox is not four numbers with a positive width and height; ignored.');
+  if (attrs.viewBox !== undefined && !hasViewBox)
+    warn('The svg viewBox is not four numbers with a positive width and height; ignored.');
   for (const key of ['width', 'height'] as const) {
     const v = attrs[key];
     if (typeof v === 'string' && v.trim() !== '' && v.trim() !== 'auto' && !parseLength(v)) {

@@ -8,14 +8,28 @@ describe('duplicate rules', () => {
   it('counts a rule drawn twice once, either way round, with a warning', () => {
     const r = m(d.line('CUT', 0, 0, 4, 0), d.line('CUT', 4, 0, 0, 0), d.line('CUT', 0, 0, 4, 0));
     expect(r.length.cut).toBe(4);
-    expect(r.warnings.join(' ')).toMatch(/^2 duplicate or overlapping segments were counted once \(the first near x 4\.000 in, y 0\.000 in\)/);
+    expect(r.warnings.join(' ')).toMatch(
+      /^2 duplicate or overlapping segments were counted once \(the first near x 4\.000 in, y 0\.000 in\)/,
+    );
   });
 
   // A closed 2 × 1 rectangle twice (polyline, then four lines) is one rectangle: 6 in, 4 bends.
   it('counts a whole contour drawn twice once', () => {
     const r = m(
-      d.lwpolyline('CUT', [[0, 0], [2, 0], [2, 1], [0, 1]], true),
-      d.line('CUT', 0, 0, 2, 0), d.line('CUT', 2, 0, 2, 1), d.line('CUT', 2, 1, 0, 1), d.line('CUT', 0, 1, 0, 0),
+      d.lwpolyline(
+        'CUT',
+        [
+          [0, 0],
+          [2, 0],
+          [2, 1],
+          [0, 1],
+        ],
+        true,
+      ),
+      d.line('CUT', 0, 0, 2, 0),
+      d.line('CUT', 2, 0, 2, 1),
+      d.line('CUT', 2, 1, 0, 1),
+      d.line('CUT', 0, 1, 0, 0),
     );
     expect(r.length.cut).toBe(6);
     expect(r.bends).toBe(4);
@@ -23,7 +37,12 @@ describe('duplicate rules', () => {
   });
 
   it('counts circles and arcs drawn twice once', () => {
-    const r = m(d.circle('CUT', 0, 0, 1), d.circle('CUT', 0, 0, 1), d.arc('CUT', 5, 0, 1, 0, 90), d.arc('CUT', 5, 0, 1, 0, 90));
+    const r = m(
+      d.circle('CUT', 0, 0, 1),
+      d.circle('CUT', 0, 0, 1),
+      d.arc('CUT', 5, 0, 1, 0, 90),
+      d.arc('CUT', 5, 0, 1, 0, 90),
+    );
     expect(r.length.cut).toBeCloseTo(2 * Math.PI + Math.PI / 2, 12);
     expect(r.curves).toBe(2);
   });

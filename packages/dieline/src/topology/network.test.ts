@@ -11,7 +11,12 @@ describe('joining rule ends', () => {
   // A 10 × 10 mm square of four lines, one corner open by a gap: under 0.05 mm the ends join
   // (one closed contour, 4 bends); a 0.1 mm gap stays open (no closed contour, 3 bends).
   const square = (gap: number) =>
-    mm(d.line('CUT', 0, 0, 10, 0), d.line('CUT', 10, 0, 10, 10), d.line('CUT', 10, 10, 0, 10), d.line('CUT', 0, 10, 0, gap));
+    mm(
+      d.line('CUT', 0, 0, 10, 0),
+      d.line('CUT', 10, 0, 10, 10),
+      d.line('CUT', 10, 10, 0, 10),
+      d.line('CUT', 0, 10, 0, gap),
+    );
   it('joins gaps under 0.05 mm', () => {
     const r = square(0.04);
     expect(r.closedContours).toBe(1);
@@ -40,7 +45,12 @@ describe('chains', () => {
     const net = buildNetwork([
       { layer: 'c', ruleType: 'cut', closed: false, segments: [line(p(0, 0), p(1, 0))] },
       { layer: 'c', ruleType: 'cut', closed: false, segments: [line(p(2, 0), p(1, 0))] }, // drawn backwards
-      { layer: 'c', ruleType: 'cut', closed: true, segments: [line(p(5, 5), p(6, 5)), line(p(6, 5), p(5, 6)), line(p(5, 6), p(5, 5))] },
+      {
+        layer: 'c',
+        ruleType: 'cut',
+        closed: true,
+        segments: [line(p(5, 5), p(6, 5)), line(p(6, 5), p(5, 6)), line(p(5, 6), p(5, 5))],
+      },
     ]);
     const chains = buildChains(net);
     expect(chains.map((c) => [c.segments.length, c.closed])).toEqual([

@@ -7,7 +7,8 @@ export function majorUnits(cents: number, currency: string): number {
   if (!Number.isSafeInteger(cents)) throw new RangeError(`Not a whole number of minor units: ${cents}`);
   let digits: number;
   try {
-    digits = new Intl.NumberFormat('en-US', { style: 'currency', currency }).resolvedOptions().maximumFractionDigits ?? 2;
+    digits =
+      new Intl.NumberFormat('en-US', { style: 'currency', currency }).resolvedOptions().maximumFractionDigits ?? 2;
   } catch {
     throw new RangeError(`Not an ISO 4217 currency code: "${currency}"`);
   }

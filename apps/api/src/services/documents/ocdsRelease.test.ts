@@ -21,8 +21,22 @@ const input: OcdsInput = {
   },
   buyer: { id: 10, name: 'Prairie Folding Cartons' },
   bids: [
-    { id: 101, shop: northside, status: 'submitted', submittedAt: new Date('2026-11-25T10:00:00Z'), totalCents: 84500, currency: 'USD' },
-    { id: 102, shop: lakeshore, status: 'withdrawn', submittedAt: new Date('2026-11-26T11:30:00Z'), totalCents: 79900, currency: 'USD' },
+    {
+      id: 101,
+      shop: northside,
+      status: 'submitted',
+      submittedAt: new Date('2026-11-25T10:00:00Z'),
+      totalCents: 84500,
+      currency: 'USD',
+    },
+    {
+      id: 102,
+      shop: lakeshore,
+      status: 'withdrawn',
+      submittedAt: new Date('2026-11-26T11:30:00Z'),
+      totalCents: 79900,
+      currency: 'USD',
+    },
   ],
   award: {
     id: 7,
@@ -57,8 +71,15 @@ describe('ocdsRelease', () => {
       tag: ['award', 'contract'],
       initiationType: 'tender',
       buyer: { id: '10', name: 'Prairie Folding Cartons' },
-      tender: { id: '17', status: 'complete', numberOfTenderers: 2, tenderPeriod: { startDate: '2026-11-20T15:00:00.000Z', endDate: '2026-12-01T23:00:00.000Z' } },
-      awards: [{ id: '7', status: 'active', suppliers: [{ id: '20', name: 'Northside Rule & Die' }], relatedBids: ['101'] }],
+      tender: {
+        id: '17',
+        status: 'complete',
+        numberOfTenderers: 2,
+        tenderPeriod: { startDate: '2026-11-20T15:00:00.000Z', endDate: '2026-12-01T23:00:00.000Z' },
+      },
+      awards: [
+        { id: '7', status: 'active', suppliers: [{ id: '20', name: 'Northside Rule & Die' }], relatedBids: ['101'] },
+      ],
       contracts: [{ id: 'PO-2026-0042', awardID: '7', status: 'active', dateSigned: '2026-12-03T16:00:05.000Z' }],
     });
   });
@@ -72,7 +93,10 @@ describe('ocdsRelease', () => {
   });
 
   it('lists submitted bids as valid and withdrawn ones as withdrawn (bids extension bidStatus code list)', () => {
-    expect(release().bids.details.map((bid) => [bid.id, bid.status])).toEqual([['101', 'valid'], ['102', 'withdrawn']]);
+    expect(release().bids.details.map((bid) => [bid.id, bid.status])).toEqual([
+      ['101', 'valid'],
+      ['102', 'withdrawn'],
+    ]);
   });
 
   it('writes amounts as decimal major units from integer minor units', () => {
@@ -81,7 +105,10 @@ describe('ocdsRelease', () => {
     expect(usd.awards[0]?.value.amount).toBe(845);
     expect(usd.contracts[0]?.value.amount).toBe(845);
     expect(usd.bids.details[1]?.value).toEqual({ amount: 799, currency: 'USD' });
-    const odd = release({ bids: [{ ...input.bids[0]!, totalCents: 84501 }], award: { ...input.award, totalCents: 84501 } });
+    const odd = release({
+      bids: [{ ...input.bids[0]!, totalCents: 84501 }],
+      award: { ...input.award, totalCents: 84501 },
+    });
     expect(odd.awards[0]?.value.amount).toBe(845.01);
 
     const jpy = release({
@@ -91,7 +118,10 @@ describe('ocdsRelease', () => {
     expect(jpy.awards[0]?.value.amount).toBe(150000);
     expect(validate(jpy), errorsText(validate.errors)).toBe(true);
 
-    const bhd = release({ bids: [{ ...input.bids[0]!, totalCents: 1234567, currency: 'BHD' }], award: { ...input.award, totalCents: 1234567, currency: 'BHD' } });
+    const bhd = release({
+      bids: [{ ...input.bids[0]!, totalCents: 1234567, currency: 'BHD' }],
+      award: { ...input.award, totalCents: 1234567, currency: 'BHD' },
+    });
     expect(bhd.awards[0]?.value.amount).toBe(1234.567);
   });
 
@@ -111,13 +141,17 @@ describe('ocdsRelease', () => {
       expect((out as unknown as Release).tender.status, status).toBe(expected);
       expect(validate(out), errorsText(validate.errors)).toBe(true);
     }
-    expect(() => ocdsRelease({ ...input, request: { ...input.request, status: 'paused' } })).toThrow('Unknown request status "paused"');
+    expect(() => ocdsRelease({ ...input, request: { ...input.request, status: 'paused' } })).toThrow(
+      'Unknown request status "paused"',
+    );
   });
 
   it('proves the validator can fail: no ocid, or a bid status off the code list', () => {
     const { ocid: _ocid, ...withoutOcid } = ocdsRelease(input);
     expect(validate(withoutOcid)).toBe(false);
-    expect(validate.errors).toEqual(expect.arrayContaining([expect.objectContaining({ params: { missingProperty: 'ocid' } })]));
+    expect(validate.errors).toEqual(
+      expect.arrayContaining([expect.objectContaining({ params: { missingProperty: 'ocid' } })]),
+    );
 
     // Only the merged bids extension knows the Bid definition, so this also proves the merge took.
     const bad = structuredClone(ocdsRelease(input)) as unknown as Release;
@@ -128,8 +162,12 @@ describe('ocdsRelease', () => {
 
   it('refuses an award whose bid is missing, withdrawn or from another shop', () => {
     expect(() => ocdsRelease({ ...input, award: { ...input.award, bidId: 999 } })).toThrow('not among the request');
-    expect(() => ocdsRelease({ ...input, award: { ...input.award, bidId: 102, shop: lakeshore } })).toThrow('was withdrawn');
+    expect(() => ocdsRelease({ ...input, award: { ...input.award, bidId: 102, shop: lakeshore } })).toThrow(
+      'was withdrawn',
+    );
     expect(() => ocdsRelease({ ...input, award: { ...input.award, shop: lakeshore } })).toThrow('another die shop');
-    expect(() => ocdsRelease({ ...input, award: { ...input.award, currency: 'US' } })).toThrow('Not an ISO 4217 currency code: "US"');
+    expect(() => ocdsRelease({ ...input, award: { ...input.award, currency: 'US' } })).toThrow(
+      'Not an ISO 4217 currency code: "US"',
+    );
   });
 });

@@ -30,7 +30,8 @@ export function ocdsRelease(input: OcdsInput): Record<string, unknown> {
   const awardedBid = bids.find((bid) => bid.id === award.bidId);
   if (!awardedBid) throw new RangeError(`The awarded bid ${award.bidId} is not among the request's bids`);
   if (awardedBid.status !== 'submitted') throw new RangeError(`The awarded bid ${award.bidId} was withdrawn`);
-  if (awardedBid.shop.id !== award.shop.id) throw new RangeError(`The awarded bid ${award.bidId} belongs to another die shop`);
+  if (awardedBid.shop.id !== award.shop.id)
+    throw new RangeError(`The awarded bid ${award.bidId} belongs to another die shop`);
 
   const ocid = `${input.ocidPrefix}-${request.id}`;
   const ref = (org: { id: number; name: string }) => ({ id: String(org.id), name: org.name });
@@ -51,7 +52,10 @@ export function ocdsRelease(input: OcdsInput): Record<string, unknown> {
     initiationType: 'tender',
     parties: [
       { ...ref(buyer), roles: ['buyer'] },
-      ...shops.map((shop) => ({ ...ref(shop), roles: shop.id === award.shop.id ? ['tenderer', 'supplier'] : ['tenderer'] })),
+      ...shops.map((shop) => ({
+        ...ref(shop),
+        roles: shop.id === award.shop.id ? ['tenderer', 'supplier'] : ['tenderer'],
+      })),
     ],
     buyer: ref(buyer),
     tender: {

@@ -17,7 +17,14 @@ const base: PurchaseOrderDoc = {
     deliveryPostcode: '62701',
   },
   supplier: { organisation: 'Northside Rule & Die', postcode: '60607' },
-  request: { id: 17, title: 'Cereal carton 4-up', jobReference: 'JOB-5521', needByDate: '2027-01-15', quantity: 2, ups: 4 },
+  request: {
+    id: 17,
+    title: 'Cereal carton 4-up',
+    jobReference: 'JOB-5521',
+    needByDate: '2027-01-15',
+    quantity: 2,
+    ups: 4,
+  },
   dieline: { fileName: 'cereal-carton.dxf', totalRuleIn: 312.46, complexity: 'complex' },
   lines: [
     { kind: 'die', description: 'Flatbed steel-rule die, 4-up', amountCents: 84500 },
@@ -34,11 +41,19 @@ const base: PurchaseOrderDoc = {
 };
 
 // pdfjs-dist's own metrics for the standard fonts (the PO embeds none), read from disk.
-const standardFontDataUrl = join(dirname(createRequire(import.meta.url).resolve('pdfjs-dist/package.json')), 'standard_fonts/');
+const standardFontDataUrl = join(
+  dirname(createRequire(import.meta.url).resolve('pdfjs-dist/package.json')),
+  'standard_fonts/',
+);
 
 /** The text of every page, read back with pdfjs-dist (a general-purpose PDF library, not the writer). */
 async function readBack(buf: Buffer): Promise<string[]> {
-  const pdf = await getDocument({ data: new Uint8Array(buf), useSystemFonts: false, disableFontFace: true, standardFontDataUrl }).promise;
+  const pdf = await getDocument({
+    data: new Uint8Array(buf),
+    useSystemFonts: false,
+    disableFontFace: true,
+    standardFontDataUrl,
+  }).promise;
   const pages: string[] = [];
   for (let n = 1; n <= pdf.numPages; n++) {
     const content = await (await pdf.getPage(n)).getTextContent();
@@ -83,7 +98,11 @@ describe('purchaseOrderPdf', () => {
   });
 
   it('runs onto more pages when there are many lines, losing none', async () => {
-    const lines = Array.from({ length: 80 }, (_, i) => ({ kind: 'other', description: `Insert number ${i + 1}`, amountCents: 1000 + i }));
+    const lines = Array.from({ length: 80 }, (_, i) => ({
+      kind: 'other',
+      description: `Insert number ${i + 1}`,
+      amountCents: 1000 + i,
+    }));
     const totalCents = lines.reduce((sum, line) => sum + line.amountCents, 0);
     const pages = await readBack(await purchaseOrderPdf({ ...base, lines, totalCents }));
     expect(pages.length).toBeGreaterThan(1);
@@ -104,7 +123,9 @@ describe('purchaseOrderPdf', () => {
   });
 
   it('refuses lines that do not add up to the total, and a bad currency, with a clear error', async () => {
-    await expect(purchaseOrderPdf({ ...base, totalCents: 99999 })).rejects.toThrow('The price lines add up to 100000 but the total is 99999');
+    await expect(purchaseOrderPdf({ ...base, totalCents: 99999 })).rejects.toThrow(
+      'The price lines add up to 100000 but the total is 99999',
+    );
     await expect(purchaseOrderPdf({ ...base, currency: 'US' })).rejects.toThrow('Not an ISO 4217 currency code: "US"');
     await expect(purchaseOrderPdf({ ...base, lines: [], totalCents: 0 })).rejects.toThrow('at least one price line');
     await expect(purchaseOrderPdf({ ...base, timeZone: 'Mars/Olympus' })).rejects.toThrow('time zone: "Mars/Olympus"');
@@ -118,7 +139,8 @@ describe('purchaseOrderPdf', () => {
     // A Windows line end and a tab print as a line break and a space, not as stray glyphs (common practice).
     expect(text).toContain('Quai 2');
     expect(text).not.toMatch(/frais\S/);
-    await expect(purchaseOrderPdf({ ...base, supplier: { organisation: 'Zakład Wykrojników', postcode: null } }))
-      .rejects.toThrow('cannot print "ł" (in the supplier\'s organisation)');
+    await expect(
+      purchaseOrderPdf({ ...base, supplier: { organisation: 'Zakład Wykrojników', postcode: null } }),
+    ).rejects.toThrow('cannot print "ł" (in the supplier\'s organisation)');
   });
 });

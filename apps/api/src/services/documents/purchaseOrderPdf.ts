@@ -26,7 +26,13 @@ export async function purchaseOrderPdf(doc: PurchaseOrderDoc): Promise<Buffer> {
     size: 'LETTER',
     margin: MARGIN,
     bufferPages: true, // so every page can carry "page n of m" at the end
-    info: { Title: `Purchase order ${doc.poNumber}`, Author: 'Kerfmark', Creator: 'Kerfmark', Producer: 'Kerfmark', CreationDate: doc.issuedAt },
+    info: {
+      Title: `Purchase order ${doc.poNumber}`,
+      Author: 'Kerfmark',
+      Creator: 'Kerfmark',
+      Producer: 'Kerfmark',
+      CreationDate: doc.issuedAt,
+    },
   });
   const bytes = collect(pdf);
   const left = pdf.page.margins.left;
@@ -47,9 +53,16 @@ export async function purchaseOrderPdf(doc: PurchaseOrderDoc): Promise<Buffer> {
   const bottoms = [
     block(pdf, left, top, column, 'Buyer', [doc.buyer.organisation, doc.buyer.contact, doc.buyer.email]),
     block(pdf, left + column + gap, top, column, 'Supplier', [doc.supplier.organisation, doc.supplier.postcode]),
-    block(pdf, left + 2 * (column + gap), top, column, 'Deliver to', doc.buyer.deliveryAddress
-      ? [doc.buyer.deliveryAddress, doc.buyer.deliveryPostcode]
-      : ['To be confirmed by the buyer']),
+    block(
+      pdf,
+      left + 2 * (column + gap),
+      top,
+      column,
+      'Deliver to',
+      doc.buyer.deliveryAddress
+        ? [doc.buyer.deliveryAddress, doc.buyer.deliveryPostcode]
+        : ['To be confirmed by the buyer'],
+    ),
   ];
   pdf.x = left;
   pdf.y = Math.max(...bottoms) + 12;
@@ -64,7 +77,11 @@ export async function purchaseOrderPdf(doc: PurchaseOrderDoc): Promise<Buffer> {
   section(pdf, 'Dieline', width);
   if (doc.dieline) {
     field(pdf, 'File', doc.dieline.fileName);
-    field(pdf, 'Total rule length', `${new Intl.NumberFormat('en-US', { maximumFractionDigits: 1 }).format(doc.dieline.totalRuleIn)} in`);
+    field(
+      pdf,
+      'Total rule length',
+      `${new Intl.NumberFormat('en-US', { maximumFractionDigits: 1 }).format(doc.dieline.totalRuleIn)} in`,
+    );
     field(pdf, 'Complexity', doc.dieline.complexity === 'complex' ? 'Complex' : 'Simple');
   } else {
     pdf.text('No dieline attached.');
@@ -94,7 +111,8 @@ export async function purchaseOrderPdf(doc: PurchaseOrderDoc): Promise<Buffer> {
 function checkDocument(doc: PurchaseOrderDoc): void {
   if (doc.lines.length === 0) throw new RangeError('A purchase order needs at least one price line');
   const sum = sumCents(doc.lines.map((line) => line.amountCents));
-  if (sum !== doc.totalCents) throw new RangeError(`The price lines add up to ${sum} but the total is ${doc.totalCents} (minor units)`);
+  if (sum !== doc.totalCents)
+    throw new RangeError(`The price lines add up to ${sum} but the total is ${doc.totalCents} (minor units)`);
   try {
     formatMoney({ cents: 0, currency: doc.currency });
   } catch {
@@ -124,7 +142,10 @@ function checkDocument(doc: PurchaseOrderDoc): void {
   for (const [where, text] of texts) {
     const bad = text === null ? undefined : unprintableCharacter(plain(text));
     // Refuse rather than print garbage: the standard PDF fonts cover Western European letters only.
-    if (bad) throw new RangeError(`The purchase order cannot print ${JSON.stringify(bad)} (in the ${where}): use Western European letters`);
+    if (bad)
+      throw new RangeError(
+        `The purchase order cannot print ${JSON.stringify(bad)} (in the ${where}): use Western European letters`,
+      );
   }
 }
 
@@ -156,7 +177,12 @@ function section(pdf: Pdf, title: string, width: number): void {
   const x = pdf.page.margins.left;
   pdf.moveDown(0.8);
   pdf.font(BOLD).fontSize(11).fillColor(INK).text(title, x, pdf.y, { width });
-  pdf.moveTo(x, pdf.y + 1).lineTo(x + width, pdf.y + 1).lineWidth(0.5).strokeColor(RULE).stroke();
+  pdf
+    .moveTo(x, pdf.y + 1)
+    .lineTo(x + width, pdf.y + 1)
+    .lineWidth(0.5)
+    .strokeColor(RULE)
+    .stroke();
   pdf.moveDown(0.4).font(REGULAR).fontSize(10);
 }
 
@@ -165,7 +191,13 @@ function field(pdf: Pdf, label: string, value: string): void {
 }
 
 /** The price lines with amounts right-aligned and the total in bold; repeats its header on a new page. */
-function priceTable(pdf: Pdf, doc: PurchaseOrderDoc, money: (cents: number) => string, left: number, width: number): void {
+function priceTable(
+  pdf: Pdf,
+  doc: PurchaseOrderDoc,
+  money: (cents: number) => string,
+  left: number,
+  width: number,
+): void {
   const kindWidth = 130;
   const amountWidth = 100;
   const descX = left + kindWidth + 10;
@@ -182,7 +214,11 @@ function priceTable(pdf: Pdf, doc: PurchaseOrderDoc, money: (cents: number) => s
   };
   const row = (kind: string, text: string, amount: string) => {
     const description = plain(text);
-    const height = Math.max(pdf.heightOfString(description || ' ', { width: descWidth }), pdf.heightOfString(kind, { width: kindWidth })) + 6;
+    const height =
+      Math.max(
+        pdf.heightOfString(description || ' ', { width: descWidth }),
+        pdf.heightOfString(kind, { width: kindWidth }),
+      ) + 6;
     if (pdf.y + height > pdf.page.maxY()) {
       pdf.addPage();
       header();
@@ -196,13 +232,22 @@ function priceTable(pdf: Pdf, doc: PurchaseOrderDoc, money: (cents: number) => s
 
   header();
   for (const line of doc.lines) {
-    row(plain(bidLineLabels[line.kind as keyof typeof bidLineLabels] ?? line.kind), line.description, money(line.amountCents));
+    row(
+      plain(bidLineLabels[line.kind as keyof typeof bidLineLabels] ?? line.kind),
+      line.description,
+      money(line.amountCents),
+    );
   }
   if (pdf.y + 24 > pdf.page.maxY()) {
     pdf.addPage();
     header();
   }
-  pdf.moveTo(left, pdf.y).lineTo(left + width, pdf.y).lineWidth(0.5).strokeColor(RULE).stroke();
+  pdf
+    .moveTo(left, pdf.y)
+    .lineTo(left + width, pdf.y)
+    .lineWidth(0.5)
+    .strokeColor(RULE)
+    .stroke();
   pdf.y += 4;
   pdf.font(BOLD);
   row('Total', '', money(doc.totalCents));
@@ -218,8 +263,15 @@ function pageFooters(pdf: Pdf, poNumber: string, left: number, width: number): v
     const bottom = pdf.page.margins.bottom;
     // Writing below the margin would make pdfkit start a new page; lift the margin meanwhile.
     pdf.page.margins.bottom = 0;
-    pdf.font(REGULAR).fontSize(8).fillColor(MUTED)
-      .text(`${poNumber} · page ${i - start + 1} of ${count}`, left, pdf.page.height - bottom + 16, { width, align: 'right', lineBreak: false });
+    pdf
+      .font(REGULAR)
+      .fontSize(8)
+      .fillColor(MUTED)
+      .text(`${poNumber} · page ${i - start + 1} of ${count}`, left, pdf.page.height - bottom + 16, {
+        width,
+        align: 'right',
+        lineBreak: false,
+      });
     pdf.page.margins.bottom = bottom;
   }
 }

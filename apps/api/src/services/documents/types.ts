@@ -3,9 +3,22 @@ export interface PurchaseOrderDoc {
   poNumber: string;
   issuedAt: Date;
   timeZone: string;
-  buyer: { organisation: string; contact: string; email: string; deliveryAddress: string | null; deliveryPostcode: string | null };
+  buyer: {
+    organisation: string;
+    contact: string;
+    email: string;
+    deliveryAddress: string | null;
+    deliveryPostcode: string | null;
+  };
   supplier: { organisation: string; postcode: string | null };
-  request: { id: number; title: string; jobReference: string | null; needByDate: string | null; quantity: number; ups: number };
+  request: {
+    id: number;
+    title: string;
+    jobReference: string | null;
+    needByDate: string | null;
+    quantity: number;
+    ups: number;
+  };
   dieline: { fileName: string; totalRuleIn: number; complexity: 'simple' | 'complex' } | null;
   lines: Array<{ kind: string; description: string; amountCents: number }>;
   totalCents: number;
