@@ -2,6 +2,7 @@
 // count over the same table (ratio). Brings up the test stack on its own ports.
 import path from 'node:path';
 import { performance } from 'node:perf_hooks';
+import { complexityOf } from '@kerfmark/dieline';
 import knexFactory from 'knex';
 import { recordResults } from './lib/benchResults';
 import { profile } from './lib/profile';
@@ -44,7 +45,7 @@ try {
         priced_on: new Date(Date.now() - rand() * 3 * 365 * 86_400_000).toISOString().slice(0, 10),
         rule_length_in: length.toFixed(3),
         bends,
-        complexity: bends / length > 1 ? 'complex' : 'simple',
+        complexity: complexityOf({ bends, curves: 0, joints: 0, punches: 0 }, length),
       };
     });
     await knex('price_records').insert(rows);

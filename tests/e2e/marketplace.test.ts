@@ -48,6 +48,27 @@ async function pdfText(path: string): Promise<string> {
 }
 
 describe('the marketplace loop in the browser', () => {
+  it('revises a bid in yen: the form shows whole yen, and takes the revision', async () => {
+    const buyer = await as('maya@larkspur.example');
+    const id = await postRequest(buyer, `Yen carton ${Date.now() % 100000}`);
+    const shop = await as('ken@brightline.example');
+    await shop.goto(`${baseUrl}/requests/${id}`);
+    await shop.locator('[data-test=bid-currency]').click();
+    await shop.locator('.ant-select-item-option[title=JPY]').click();
+    await bid(shop, ['150000', '2000', '1500'], 6);
+    // ISO 4217: the yen has no minor unit, so ¥153,500 is 153500 in the bid's own units.
+    await expect.poll(() => shop.locator('[data-test=my-bid-total]').innerText()).toBe('¥153,500');
+    await shop.locator('[data-test=revise]').click();
+    expect(await shop.locator('[data-test=bid-amount-0]').inputValue()).toBe('150000');
+    await shop.locator('[data-test=bid-amount-0]').fill('140000');
+    await expect.poll(() => shop.locator('[data-test=bid-total]').innerText()).toBe('¥143,500');
+    await shop.locator('[data-test=bid-submit]').click();
+    await expect.poll(() => shop.locator('[data-test=my-bid-total]').innerText()).toBe('¥143,500');
+    await screenshot(shop, '19-estimator-yen-bid-revised');
+    await shop.context().close();
+    await buyer.context().close();
+  });
+
   it('posts, takes two sealed bids and a revision, closes, compares, awards the dearer bid with a reason, ships and receives', async () => {
     const title = `Gift box sleeve ${Date.now() % 100000}`;
     const buyer = await as('maya@larkspur.example');

@@ -14,7 +14,9 @@ import { authRoutes } from './routes/authRoutes';
 import { healthRoutes } from './routes/healthRoutes';
 import { invitationRoutes } from './routes/invitationRoutes';
 import { meRoutes } from './routes/meRoutes';
+import { awardRoutes } from './routes/awardRoutes';
 import { bidRoutes } from './routes/bidRoutes';
+import { fulfilmentRoutes } from './routes/fulfilmentRoutes';
 import { fileRoutes } from './routes/fileRoutes';
 import { notificationRoutes } from './routes/notificationRoutes';
 import { libraryRoutes } from './routes/libraryRoutes';
@@ -71,6 +73,8 @@ export function createApp(deps: AppDeps): Express {
   api.use('/notifications', notificationRoutes(requireAuth));
   api.use('/price-history', priceHistoryRoutes(services, requireAuth));
   api.use(bidRoutes(services, requireAuth));
+  api.use(awardRoutes(services, requireAuth));
+  api.use(fulfilmentRoutes(services, requireAuth));
   api.use(libraryRoutes(services, requireAuth));
   api.use(marketplaceRoutes(services, requireAuth));
   api.use(notFoundHandler);

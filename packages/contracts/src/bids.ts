@@ -1,3 +1,4 @@
+import type { BestColumn } from '@kerfmark/pricing';
 import { z } from 'zod';
 import { calendarDate } from './dateFields';
 import { recordId } from './ids';
@@ -110,7 +111,9 @@ export interface ComparedBidDto {
   onTimeRate: number | null;
   pastJobs: number;
   revision: number;
-  best: Array<'total' | 'perInch' | 'lead' | 'ship' | 'onTime'>;
+  /** Whether awarding this bid needs a written reason (the pricing package's awardReason). */
+  needsReason: boolean;
+  best: BestColumn[];
 }
 
 export interface BidComparisonDto {

@@ -1,25 +1,11 @@
+import type { DielineMetrics } from '@kerfmark/dieline';
+import type { StockKind } from '@kerfmark/stock';
 import type { BidDto } from './bids';
 import type { Press } from './presses';
-import type { Grain, RequestStatus, RuleType, Visibility } from './requests';
+import type { Grain, RequestAction, RequestStatus, RuleType, Visibility } from './requests';
 
-/** The dieline metrics as the analysis reports them (lengths in inches). */
-export interface DielineMetrics {
-  units: string;
-  length: Record<'cut' | 'crease' | 'perf' | 'kiss' | 'other' | 'total', number>;
-  lengthMm: Record<'cut' | 'crease' | 'perf' | 'kiss' | 'other' | 'total', number>;
-  curves: number;
-  minRadius: number | null;
-  bends: number;
-  joints: number;
-  closedContours: number;
-  punches: number;
-  bbox: { width: number; height: number };
-  board: { width: number; height: number };
-  complexity: 'simple' | 'complex';
-  warnings: string[];
-  fitsPress?: boolean | null;
-  layers?: Array<{ name: string; ruleType: string; entities: number }>;
-}
+/** The dieline metrics as the analysis reports them (lengths in inches): the dieline package's own type. */
+export type { DielineMetrics } from '@kerfmark/dieline';
 
 export type AnalysisStatus = 'pending' | 'analysing' | 'done' | 'failed';
 
@@ -88,7 +74,7 @@ export interface DieRequestDetail extends DieRequestSummary {
   caliperIn: number | null;
   stockWeightGsm: number | null;
   grain: Grain | null;
-  stockKind: 'paper' | 'paperboard' | 'corrugated';
+  stockKind: StockKind;
   stockWeightEntry: string | null;
   foldAcrossGrain: boolean | null;
   heavyInkOnFold: boolean | null;
@@ -104,7 +90,7 @@ export interface DieRequestDetail extends DieRequestSummary {
   invitedShops: Array<{ id: number; name: string }>;
   files: DielineFileDto[];
   questions: RequestQuestionDto[];
-  allowedActions: string[];
+  allowedActions: RequestAction[];
   isOwner: boolean;
   boardFitsPress: boolean | null;
   needBy: NeedByPlan | null;

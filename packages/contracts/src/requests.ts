@@ -1,3 +1,4 @@
+import { STOCK_KINDS } from '@kerfmark/stock';
 import { z } from 'zod';
 import { calendarDate, instant } from './dateFields';
 import { recordId } from './ids';
@@ -30,10 +31,37 @@ export const requestStatusLabels: Record<RequestStatus, string> = {
 /** Who moves a request from one status to the next: the printer's side or the awarded die shop. */
 export type TransitionActor = 'printer' | 'awarded_shop';
 
+/** Changes of status: the moves of the transition table. */
+export const statusActions = [
+  'publish',
+  'cancel',
+  'close-bidding',
+  'award',
+  'start-production',
+  'ship',
+  'receive',
+] as const;
+export type StatusAction = (typeof statusActions)[number];
+/** Everything one may do with a request; the API's answer lists those open to the reader now. */
+export const requestActions = [
+  ...statusActions,
+  'edit',
+  'remove-file',
+  'move-deadline-later',
+  'move-deadline-earlier',
+  'answer',
+  'bid',
+  'revise',
+  'withdraw',
+  'ask',
+  'decline',
+] as const;
+export type RequestAction = (typeof requestActions)[number];
+
 export interface Transition {
   from: RequestStatus;
   to: RequestStatus;
-  action: string;
+  action: StatusAction;
   actor: TransitionActor;
   roles: readonly string[];
 }
@@ -123,7 +151,7 @@ const DieRequestFields = z.object({
     .nullable()
     .optional(),
   grain: Grain.nullable().optional(),
-  stockKind: z.enum(['paper', 'paperboard', 'corrugated']),
+  stockKind: z.enum(STOCK_KINDS),
   /** The weight as the buyer entered it, e.g. "80 lb cover"; stockWeightGsm holds it in g/m². */
   stockWeightEntry: optionalText(40),
   foldAcrossGrain: z.boolean().nullable().optional(),

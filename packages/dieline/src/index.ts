@@ -4,8 +4,14 @@ export { analyseDieline } from './analyse';
 export type { AnalyseOptions, DielineAnalysis, DielineMetrics } from './analyse';
 export { DielineError } from './errors';
 export type { DielineErrorCode } from './errors';
-export { COMPLEXITY_FEATURES_PER_INCH, COMPLEXITY_RULE } from './metrics/complexity';
-export type { Complexity } from './metrics/complexity';
+export {
+  COMPLEXITY_FEATURES_PER_INCH,
+  COMPLEXITY_RULE,
+  complexityOf,
+  featureCount,
+  type Complexity,
+  type FeatureCounts,
+} from './metrics/complexity';
 export { BEND_MIN_DEGREES } from './metrics/bends';
 export { PUNCH_MAX_IN } from './metrics/contours';
 export { DEFAULT_MARGIN_IN } from './metrics/board';

@@ -1,3 +1,4 @@
+import { awardReason } from './awardReason';
 import { workingDaysBetween } from './schedule';
 
 export interface BidToCompare {
@@ -11,7 +12,8 @@ export interface BidToCompare {
   onTimeRate: number | null;
 }
 
-export type BestColumn = 'total' | 'perInch' | 'lead' | 'ship' | 'onTime';
+export const bestColumns = ['total', 'perInch', 'lead', 'ship', 'onTime'] as const;
+export type BestColumn = (typeof bestColumns)[number];
 
 export interface ComparedBid<B extends BidToCompare> {
   bid: B;
@@ -21,6 +23,8 @@ export interface ComparedBid<B extends BidToCompare> {
   /** Working days the promised ship date falls after the need-by date (0 when on time). */
   daysLate: number;
   expired: boolean;
+  /** Whether awarding this bid needs a written reason (see awardReason). */
+  needsReason: boolean;
   best: BestColumn[];
 }
 
@@ -42,6 +46,7 @@ export function compareBids<B extends BidToCompare>(
     centsPerInch: opts.ruleLengthIn && opts.ruleLengthIn > 0 ? Math.round(bid.totalCents / opts.ruleLengthIn) : null,
     daysLate: opts.needByDate ? Math.max(0, workingDaysBetween(opts.needByDate, bid.promisedShipDate)) : 0,
     expired: bid.validUntil < opts.today,
+    needsReason: awardReason(bid, bids).needsReason,
     best: [] as BestColumn[],
   }));
 

@@ -1,5 +1,6 @@
 // Price history statistics, fair-price band and bid comparison: pure, no I/O.
 export * from './money';
+export * from './awardReason';
 export * from './schedule';
 export * from './compareBids';
 export * from './notEnough';

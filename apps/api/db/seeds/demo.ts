@@ -2,10 +2,12 @@
 import { createHash } from 'node:crypto';
 import type { Knex } from 'knex';
 import bcrypt from 'bcryptjs';
-import { analyseDieline } from '@kerfmark/dieline';
-import { pricedLength } from '@kerfmark/contracts';
+import { analyseDieline, complexityOf, featureCount } from '@kerfmark/dieline';
+
 import { addWorkingDays } from '@kerfmark/pricing';
 import type { Storage } from '@kerfmark/storage';
+import { nextPurchaseOrderNumber } from '../../src/services/purchaseOrderNumber';
+import { receivedDiePriceRecord } from '../../src/services/receivedDiePriceRecord';
 import { doorHanger, labelSheet, tuckEndCarton } from './demoDielines';
 
 export const DEMO_PASSWORD = 'kerfmark-demo-2026';
@@ -457,7 +459,6 @@ async function seedHistory(knex: Knex, storage: Storage): Promise<void> {
       createdBy: estimator.id,
       createdAt: atDays(-past.monthsAgo * 30 - 5),
     });
-    const { nextval } = (await knex.raw("SELECT nextval('purchase_order_numbers') AS nextval")).rows[0];
     const [{ id: awardId }] = await knex('awards')
       .insert({
         requestId,
@@ -471,7 +472,7 @@ async function seedHistory(knex: Knex, storage: Storage): Promise<void> {
         promisedShipDate: day(promised),
         awardedBy: purchasing.id,
         awardedAt,
-        poNumber: `PO-${awardedAt.getUTCFullYear()}-${String(nextval).padStart(5, '0')}`,
+        poNumber: await nextPurchaseOrderNumber(knex, awardedAt),
       })
       .returning('id');
     // The received die went into storage: rack, impressions run since, a life the buyer set.
@@ -489,28 +490,20 @@ async function seedHistory(knex: Knex, storage: Storage): Promise<void> {
       metrics: JSON.stringify(metrics),
       preview: JSON.stringify(preview),
     });
-    await knex('priceRecords').insert({
-      organisationId: org.id,
-      requestId,
-      awardId,
-      shopId: shop.id,
-      shopName: shop.name,
-      totalCents: total,
-      dieCents: past.dieCents,
-      currency: 'USD',
-      pricedOn: day(awardedAt),
-      ruleLengthIn: pricedLength(metrics.length),
-      cutIn: metrics.length.cut,
-      creaseIn: metrics.length.crease,
-      perfIn: metrics.length.perf,
-      kissIn: metrics.length.kiss,
-      bends: metrics.bends,
-      curves: metrics.curves,
-      joints: metrics.joints,
-      punches: metrics.punches,
-      boardAreaSqIn: metrics.board.width * metrics.board.height,
-      complexity: metrics.complexity,
-    });
+    await knex('priceRecords').insert(
+      receivedDiePriceRecord({
+        organisationId: org.id,
+        requestId,
+        awardId,
+        shopId: shop.id,
+        shopName: shop.name,
+        totalCents: total,
+        dieCents: past.dieCents,
+        currency: 'USD',
+        pricedOn: day(awardedAt),
+        metrics,
+      }),
+    );
   }
   // Two years of earlier dies the buyer kept in a spreadsheet, as if imported: invented prices
   // that grow with rule length and features, a little dearer for complex dies, with some spread.
@@ -526,8 +519,8 @@ async function seedHistory(knex: Knex, storage: Storage): Promise<void> {
     const curves = Math.round(rand() * 20);
     const joints = Math.round(rand() * 30);
     const punches = Math.round(rand() * 6);
-    const features = bends + curves + joints + punches;
-    const complexity = features / ruleLengthIn > 1 ? 'complex' : 'simple';
+    const features = featureCount({ bends, curves, joints, punches });
+    const complexity = complexityOf({ bends, curves, joints, punches }, ruleLengthIn);
     const dieCents = Math.round((18_000 + 420 * ruleLengthIn + 650 * features) * (0.9 + rand() * 0.2) * (1 + i / 480));
     const pricedOn = day(atDays(-730 + i * 14));
     return {

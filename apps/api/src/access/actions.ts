@@ -1,23 +1,17 @@
-import { findTransition, requestStatusLabels, requestTransitions, type Transition } from '@kerfmark/contracts';
+import {
+  findTransition,
+  requestActions,
+  requestStatusLabels,
+  type RequestAction,
+  type StatusAction,
+  type Transition,
+} from '@kerfmark/contracts';
 import type { Refusal } from './deadline';
 import { isAwardedShop, isBidder, isOwner, isPurchasing, type Actor, type RequestFacts } from './facts';
 import { biddingOpen } from './sealed';
 import { maySee } from './visibility';
 
-/** Changes of status: the moves of the transition table. */
-export type StatusAction = 'publish' | 'cancel' | 'close-bidding' | 'award' | 'start-production' | 'ship' | 'receive';
-/** Everything else one may do with a request. */
-export type RequestAction =
-  | StatusAction
-  | 'edit'
-  | 'move-deadline-later'
-  | 'move-deadline-earlier'
-  | 'answer'
-  | 'bid'
-  | 'revise'
-  | 'withdraw'
-  | 'ask'
-  | 'decline';
+export type { RequestAction, StatusAction };
 
 const notFound: Refusal = { status: 404, message: 'That die request was not found.' };
 
@@ -71,6 +65,11 @@ export function actionRefusal(actor: Actor, f: RequestFacts, action: RequestActi
         f.status === 'draft' || open,
         'Only a draft, or an open request before its deadline, can be changed.',
       );
+    case 'remove-file':
+      return printerOnly(
+        f.status === 'draft',
+        'Files can be removed from a draft only; an open request keeps what shops have seen.',
+      );
     case 'move-deadline-later':
       return printerOnly(open, 'Bidding has closed: the deadline can no longer move.');
     case 'move-deadline-earlier':
@@ -111,20 +110,7 @@ export function actionRefusal(actor: Actor, f: RequestFacts, action: RequestActi
   }
 }
 
-const ACTIONS: RequestAction[] = [
-  ...new Set(requestTransitions.map((t) => t.action as StatusAction)),
-  'edit',
-  'move-deadline-later',
-  'move-deadline-earlier',
-  'answer',
-  'bid',
-  'revise',
-  'withdraw',
-  'ask',
-  'decline',
-];
-
 /** The actions open to the actor on the request now: the web app's buttons. */
 export function openActions(actor: Actor, f: RequestFacts, now: Date): RequestAction[] {
-  return ACTIONS.filter((action) => actionRefusal(actor, f, action, now) === null);
+  return requestActions.filter((action) => actionRefusal(actor, f, action, now) === null);
 }

@@ -6,7 +6,7 @@ export { actionRefusal, openActions, transitionRefusal, type RequestAction, type
 export { deadlineMoveRefusal, MIN_DEADLINE_NOTICE_MS, type Refusal } from './deadline';
 export { visibleTo } from './visibleQuery';
 export { biddableByShop, openToShop } from './openToShop';
-export { factsOf, loadFacts, TIES_PART, type RequestTies } from './loadFacts';
+export { factsOf, loadFacts, TIES_PART } from './loadFacts';
 export { refuse, assertMay } from './refuse';
 export { presentToOwner } from './presentToOwner';
 export { presentToShop } from './presentToShop';

@@ -1,13 +1,6 @@
 import type { Knex } from 'knex';
-import { DieRequest } from '../models';
+import { DieRequest, type RequestTies } from '../models';
 import type { RequestFacts } from './facts';
-
-/** The shops tied to a request, as readRequestGraph's `ties` part reads them in the same query. */
-export interface RequestTies {
-  invitedShopIds: number[];
-  bidderShopIds: number[];
-  awardedShopId: number | null;
-}
 
 export const TIES_PART = `(select json_build_object(
     'invitedShopIds', coalesce((select json_agg(i.shop_id) from request_invitations i where i.request_id = die_requests.id), '[]'),

@@ -24,10 +24,7 @@ export type AudienceFields =
 /** What every audience that may see a request sees of it: the job, the stock, the press, the dieline. */
 export function requestFields(request: DieRequest, actor: AuthUser): Omit<DieRequestDetail, AudienceFields> {
   const file = primaryFile(request.files);
-  const board =
-    file?.analysisStatus === 'done'
-      ? (file.metrics as { board?: { width: number; height: number } } | null)?.board
-      : undefined;
+  const board = file?.analysisStatus === 'done' ? file.metrics?.board : undefined;
   const press = request.press ?? null;
   const fits =
     board && press

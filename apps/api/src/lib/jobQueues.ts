@@ -10,7 +10,7 @@ import {
   type DeliverEmailJob,
   type PlanRemindersJob,
 } from '@kerfmark/contracts';
-import type { AnalysisDispatcher, EmailDispatcher, ReminderPlanner } from '../services/deps';
+import type { AnalysisDispatcher, EmailDispatcher, ReminderPlanner } from './dispatchers';
 
 /**
  * The API's side of the job queues. Adding a job never holds a request: with Redis down the

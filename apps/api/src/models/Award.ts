@@ -1,5 +1,4 @@
 import { Model } from 'objection';
-import { DieRequest } from './DieRequest';
 import { Organisation } from './Organisation';
 
 export class Award extends Model {
@@ -21,7 +20,6 @@ export class Award extends Model {
   poNumber!: string;
   poS3Key!: string | null;
   shop?: Organisation;
-  request?: DieRequest;
 
   static override get relationMappings() {
     return {
@@ -29,11 +27,6 @@ export class Award extends Model {
         relation: Model.BelongsToOneRelation,
         modelClass: Organisation,
         join: { from: 'awards.shopId', to: 'organisations.id' },
-      },
-      request: {
-        relation: Model.BelongsToOneRelation,
-        modelClass: DieRequest,
-        join: { from: 'awards.requestId', to: 'die_requests.id' },
       },
     };
   }

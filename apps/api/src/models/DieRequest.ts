@@ -6,7 +6,13 @@ import { Press } from './Press';
 import type { RequestQuestion } from './RequestQuestion';
 import type { Award } from './Award';
 import type { SubmittedBid } from './SubmittedBid';
-import type { RequestTies } from '../access/loadFacts';
+
+/** The shops tied to a request, as readRequestGraph's `ties` part reads them in the same query. */
+export interface RequestTies {
+  invitedShopIds: number[];
+  bidderShopIds: number[];
+  awardedShopId: number | null;
+}
 
 export class DieRequest extends Model {
   static override tableName = 'die_requests';

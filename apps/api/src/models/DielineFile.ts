@@ -1,3 +1,4 @@
+import type { DielineMetrics } from '@kerfmark/contracts';
 import { Model, type QueryBuilder } from 'objection';
 
 export type AnalysisStatus = 'pending' | 'analysing' | 'done' | 'failed';
@@ -17,7 +18,7 @@ export class DielineFile extends Model {
   isPrimary!: boolean;
   analysisStatus!: AnalysisStatus;
   analysisError!: string | null;
-  metrics!: Record<string, unknown> | null;
+  metrics!: DielineMetrics | null;
   preview!: unknown;
   layerMap!: Record<string, string>;
   analysisAttempts!: number;

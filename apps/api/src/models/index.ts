@@ -4,7 +4,7 @@ export { Invitation } from './Invitation';
 export { Organisation } from './Organisation';
 export { Press } from './Press';
 export { User } from './User';
-export { DieRequest } from './DieRequest';
+export { DieRequest, type RequestTies } from './DieRequest';
 export { DielineFile } from './DielineFile';
 export { RequestQuestion } from './RequestQuestion';
 export { Award } from './Award';

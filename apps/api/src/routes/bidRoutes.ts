@@ -1,10 +1,10 @@
 import { Router, type RequestHandler } from 'express';
-import { AwardInput, BidInput, DeclineInput, ReceiveInput, ShipInput } from '@kerfmark/contracts';
+import { BidInput, DeclineInput } from '@kerfmark/contracts';
 import { parse, parseId } from '../lib/parse';
 import { allow } from '../middleware/allow';
 import type { Services } from '../services';
 
-/** Bids, the award and the die's way back to the printer. */
+/** Bids: the shops' sealed bids, purchasing's comparison, and the close of bidding. */
 export function bidRoutes(services: Services, requireAuth: RequestHandler): Router {
   const router = Router();
   const shop = [requireAuth, allow({ kind: 'die_shop' })];
@@ -35,37 +35,7 @@ export function bidRoutes(services: Services, requireAuth: RequestHandler): Rout
     res.json(await services.bids.compare(req.user!, requestId(req.params.id)));
   });
   router.post('/requests/:id/close-bidding', ...printer, async (req, res) => {
-    res.json(await services.awards.closeBidding(req.user!, requestId(req.params.id)));
-  });
-  router.post('/requests/:id/award', ...printer, async (req, res) => {
-    res.json(await services.awards.award(req.user!, requestId(req.params.id), parse(AwardInput, req.body)));
-  });
-  router.post('/requests/:id/receive', ...printer, async (req, res) => {
-    res.json(await services.awards.receive(req.user!, requestId(req.params.id), parse(ReceiveInput, req.body)));
-  });
-
-  router.get('/requests/:id/ocds', ...printer, async (req, res) => {
-    res.json(await services.awards.ocds(req.user!, requestId(req.params.id)));
-  });
-
-  router.post('/requests/:id/start-production', ...shop, async (req, res) => {
-    res.json(await services.awards.startProduction(req.user!, requestId(req.params.id)));
-  });
-  router.post('/requests/:id/ship', ...shop, async (req, res) => {
-    res.json(await services.awards.ship(req.user!, requestId(req.params.id), parse(ShipInput, req.body).trackingNote));
-  });
-
-  router.get('/purchase-orders/:id/pdf', requireAuth, async (req, res) => {
-    const { fileName, pdf } = await services.awards.purchaseOrder(
-      req.user!,
-      parseId(req.params.id, 'That purchase order'),
-    );
-    res.set({
-      'Content-Type': 'application/pdf',
-      'Content-Disposition': `inline; filename="${fileName}"`,
-      'Cache-Control': 'private, no-store',
-    });
-    res.send(pdf);
+    res.json(await services.bids.closeBidding(req.user!, requestId(req.params.id)));
   });
 
   return router;

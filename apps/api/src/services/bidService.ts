@@ -1,15 +1,9 @@
-import {
-  formatInZone,
-  pricedLength,
-  type BidComparisonDto,
-  type BidDto,
-  type DielineMetrics,
-} from '@kerfmark/contracts';
-import { addWorkingDays, compareBids, sumCents } from '@kerfmark/pricing';
+import { formatInZone, type BidDto } from '@kerfmark/contracts';
+import { addWorkingDays, sumCents } from '@kerfmark/pricing';
 import type { Knex } from 'knex';
 import type { z } from 'zod';
 import type { BidInput as BidInputSchema } from '@kerfmark/contracts';
-import { assertMay, biddingOpen, factsOf, loadFacts, maySee, visibleParts } from '../access';
+import { assertMay, biddingOpen, loadFacts, maySee } from '../access';
 import type { AuthUser } from '../auth/passport';
 import { badRequest, HttpError, notFound } from '../lib/httpError';
 import { todayIn } from '../lib/todayIn';
@@ -18,16 +12,18 @@ import { recordAudit } from './auditService';
 import type { ServiceDeps } from './deps';
 import type { createPriceHistoryService } from './priceHistoryService';
 import type { createRequestService } from './requestService';
-import { readRequestGraph } from './requestGraph';
-import { primaryFile, toBidDto } from './requestViews';
+import { compareSubmittedBids } from './bidComparison';
+import { closeBiddingInside } from './closeBidding';
+import { toBidDto } from './requestViews';
 
 type ParsedBid = z.output<typeof BidInputSchema>;
 
 export function createBidService(
-  { knex, reminders }: ServiceDeps,
+  deps: ServiceDeps,
   requests: ReturnType<typeof createRequestService>,
   priceHistory: ReturnType<typeof createPriceHistoryService>,
 ) {
+  const { knex, reminders } = deps;
   const closedError = (request: DieRequest, timeZone: string) =>
     new HttpError(
       409,
@@ -232,77 +228,17 @@ export function createBidService(
     },
 
     /** The sealed bids, opened: only the printer, and only once the sealed-bid rule opens them. */
-    async compare(actor: AuthUser, requestId: number): Promise<BidComparisonDto> {
-      if (actor.orgKind !== 'printer') throw notFound('That die request');
-      // For a printer, the requests it may see are its own.
-      const request = await readRequestGraph(knex, requests.visibleQuery(actor, requestId), [
-        'award',
-        'fileSummaries',
-        'submittedBids',
-        'ties',
-      ]);
-      if (!request) throw notFound('That die request');
-      const bids = request.submittedBids ?? [];
-      if (visibleParts(actor, factsOf(request, request.ties!), new Date()).bids !== 'all') {
-        throw new HttpError(
-          404,
-          'bids_sealed',
-          'Bids stay sealed until the bid deadline, unless purchasing closes bidding early.',
-        );
-      }
-      const metrics = primaryFile(request.files)?.metrics as DielineMetrics | null | undefined;
-      const ruleLengthIn = metrics ? pricedLength(metrics.length) : null;
-      const rows = compareBids(
-        bids.map((b) => ({ ...b, bidId: b.id })),
-        { ruleLengthIn, needByDate: request.needByDate, today: todayIn(actor.timeZone) },
-      );
-      const award = request.award ?? null;
-      const fair = await priceHistory.fairPriceFor(actor.organisationId, metrics, bids[0]?.currency ?? 'USD');
-      return {
-        requestId,
-        needByDate: request.needByDate,
-        priceRuleIn: ruleLengthIn,
-        fairPrice: fair.enough
-          ? {
-              lowCents: fair.band.lowCents,
-              typicalCents: fair.band.typicalCents,
-              highCents: fair.band.highCents,
-              currency: fair.band.currency,
-            }
-          : null,
-        award: award
-          ? {
-              id: award.id,
-              bidId: award.bidId,
-              shopName: award.shop?.name ?? '',
-              totalCents: award.totalCents,
-              currency: award.currency,
-              reason: award.reason,
-              poNumber: award.poNumber,
-              awardedAt: award.awardedAt.toISOString(),
-            }
-          : null,
-        bids: rows.map((row) => ({
-          bidId: row.bid.id,
-          shopId: row.bid.shopId,
-          shopName: row.bid.shopName,
-          lines: row.bid.lines,
-          currency: row.bid.currency,
-          totalCents: row.bid.totalCents,
-          dieCents: row.bid.dieCents,
-          overLowestCents: row.overLowestCents,
-          centsPerInch: row.centsPerInch,
-          leadDays: row.bid.leadDays,
-          promisedShipDate: row.bid.promisedShipDate,
-          daysLate: row.daysLate,
-          validUntil: row.bid.validUntil,
-          expired: row.expired,
-          onTimeRate: row.bid.onTimeRate,
-          pastJobs: row.bid.pastJobs,
-          revision: row.bid.revision,
-          best: row.best,
-        })),
-      };
+    compare: (actor: AuthUser, requestId: number) =>
+      compareSubmittedBids(knex, requests, priceHistory, actor, requestId),
+
+    /** Purchasing closes bidding (early, or after the deadline before awarding). */
+    async closeBidding(actor: AuthUser, requestId: number) {
+      await knex.transaction(async (trx) => {
+        await requests.findOwned(actor, requestId, trx);
+        const request = await DieRequest.query(trx).findById(requestId).forUpdate().throwIfNotFound();
+        await closeBiddingInside(trx, deps, actor, request);
+      });
+      return requests.detail(actor, requestId);
     },
   };
 }

@@ -104,12 +104,15 @@ export function createDashboardService(_deps: ServiceDeps) {
         .where('die_requests.bidDeadline', '<', until);
       for (const r of open)
         items.push({ requestId: r.id, title: r.title, kind: 'bid_deadline', at: r.bidDeadline!.toISOString() });
-      const won = await Award.query().where({ shopId: actor.organisationId }).withGraphFetched('request');
-      for (const award of won as Array<Award & { request?: DieRequest }>) {
-        const r = award.request;
-        if (r && !r.shippedAt && ['awarded', 'in_production'].includes(r.status))
-          items.push({ requestId: r.id, title: r.title, kind: 'promised_ship', at: award.promisedShipDate });
-      }
+      const won = await DieRequest.query()
+        .castTo<Array<Pick<DieRequest, 'id' | 'title'> & { promisedShipDate: string }>>()
+        .join('awards', 'awards.requestId', 'die_requests.id')
+        .where('awards.shopId', actor.organisationId)
+        .whereNull('die_requests.shippedAt')
+        .whereIn('die_requests.status', ['awarded', 'in_production'])
+        .select('die_requests.id', 'die_requests.title', 'awards.promisedShipDate');
+      for (const r of won)
+        items.push({ requestId: r.id, title: r.title, kind: 'promised_ship', at: r.promisedShipDate });
     }
     return items.sort((a, b) => a.at.localeCompare(b.at));
   }

@@ -2,7 +2,7 @@ import { createHash, randomUUID } from 'node:crypto';
 import { DielineError, decodeInput, detectFormat, type DielineFormat } from '@kerfmark/dieline';
 import type { DielineFileDto } from '@kerfmark/contracts';
 import type { AuthUser } from '../auth/passport';
-import { conflict, HttpError, notFound } from '../lib/httpError';
+import { HttpError, notFound } from '../lib/httpError';
 import { safeFileName } from '../lib/safeFileName';
 import { DieRequest, DielineFile } from '../models';
 import { recordAudit } from './auditService';
@@ -55,11 +55,11 @@ export function createFileService(
     }
   }
 
-  /** Files change with the request: on a draft, or an open request before its deadline. */
-  async function mayEdit(actor: AuthUser, requestId: number) {
+  /** Files change with the request ('edit': a draft, or an open request before its deadline). */
+  async function mayDo(actor: AuthUser, requestId: number, action: 'edit' | 'remove-file' = 'edit') {
     const found = await loadFacts(knex, requestId);
     if (!found) throw notFound('That die request');
-    assertMay(actor, found.facts, 'edit');
+    assertMay(actor, found.facts, action);
   }
 
   async function ownedFile(actor: AuthUser, fileId: number) {
@@ -70,7 +70,7 @@ export function createFileService(
 
   return {
     async upload(actor: AuthUser, requestId: number, upload: UploadedFile): Promise<DielineFileDto> {
-      await mayEdit(actor, requestId);
+      await mayDo(actor, requestId);
       if (upload.size === 0) throw new HttpError(400, 'empty_file', 'The file is empty.');
       const format = sniff(upload);
       const fileName = safeFileName(upload.originalname);
@@ -143,7 +143,7 @@ export function createFileService(
     async makePrimary(actor: AuthUser, fileId: number): Promise<DielineFileDto> {
       const { file } = await ownedFile(actor, fileId);
       // After bidding closes the primary file is what the bids, the award and the price record rest on.
-      await mayEdit(actor, file.requestId);
+      await mayDo(actor, file.requestId);
       await knex.transaction(async (trx) => {
         await DielineFile.query(trx).patch({ isPrimary: false }).where({ requestId: file.requestId });
         await DielineFile.query(trx).patch({ isPrimary: true }).findById(file.id);
@@ -154,7 +154,7 @@ export function createFileService(
     /** Sets which rule type each layer is, and measures the file again. */
     async remap(actor: AuthUser, fileId: number, layerMap: Record<string, string>): Promise<DielineFileDto> {
       const { file } = await ownedFile(actor, fileId);
-      await mayEdit(actor, file.requestId);
+      await mayDo(actor, file.requestId);
       const updated = await file.$query().patchAndFetch({
         layerMap,
         analysisStatus: 'pending',
@@ -166,9 +166,8 @@ export function createFileService(
     },
 
     async remove(actor: AuthUser, fileId: number): Promise<void> {
-      const { file, request } = await ownedFile(actor, fileId);
-      if (request.status !== 'draft')
-        throw conflict('Files can be removed from a draft only; an open request keeps what shops have seen.');
+      const { file } = await ownedFile(actor, fileId);
+      await mayDo(actor, file.requestId, 'remove-file');
       await knex.transaction(async (trx) => {
         await DielineFile.query(trx).deleteById(file.id);
         if (file.isPrimary) {

@@ -8,6 +8,8 @@ import { createRequestService } from './requestService';
 import { createFileService } from './fileService';
 import { createBidService } from './bidService';
 import { createAwardService } from './awardService';
+import { createFulfilmentService } from './fulfilmentService';
+import { createPurchaseDocumentService } from './purchaseDocumentService';
 import { createDashboardService } from './dashboardService';
 import { createPriceHistoryService } from './priceHistoryService';
 import { createLibraryService } from './libraryService';
@@ -16,12 +18,15 @@ export function createServices(deps: ServiceDeps, limiter: LoginLimiter) {
   const requests = createRequestService(deps);
   const priceHistory = createPriceHistoryService(deps);
   const library = createLibraryService(deps, requests);
+  const purchaseDocuments = createPurchaseDocumentService(deps, requests);
   return {
     library,
     requests,
     files: createFileService(deps, requests),
     bids: createBidService(deps, requests, priceHistory),
-    awards: createAwardService(deps, requests, library, priceHistory),
+    awards: createAwardService(deps, requests, purchaseDocuments),
+    purchaseDocuments,
+    fulfilment: createFulfilmentService(deps, { requests, library, priceHistory }),
     dashboard: createDashboardService(deps),
     priceHistory,
     auth: createAuthService(deps, limiter),

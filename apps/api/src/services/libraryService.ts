@@ -142,7 +142,7 @@ export function createLibraryService({ knex }: ServiceDeps, requests: ReturnType
         pieceWidthIn: request.pieceWidthIn,
         pieceHeightIn: request.pieceHeightIn,
         ups: request.ups,
-        metrics: (primaryFile(request.files)?.metrics as DielineMetrics | null | undefined) ?? null,
+        metrics: primaryFile(request.files)?.metrics ?? null,
       };
       const candidates = ((await visible(actor).whereNot('d.condition', 'retired').limit(2000)) as Row[])
         .map((r) => toDto(r, actor))

@@ -1,3 +1,4 @@
+import { featureCount } from '@kerfmark/dieline';
 import type { ImportRowError, Page, PriceRecordDto } from '@kerfmark/contracts';
 import type { Knex } from 'knex';
 import Papa from 'papaparse';
@@ -14,6 +15,7 @@ import {
   MODEL_CHOICE_RULE,
   pricePerInch,
   priceTrend,
+  toMajorString,
   type PriceObservation,
 } from '@kerfmark/pricing';
 import { pricedLength, type DielineMetrics } from '@kerfmark/contracts';
@@ -138,7 +140,7 @@ export function createPriceHistoryService({ knex }: ServiceDeps) {
     if (!fit.enough) return fit;
     const die = {
       ruleLengthIn: pricedLength(metrics.length),
-      features: metrics.bends + metrics.curves + metrics.joints + metrics.punches,
+      features: featureCount(metrics),
     };
     if (!(die.ruleLengthIn > 0))
       return { enough: false as const, reason: 'The dieline has no priced rule to price.', needed: 0 };
@@ -208,11 +210,7 @@ export function createPriceHistoryService({ knex }: ServiceDeps) {
         .findOne({ id: requestId, organisationId: actor.organisationId })
         .withGraphFetched('files(byUpload)');
       if (!request) throw notFound('That die request');
-      return fairPriceFor(
-        actor.organisationId,
-        primaryFile(request.files)?.metrics as DielineMetrics | null | undefined,
-        currency,
-      );
+      return fairPriceFor(actor.organisationId, primaryFile(request.files)?.metrics, currency);
     },
 
     fairPriceFor,
@@ -243,10 +241,6 @@ export function createPriceHistoryService({ knex }: ServiceDeps) {
           Record<string, unknown>
         >
       ).map(toDto);
-      const major = (cents: number, currency: string) =>
-        currency === 'JPY'
-          ? String(cents)
-          : `${Math.trunc(cents / 100)}.${String(Math.abs(cents % 100)).padStart(2, '0')}`;
       return Papa.unparse({
         fields: [
           'Date',
@@ -271,8 +265,8 @@ export function createPriceHistoryService({ knex }: ServiceDeps) {
         data: rows.map((r) => [
           r.pricedOn,
           formulaSafe(r.shopName),
-          major(r.dieCents, r.currency),
-          major(r.totalCents, r.currency),
+          toMajorString(r.dieCents, r.currency),
+          toMajorString(r.totalCents, r.currency),
           r.currency,
           r.ruleLengthIn,
           r.cutIn,

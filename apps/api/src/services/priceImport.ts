@@ -7,8 +7,8 @@ import {
   type ImportPreviewDto,
   type ImportRowError,
 } from '@kerfmark/contracts';
-import { COMPLEXITY_FEATURES_PER_INCH } from '@kerfmark/dieline';
-import { parseMoneyInput } from '@kerfmark/pricing';
+import { complexityOf, type Complexity } from '@kerfmark/dieline';
+import { isCurrencyCode, parseMoneyInput } from '@kerfmark/pricing';
 import Papa from 'papaparse';
 import { badRequest } from '../lib/httpError';
 
@@ -103,12 +103,11 @@ export function readImport(
     const shopName = cell('shopName');
     if (!shopName) fail('shopName', 'Empty');
     const currency = (cell('currency') || defaultCurrency).toUpperCase();
-    if (!/^[A-Z]{3}$/.test(currency)) fail('currency', `“${currency}” is not a currency code`);
-    const digits = currency === 'JPY' ? 0 : 2;
-    const dieCents = parseMoneyInput(cell('diePrice'), digits);
+    if (!isCurrencyCode(currency)) fail('currency', `“${currency}” is not a currency code`);
+    const dieCents = isCurrencyCode(currency) ? parseMoneyInput(cell('diePrice'), currency) : null;
     if (dieCents === null || dieCents === 0) fail('diePrice', `“${cell('diePrice')}” is not a price`);
     const totalText = cell('totalPrice');
-    const totalCents = totalText ? parseMoneyInput(totalText, digits) : dieCents;
+    const totalCents = totalText && isCurrencyCode(currency) ? parseMoneyInput(totalText, currency) : dieCents;
     if (totalText && totalCents === null) fail('totalPrice', `“${totalText}” is not a price`);
     const ruleLengthIn = Number(cell('ruleLengthIn'));
     if (!(ruleLengthIn > 0) || ruleLengthIn > 100_000)
@@ -123,9 +122,7 @@ export function readImport(
     if (stated && stated !== 'simple' && stated !== 'complex')
       fail('complexity', `“${stated}” is neither simple nor complex`);
     // Without a stated class, the dieline analysis's own rule decides (features per inch of rule).
-    const perInch = (features.bends + features.curves + features.joints + features.punches) / (ruleLengthIn || 1);
-    const complexity = (stated || (perInch > COMPLEXITY_FEATURES_PER_INCH ? 'complex' : 'simple')) as
-      'simple' | 'complex';
+    const complexity = stated ? (stated as Complexity) : complexityOf(features, ruleLengthIn);
     records.push({
       pricedOn,
       shopName,

@@ -1,6 +1,7 @@
 import type { Knex } from 'knex';
 import type { QueryBuilder } from 'objection';
-import { TIES_PART, type RequestTies } from '../access/loadFacts';
+import { TIES_PART } from '../access/loadFacts';
+import type { RequestTies } from '../models';
 import { SUBMITTED_BIDS_PART, toSubmittedBid } from './submittedBids';
 import {
   DielineFile,

@@ -1,4 +1,4 @@
-import type { BidDto, DielineFileDto, DielineMetrics, DieRequestSummary, Press as PressDto } from '@kerfmark/contracts';
+import type { BidDto, DielineFileDto, DieRequestSummary, Press as PressDto } from '@kerfmark/contracts';
 import type { Bid, BidRevision, DielineFile, DieRequest, Press } from '../models';
 
 /** The file whose metrics stand for the request: the one marked primary, else the newest analysed. */
@@ -21,7 +21,7 @@ export function toFileDto(file: DielineFile): DielineFileDto {
     uploadedAt: file.uploadedAt.toISOString(),
     analysisStatus: file.analysisStatus,
     analysisError: file.analysisError,
-    metrics: file.metrics as DielineMetrics | null,
+    metrics: file.metrics,
     layerMap: file.layerMap ?? {},
   };
 }
@@ -73,7 +73,7 @@ export function toSummary(request: DieRequest): DieRequestSummary {
     pressName: request.press?.name ?? null,
     deliveryPostcode: request.deliveryPostcode,
     visibility: request.visibility,
-    metrics: file?.analysisStatus === 'done' ? (file.metrics as DielineMetrics | null) : null,
+    metrics: file?.analysisStatus === 'done' ? file.metrics : null,
     analysisStatus: file?.analysisStatus ?? null,
     createdAt: request.createdAt.toISOString(),
     updatedAt: request.updatedAt.toISOString(),

@@ -40,7 +40,7 @@ export async function insertOpenRequest(
     s3Key: `test/${randomUUID()}.dxf`,
     isPrimary: true,
     analysisStatus: 'done',
-    metrics: metrics as unknown as Record<string, unknown>,
+    metrics,
     preview,
     layerMap: {},
   });

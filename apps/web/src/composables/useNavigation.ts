@@ -1,5 +1,5 @@
 import { computed } from 'vue';
-import { appRoutes } from '../router';
+import { appRoutes } from '../router/appRoutes';
 import { canAccess } from '../router/access';
 import { useAuthStore } from '../stores/auth';
 

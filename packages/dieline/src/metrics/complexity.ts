@@ -16,9 +16,13 @@ export interface FeatureCounts {
   punches: number;
 }
 
+/** The die's feature count: bends, curves, joints and punches together. */
+export function featureCount(f: FeatureCounts): number {
+  return f.bends + f.curves + f.joints + f.punches;
+}
+
 /** See COMPLEXITY_RULE; the threshold is this product's own choice, not a trade standard. */
 export function complexityOf(f: FeatureCounts, pricedLengthIn: number): Complexity {
   if (!(pricedLengthIn > 0)) return 'simple';
-  const features = f.bends + f.curves + f.joints + f.punches;
-  return features / pricedLengthIn > COMPLEXITY_FEATURES_PER_INCH ? 'complex' : 'simple';
+  return featureCount(f) / pricedLengthIn > COMPLEXITY_FEATURES_PER_INCH ? 'complex' : 'simple';
 }

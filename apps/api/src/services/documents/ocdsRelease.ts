@@ -1,5 +1,5 @@
 import { requestStatuses, type RequestStatus } from '@kerfmark/contracts';
-import { majorUnits } from './majorUnits';
+import { majorUnits } from '@kerfmark/pricing';
 import type { OcdsInput } from './types';
 
 // Our request statuses on the closed OCDS 1.1 tender status code list.

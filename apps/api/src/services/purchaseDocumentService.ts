@@ -1,4 +1,4 @@
-import { pricedLength, type DielineMetrics } from '@kerfmark/contracts';
+import { pricedLength } from '@kerfmark/contracts';
 import { loadFacts, visibleParts } from '../access';
 import type { AuthUser } from '../auth/passport';
 import { HttpError, notFound } from '../lib/httpError';
@@ -9,8 +9,8 @@ import { purchaseOrderPdf } from './documents/purchaseOrderPdf';
 import type { createRequestService } from './requestService';
 import { primaryFile } from './requestViews';
 
-/** The award's documents: the purchase order PDF and the Open Contracting release. */
-export function createAwardDocuments(
+/** The purchase documents of an award: the purchase order PDF and the Open Contracting release. */
+export function createPurchaseDocumentService(
   { knex, storage, logger }: ServiceDeps,
   requests: ReturnType<typeof createRequestService>,
 ) {
@@ -35,7 +35,7 @@ export function createAwardDocuments(
       const bid = await Bid.query().findById(award.bidId);
       const buyer = await User.query().findById(award.awardedBy ?? 0);
       const file = primaryFile(request.files);
-      const metrics = file?.metrics as DielineMetrics | null | undefined;
+      const metrics = file?.metrics;
       const shop = award.shop as Organisation;
       const pdf = await purchaseOrderPdf({
         poNumber: award.poNumber,
