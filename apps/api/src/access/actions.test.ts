@@ -50,7 +50,13 @@ describe('request status transitions', () => {
 
 describe('the actions open now', () => {
   it('lists the buttons each user may press', () => {
-    expect(openActions(buyer, facts('draft'), NOW).sort()).toEqual(['answer', 'cancel', 'edit', 'publish']);
+    expect(openActions(buyer, facts('draft'), NOW).sort()).toEqual([
+      'answer',
+      'cancel',
+      'edit',
+      'publish',
+      'remove-file',
+    ]);
     expect(openActions(buyer, facts('open'), NOW).sort()).toEqual(['answer', 'cancel', 'edit', 'move-deadline-later']);
     expect(openActions(purchasing, facts('open'), NOW).sort()).toEqual([
       'answer',
@@ -91,5 +97,8 @@ describe('the actions open now', () => {
     expect(actionRefusal(buyer, facts('bidding_closed'), 'edit', NOW)?.status).toBe(409);
     expect(actionRefusal(otherPrinter, facts('draft'), 'edit', NOW)?.status).toBe(404);
     expect(actionRefusal(shop(20), facts('open'), 'edit', NOW)?.status).toBe(403);
+    // Files leave a draft only: an open request keeps what shops have seen.
+    expect(actionRefusal(buyer, facts('open'), 'remove-file', NOW)?.status).toBe(409);
+    expect(actionRefusal(buyer, facts('draft'), 'remove-file', NOW)).toBeNull();
   });
 });

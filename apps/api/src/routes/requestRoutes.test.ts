@@ -71,7 +71,7 @@ describe('die requests', () => {
     expect(detail.body.boardFitsPress).toBe(true);
     // Common practice: 10,000 sheets at the press's typical 4,000 an hour = 2.5 hours.
     expect(detail.body.needBy.runHours).toBeCloseTo(2.5, 10);
-    expect(detail.body.allowedActions.sort()).toEqual(['answer', 'cancel', 'edit', 'publish']);
+    expect(detail.body.allowedActions.sort()).toEqual(['answer', 'cancel', 'edit', 'publish', 'remove-file']);
 
     // A die shop cannot see a draft.
     expect((await request(app).get(`/api/requests/${draft.id}`).set(bearer(w.tokens.estimator))).status).toBe(404);

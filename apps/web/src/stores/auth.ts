@@ -28,6 +28,8 @@ export const useAuthStore = defineStore('auth', () => {
   const signedIn = computed(() => session.value !== null);
   const isPrinter = computed(() => me.value?.organisation.kind === 'printer');
   const isAdmin = computed(() => me.value?.role === 'admin');
+  /** The organisation's time zone: every date and deadline is shown in it. */
+  const timeZone = computed(() => me.value?.organisation.timeZone ?? 'UTC');
 
   function keep(result: LoginResult) {
     session.value = { token: result.token, expiresAt: result.expiresAt };
@@ -74,5 +76,5 @@ export const useAuthStore = defineStore('auth', () => {
     }
   }
 
-  return { session, me, signedIn, isPrinter, isAdmin, expiredNotice, signIn, adopt, loadMe, signOut };
+  return { session, me, signedIn, isPrinter, isAdmin, timeZone, expiredNotice, signIn, adopt, loadMe, signOut };
 });
