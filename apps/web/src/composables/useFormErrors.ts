@@ -1,4 +1,4 @@
-import { reactive } from 'vue';
+import { inject, provide, reactive, type InjectionKey } from 'vue';
 import { ApiRequestError } from '../api/client';
 
 /**
@@ -30,4 +30,17 @@ export function useFormErrors() {
   const help = (field: string) => state.fields[field];
 
   return { state, take, clear, status, help };
+}
+
+export type FormErrors = ReturnType<typeof useFormErrors>;
+const formErrorsKey: InjectionKey<FormErrors> = Symbol('form-errors');
+
+/** Gives a form's fields (FormField) the errors of the form they sit in. */
+export function provideFormErrors(errors: FormErrors): void {
+  provide(formErrorsKey, errors);
+}
+
+/** The errors of the form this field sits in; a field outside a form shows none. */
+export function injectFormErrors(): FormErrors {
+  return inject(formErrorsKey, () => useFormErrors(), true);
 }

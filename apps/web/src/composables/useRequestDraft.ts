@@ -1,7 +1,7 @@
 import type { DieRequestCreate, DieRequestDetail, Grain, RuleType, Visibility } from '@kerfmark/contracts';
 import { basisWeightToGsm, gsmToBasisWeight } from '@kerfmark/stock';
 import dayjs, { type Dayjs } from 'dayjs';
-import { reactive } from 'vue';
+import { inject, provide, reactive, type InjectionKey } from 'vue';
 
 /** The request form's state, in the units people type (caliper in points), and its conversion. */
 export interface RequestForm {
@@ -172,6 +172,18 @@ export function weightHint(value: number | undefined, unit: WeightUnit): string 
   return `= ${Math.round(gsmToBasisWeight(value, 'cover'))} lb cover, ${Math.round(gsmToBasisWeight(value, 'text'))} lb text`;
 }
 
-export function useRequestDraft() {
-  return reactive(emptyRequestForm());
+const draftKey: InjectionKey<RequestForm> = Symbol('request-draft');
+
+/** A new, empty draft, given to the form's steps below (injectRequestDraft). */
+export function useRequestDraft(): RequestForm {
+  const form = reactive(emptyRequestForm());
+  provide(draftKey, form);
+  return form;
+}
+
+/** The draft of the request form this step sits in. */
+export function injectRequestDraft(): RequestForm {
+  const form = inject(draftKey);
+  if (!form) throw new Error('A request form step must sit inside the request form');
+  return form;
 }
