@@ -1,70 +1,28 @@
 import { featureCount } from '@kerfmark/dieline';
 import type { ImportRowError, Page, PriceRecordDto } from '@kerfmark/contracts';
-import type { Knex } from 'knex';
-import Papa from 'papaparse';
-import type { z } from 'zod';
-import type { PriceHistoryQuery as Query } from '@kerfmark/contracts';
 import type { AuthUser } from '../auth/passport';
 import { HttpError } from '../lib/httpError';
 import { recordAudit } from './auditService';
 import type { ServiceDeps } from './deps';
 import { previewImport, readImport } from './priceImport';
+import { priceHistoryCsv } from './priceHistoryCsv';
+import { filteredRecords, toPriceRecordDto, type PriceFilters as Filters } from './priceRecordQuery';
 import {
   fairPriceBand,
   fitPrice,
   MODEL_CHOICE_RULE,
   pricePerInch,
   priceTrend,
-  toMajorString,
   type PriceObservation,
 } from '@kerfmark/pricing';
 import { pricedLength, type DielineMetrics } from '@kerfmark/contracts';
 import { DieRequest } from '../models';
 import { notFound } from '../lib/httpError';
 import { primaryFile } from './requestViews';
-import { formulaSafe } from '../lib/formulaSafe';
 
 /** The fit works on at most this many records (a pseudo-random sample past it): enough for stable estimates. */
 export const FIT_SAMPLE = 5000;
 const CHART_POINTS = 1500;
-
-type Filters = z.output<typeof Query>;
-
-/** The printer's own price records, narrowed by the filters of the price history view. */
-export function filteredRecords(knex: Knex, organisationId: number, f: Partial<Filters>): Knex.QueryBuilder {
-  const q = knex('priceRecords').where('priceRecords.organisationId', organisationId);
-  if (f.from) q.where('pricedOn', '>=', f.from);
-  if (f.to) q.where('pricedOn', '<=', f.to);
-  if (f.complexity) q.where('complexity', f.complexity);
-  if (f.shop) q.where('shopName', f.shop);
-  if (f.minIn !== undefined) q.where('ruleLengthIn', '>=', f.minIn);
-  if (f.maxIn !== undefined) q.where('ruleLengthIn', '<=', f.maxIn);
-  if (f.currency) q.where('currency', f.currency);
-  if (f.ruleType) q.where(`${f.ruleType}In`, '>', 0);
-  return q;
-}
-
-const toDto = (r: Record<string, unknown>): PriceRecordDto => ({
-  id: Number(r.id),
-  pricedOn: String(r.pricedOn),
-  shopName: String(r.shopName),
-  requestId: (r.requestId as number | null) ?? null,
-  totalCents: Number(r.totalCents),
-  dieCents: Number(r.dieCents),
-  currency: String(r.currency),
-  ruleLengthIn: Number(r.ruleLengthIn),
-  cutIn: Number(r.cutIn),
-  creaseIn: Number(r.creaseIn),
-  perfIn: Number(r.perfIn),
-  kissIn: Number(r.kissIn),
-  bends: Number(r.bends),
-  curves: Number(r.curves),
-  joints: Number(r.joints),
-  punches: Number(r.punches),
-  boardAreaSqIn: Number(r.boardAreaSqIn),
-  complexity: r.complexity as 'simple' | 'complex',
-  source: r.source as 'award' | 'import',
-});
 
 /** Fits are kept this long per organisation and currency: the history changes slowly. */
 const FIT_CACHE_MS = 5 * 60_000;
@@ -227,7 +185,7 @@ export function createPriceHistoryService({ knex }: ServiceDeps) {
         filteredRecords(knex, actor.organisationId, f).count('* as count'),
       ]);
       return {
-        items: (rows as Array<Record<string, unknown>>).map(toDto),
+        items: (rows as Array<Record<string, unknown>>).map(toPriceRecordDto),
         total: Number(count),
         page: f.page,
         pageSize: f.pageSize,
@@ -235,54 +193,7 @@ export function createPriceHistoryService({ knex }: ServiceDeps) {
     },
 
     /** The filtered history as CSV, money in major units (as people read it), dates as YYYY-MM-DD. */
-    async csv(actor: AuthUser, f: Filters): Promise<string> {
-      const rows = (
-        (await filteredRecords(knex, actor.organisationId, f).orderBy('pricedOn').limit(200_000)) as Array<
-          Record<string, unknown>
-        >
-      ).map(toDto);
-      return Papa.unparse({
-        fields: [
-          'Date',
-          'Die shop',
-          'Die price',
-          'Total price',
-          'Currency',
-          'Rule length (in)',
-          'Cutting (in)',
-          'Creasing (in)',
-          'Perforating (in)',
-          'Kiss cut (in)',
-          'Bends',
-          'Curves',
-          'Joints',
-          'Punches',
-          'Board area (sq in)',
-          'Complexity',
-          'Source',
-        ],
-        // Text cells are formula-safe (an imported shop name may start with =); amounts stay numbers.
-        data: rows.map((r) => [
-          r.pricedOn,
-          formulaSafe(r.shopName),
-          toMajorString(r.dieCents, r.currency),
-          toMajorString(r.totalCents, r.currency),
-          r.currency,
-          r.ruleLengthIn,
-          r.cutIn,
-          r.creaseIn,
-          r.perfIn,
-          r.kissIn,
-          r.bends,
-          r.curves,
-          r.joints,
-          r.punches,
-          r.boardAreaSqIn,
-          r.complexity,
-          formulaSafe(r.source),
-        ]),
-      });
-    },
+    csv: (actor: AuthUser, f: Filters) => priceHistoryCsv(knex, actor.organisationId, f),
 
     preview: (text: string) => previewImport(text),
 
