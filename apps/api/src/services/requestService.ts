@@ -3,14 +3,10 @@ import {
   PublishReady,
   type DieRequestCreate,
   type DieRequestDetail,
-  type DieRequestSummary,
   type DieRequestUpdate,
-  type Page,
   MarketplaceQuery,
   RequestListQuery,
-  type RequestQuestionDto,
   type BidDto,
-  formatInZone,
 } from '@kerfmark/contracts';
 import type { Knex } from 'knex';
 import {
@@ -20,7 +16,6 @@ import {
   loadFacts,
   presentToOwner,
   presentToShop,
-  questionDto,
   refuse,
   sealOnCancel,
   visibleTo,
@@ -29,17 +24,16 @@ import {
 import type { AuthUser } from '../auth/passport';
 import { badRequest, HttpError, notFound } from '../lib/httpError';
 import { parse } from '../lib/parse';
-import { Bid, BidRevision, DieRequest, Organisation, Press, RequestQuestion } from '../models';
-import { distanceMiles } from '../lib/distanceMiles';
-import { knownPostcodes, postcodeCentre } from '../lib/postcodeCentre';
+import { Bid, BidRevision, DieRequest, Organisation, Press } from '../models';
 import { recordAudit } from './auditService';
 import type { ServiceDeps } from './deps';
 import { transitionRequest } from './requestStatus';
-import { boardPage } from './boardPage';
 import { readRequestGraph } from './requestGraph';
-import { toBidDto, toSummary } from './requestViews';
+import { toBidDto } from './requestViews';
 import { tellBidders } from './tellBidders';
-import { containsPattern } from '../lib/containsPattern';
+import { tellOfDeadline } from './tellOfDeadline';
+import { boardOfOpenRequests, listOwnRequests } from './requestLists';
+import { answerQuestion, askQuestion } from './requestQuestions';
 
 async function bidDto(bid: Bid): Promise<BidDto> {
   return toBidDto(bid, await BidRevision.query().where({ bidId: bid.id }).orderBy('id'));
@@ -105,23 +99,6 @@ export function createRequestService(deps: ServiceDeps) {
     }
   }
 
-  /** Every bidder hears of a new deadline, in its own time zone. */
-  async function tellOfDeadline(trx: Knex.Transaction, request: DieRequest, to: Date) {
-    const zones = new Map(
-      (
-        (await trx('organisations')
-          .whereIn('id', trx('bids').where({ requestId: request.id }).select('shopId'))
-          .select('id', 'timeZone')) as Array<{ id: number; timeZone: string }>
-      ).map((o) => [o.id, o.timeZone]),
-    );
-    await tellBidders(trx, deps, request.id, (shopId) => ({
-      kind: 'deadline_changed',
-      title: `New bid deadline: ${request.title}`,
-      body: `The bid deadline on "${request.title}" is now ${formatInZone(to, zones.get(shopId) ?? 'UTC')}. You can revise or withdraw your bid until then.`,
-      link: `/requests/${request.id}`,
-    }));
-  }
-
   async function detail(actor: AuthUser, id: number): Promise<DieRequestDetail> {
     const isOwner = actor.orgKind === 'printer';
     const [request, ownBid] = await Promise.all([
@@ -151,41 +128,9 @@ export function createRequestService(deps: ServiceDeps) {
     factsFor,
     detail,
 
-    async list(actor: AuthUser, q: z.output<typeof RequestListQuery>): Promise<Page<DieRequestSummary>> {
-      const base = DieRequest.query().where('die_requests.organisationId', actor.organisationId);
-      if (q.status) base.where('die_requests.status', q.status);
-      if (q.pressId) base.where('die_requests.pressId', q.pressId);
-      if (q.needByFrom) base.where('die_requests.needByDate', '>=', q.needByFrom);
-      if (q.needByTo) base.where('die_requests.needByDate', '<=', q.needByTo);
-      if (q.q) {
-        const like = containsPattern(q.q);
-        base.where((b) => b.whereILike('die_requests.title', like).orWhereILike('die_requests.jobReference', like));
-      }
-      const desc = q.sort.startsWith('-');
-      const column = q.sort.replace('-', '');
-      const result = await base
-        .withGraphFetched('[organisation, press, files(byUpload)]')
-        .orderByRaw(`?? ${desc ? 'DESC' : 'ASC'} NULLS LAST, die_requests.id DESC`, [
-          `die_requests.${column.replace(/[A-Z]/g, (c) => `_${c.toLowerCase()}`)}`,
-        ])
-        .page(q.page - 1, q.pageSize);
-      return { items: result.results.map(toSummary), total: result.total, page: q.page, pageSize: q.pageSize };
-    },
-
+    list: (actor: AuthUser, q: z.output<typeof RequestListQuery>) => listOwnRequests(actor, q),
     /** The board of open requests a die shop may bid on: filtered, sorted and paged by the database. */
-    async marketplace(actor: AuthUser, q: z.output<typeof MarketplaceQuery>): Promise<Page<DieRequestSummary>> {
-      const from = postcodeCentre(actor.orgPostcode);
-      const miles = from
-        ? knownPostcodes().map(({ postcode, centre }) => ({ postcode, miles: distanceMiles(from, centre) }))
-        : [];
-      const { rows, total } = await boardPage(knex, actor.organisationId, q, miles);
-      return {
-        items: rows.map(({ request, ...row }) => ({ ...toSummary(request), ...row })),
-        total,
-        page: q.page,
-        pageSize: q.pageSize,
-      };
-    },
+    marketplace: (actor: AuthUser, q: z.output<typeof MarketplaceQuery>) => boardOfOpenRequests(knex, actor, q),
 
     async create(actor: AuthUser, input: DieRequestCreate): Promise<DieRequestDetail> {
       const { invitedShopIds = [], ...fields } = input;
@@ -244,7 +189,7 @@ export function createRequestService(deps: ServiceDeps) {
           },
         });
         if (movesDeadline && request.status === 'open')
-          await tellOfDeadline(trx, request, new Date(patch.bidDeadline!));
+          await tellOfDeadline(trx, deps, request, new Date(patch.bidDeadline!));
         trx.executionPromise.then(() => reminders.plan(id)).catch(() => undefined);
       });
       return detail(actor, id);
@@ -293,25 +238,10 @@ export function createRequestService(deps: ServiceDeps) {
       return detail(actor, id);
     },
 
-    async ask(actor: AuthUser, id: number, question: string): Promise<RequestQuestionDto> {
-      const found = await knex.transaction((trx) => loadFacts(trx, id));
-      if (!found) throw notFound('That die request');
-      assertMay(actor, found.facts, 'ask');
-      const row = await RequestQuestion.query().insertAndFetch({
-        requestId: id,
-        shopId: actor.organisationId,
-        askedBy: actor.id,
-        question,
-      });
-      return questionDto(actor, row);
-    },
-
-    async answer(actor: AuthUser, id: number, questionId: number, answer: string): Promise<RequestQuestionDto> {
+    ask: (actor: AuthUser, id: number, question: string) => askQuestion(knex, actor, id, question),
+    answer: async (actor: AuthUser, id: number, questionId: number, answer: string) => {
       await findOwned(actor, id);
-      const question = await RequestQuestion.query().findOne({ id: questionId, requestId: id });
-      if (!question) throw notFound('That question');
-      const row = await question.$query().patchAndFetch({ answer, answeredBy: actor.id, answeredAt: new Date() });
-      return questionDto(actor, row);
+      return answerQuestion(actor, id, questionId, answer);
     },
   };
 }

@@ -1,0 +1,54 @@
+import type { DieRequestSummary, MarketplaceQuery, Page, RequestListQuery } from '@kerfmark/contracts';
+import type { Knex } from 'knex';
+import type { z } from 'zod';
+import type { AuthUser } from '../auth/passport';
+import { containsPattern } from '../lib/containsPattern';
+import { distanceMiles } from '../lib/distanceMiles';
+import { knownPostcodes, postcodeCentre } from '../lib/postcodeCentre';
+import { DieRequest } from '../models';
+import { boardPage } from './boardPage';
+import { toSummary } from './requestViews';
+
+/** The printer's own requests: filtered, sorted and paged. */
+export async function listOwnRequests(
+  actor: AuthUser,
+  q: z.output<typeof RequestListQuery>,
+): Promise<Page<DieRequestSummary>> {
+  const base = DieRequest.query().where('die_requests.organisationId', actor.organisationId);
+  if (q.status) base.where('die_requests.status', q.status);
+  if (q.pressId) base.where('die_requests.pressId', q.pressId);
+  if (q.needByFrom) base.where('die_requests.needByDate', '>=', q.needByFrom);
+  if (q.needByTo) base.where('die_requests.needByDate', '<=', q.needByTo);
+  if (q.q) {
+    const like = containsPattern(q.q);
+    base.where((b) => b.whereILike('die_requests.title', like).orWhereILike('die_requests.jobReference', like));
+  }
+  const desc = q.sort.startsWith('-');
+  const column = q.sort.replace('-', '');
+  const result = await base
+    .withGraphFetched('[organisation, press, files(byUpload)]')
+    .orderByRaw(`?? ${desc ? 'DESC' : 'ASC'} NULLS LAST, die_requests.id DESC`, [
+      `die_requests.${column.replace(/[A-Z]/g, (c) => `_${c.toLowerCase()}`)}`,
+    ])
+    .page(q.page - 1, q.pageSize);
+  return { items: result.results.map(toSummary), total: result.total, page: q.page, pageSize: q.pageSize };
+}
+
+/** The board of open requests a die shop may bid on: filtered, sorted and paged by the database. */
+export async function boardOfOpenRequests(
+  knex: Knex,
+  actor: AuthUser,
+  q: z.output<typeof MarketplaceQuery>,
+): Promise<Page<DieRequestSummary>> {
+  const from = postcodeCentre(actor.orgPostcode);
+  const miles = from
+    ? knownPostcodes().map(({ postcode, centre }) => ({ postcode, miles: distanceMiles(from, centre) }))
+    : [];
+  const { rows, total } = await boardPage(knex, actor.organisationId, q, miles);
+  return {
+    items: rows.map(({ request, ...row }) => ({ ...toSummary(request), ...row })),
+    total,
+    page: q.page,
+    pageSize: q.pageSize,
+  };
+}
