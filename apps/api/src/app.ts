@@ -70,7 +70,7 @@ export function createApp(deps: AppDeps): Express {
   api.use('/presses', pressRoutes(services, requireAuth));
   api.use('/requests', requestRoutes(services, requireAuth, config.maxUploadBytes));
   api.use('/files', fileRoutes(services, requireAuth));
-  api.use('/notifications', notificationRoutes(requireAuth));
+  api.use('/notifications', notificationRoutes(services, requireAuth));
   api.use('/price-history', priceHistoryRoutes(services, requireAuth));
   api.use(bidRoutes(services, requireAuth));
   api.use(awardRoutes(services, requireAuth));

@@ -1,3 +1,4 @@
+import type { NotificationKind } from './notifications';
 import type { BestColumn } from '@kerfmark/pricing';
 import { z } from 'zod';
 import { calendarDate } from './dateFields';
@@ -138,7 +139,7 @@ export interface AwardDto {
 
 export interface NotificationDto {
   id: number;
-  kind: string;
+  kind: NotificationKind;
   title: string;
   body: string;
   link: string | null;

@@ -1,3 +1,4 @@
+import type { Role } from './roles';
 import { STOCK_KINDS } from '@kerfmark/stock';
 import { z } from 'zod';
 import { calendarDate, instant } from './dateFields';
@@ -63,7 +64,7 @@ export interface Transition {
   to: RequestStatus;
   action: StatusAction;
   actor: TransitionActor;
-  roles: readonly string[];
+  roles: readonly Role[];
 }
 
 // The only moves a request can make. The API enforces this table in one place.

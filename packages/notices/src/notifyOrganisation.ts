@@ -1,8 +1,9 @@
+import type { NotificationKind } from '@kerfmark/contracts';
 import type { Knex } from 'knex';
 import { emailLayout } from './emailLayout';
 
 export interface Notice {
-  kind: string;
+  kind: NotificationKind;
   title: string;
   body: string;
   /** A path in the app, e.g. /requests/12; e-mails carry it as a full link. */

@@ -1,3 +1,4 @@
+import type { NotificationKind } from '@kerfmark/contracts';
 import { Model } from 'objection';
 
 export class Notification extends Model {
@@ -5,7 +6,7 @@ export class Notification extends Model {
 
   id!: number;
   userId!: number;
-  kind!: string;
+  kind!: NotificationKind;
   title!: string;
   body!: string;
   link!: string | null;

@@ -2,7 +2,6 @@ import { MarketplaceQuery } from '@kerfmark/contracts';
 import { Router, type RequestHandler } from 'express';
 import { parse } from '../lib/parse';
 import { allow } from '../middleware/allow';
-import { Organisation } from '../models';
 import type { Services } from '../services';
 
 /** The die shops' side: open requests to bid on; and the printers' list of shops to invite. */
@@ -13,11 +12,7 @@ export function marketplaceRoutes(services: Services, requireAuth: RequestHandle
   });
 
   router.get('/die-shops', requireAuth, allow({ kind: 'printer' }), async (_req, res) => {
-    const shops = await Organisation.query()
-      .where({ kind: 'die_shop' })
-      .select('id', 'name', 'postcode')
-      .orderBy('name');
-    res.json(shops.map((s) => ({ id: s.id, name: s.name, postcode: s.postcode })));
+    res.json(await services.requests.dieShops());
   });
 
   return router;

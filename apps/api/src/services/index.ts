@@ -11,6 +11,8 @@ import { createAwardService } from './awardService';
 import { createFulfilmentService } from './fulfilmentService';
 import { createPurchaseDocumentService } from './purchaseDocumentService';
 import { createDashboardService } from './dashboardService';
+import { createInboxService } from './inboxService';
+import { createPreferenceService } from './preferenceService';
 import { createPriceHistoryService } from './priceHistoryService';
 import { createLibraryService } from './libraryService';
 
@@ -33,6 +35,8 @@ export function createServices(deps: ServiceDeps, limiter: LoginLimiter) {
     users: createUserService(deps),
     invitations: createInvitationService(deps),
     presses: createPressService(deps),
+    inbox: createInboxService(),
+    preferences: createPreferenceService(),
   };
 }
 

@@ -5,7 +5,7 @@ import type { AuthUser } from '../auth/passport';
 import { containsPattern } from '../lib/containsPattern';
 import { distanceMiles } from '../lib/distanceMiles';
 import { knownPostcodes, postcodeCentre } from '../lib/postcodeCentre';
-import { DieRequest } from '../models';
+import { DieRequest, Organisation } from '../models';
 import { boardPage } from './boardPage';
 import { toSummary } from './requestViews';
 
@@ -51,4 +51,10 @@ export async function boardOfOpenRequests(
     page: q.page,
     pageSize: q.pageSize,
   };
+}
+
+/** Every die shop on Kerfmark, by name: the printer's choice of shops to invite. */
+export async function dieShops(): Promise<Array<{ id: number; name: string; postcode: string | null }>> {
+  const shops = await Organisation.query().where({ kind: 'die_shop' }).select('id', 'name', 'postcode').orderBy('name');
+  return shops.map((s) => ({ id: s.id, name: s.name, postcode: s.postcode }));
 }

@@ -32,7 +32,7 @@ import { readRequestGraph } from './requestGraph';
 import { toBidDto } from './requestViews';
 import { tellBidders } from './tellBidders';
 import { tellOfDeadline } from './tellOfDeadline';
-import { boardOfOpenRequests, listOwnRequests } from './requestLists';
+import { boardOfOpenRequests, dieShops, listOwnRequests } from './requestLists';
 import { answerQuestion, askQuestion } from './requestQuestions';
 
 async function bidDto(bid: Bid): Promise<BidDto> {
@@ -129,6 +129,7 @@ export function createRequestService(deps: ServiceDeps) {
     detail,
 
     list: (actor: AuthUser, q: z.output<typeof RequestListQuery>) => listOwnRequests(actor, q),
+    dieShops,
     /** The board of open requests a die shop may bid on: filtered, sorted and paged by the database. */
     marketplace: (actor: AuthUser, q: z.output<typeof MarketplaceQuery>) => boardOfOpenRequests(knex, actor, q),
 

@@ -1,0 +1,53 @@
+import type { Knex } from 'knex';
+import { addWorkingDays } from '@kerfmark/pricing';
+import { atDays } from './demoRequests';
+
+/** Open bids from two shops on the demo tuck-end carton, so a board and a comparison have content. */
+const demoBids = [
+  { jobReference: 'LPC-24117', shop: 'Okafor Steel Rule Dies', dieCents: 112_000, leadDays: 6 },
+  { jobReference: 'LPC-24117', shop: 'Cedar Bend Die Works', dieCents: 104_500, leadDays: 8 },
+];
+
+/** The open bids, sealed until the tuck-end carton's deadline. */
+export async function seedOpenBids(knex: Knex): Promise<void> {
+  for (const demo of demoBids) {
+    const request = await knex('dieRequests').where({ jobReference: demo.jobReference }).first();
+    const shop = await knex('organisations').where({ name: demo.shop }).first();
+    const estimator = await knex('users').where({ organisationId: shop.id, role: 'estimator' }).first();
+    const lines = [
+      { kind: 'die', description: 'Steel-rule die on 5/8 in board', amountCents: demo.dieCents },
+      { kind: 'counter', description: 'Phenolic counter', amountCents: 18_000 },
+      { kind: 'shipping', description: 'Ground', amountCents: 4_500 },
+    ];
+    const total = demo.dieCents + 22_500;
+    const shipDate = addWorkingDays(new Date().toISOString().slice(0, 10), demo.leadDays);
+    const validUntil = atDays(45).toISOString().slice(0, 10);
+    const [{ id: bidId }] = await knex('bids')
+      .insert({
+        requestId: request.id,
+        shopId: shop.id,
+        status: 'submitted',
+        revision: 1,
+        lines: JSON.stringify(lines),
+        currency: 'USD',
+        totalCents: total,
+        dieCents: demo.dieCents,
+        leadDays: demo.leadDays,
+        promisedShipDate: shipDate,
+        validUntil,
+      })
+      .returning('id');
+    await knex('bidRevisions').insert({
+      bidId,
+      revision: 1,
+      action: 'submitted',
+      lines: JSON.stringify(lines),
+      currency: 'USD',
+      totalCents: total,
+      leadDays: demo.leadDays,
+      promisedShipDate: shipDate,
+      validUntil,
+      createdBy: estimator.id,
+    });
+  }
+}

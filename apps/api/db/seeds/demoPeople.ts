@@ -1,0 +1,114 @@
+import type { OrgKind, Role } from '@kerfmark/contracts';
+
+// The demo scenario's organisations, people and presses: invented, for the demo only.
+
+export const DEMO_PASSWORD = 'kerfmark-demo-2026';
+
+interface DemoOrg {
+  name: string;
+  kind: OrgKind;
+  timeZone: string;
+  postcode: string;
+  users: Array<{ email: string; name: string; role: Role }>;
+  presses?: Array<{
+    name: string;
+    kind: 'platen' | 'flatbed' | 'rotary';
+    maxSheetWidthIn: number;
+    maxSheetLengthIn: number;
+    typicalSpeedSph: number;
+    maxSpeedSph: number;
+  }>;
+}
+
+// Press sizes and speeds follow common practice: a small platen takes about 22 × 30 in,
+// die-cutters run about 2,000 to 5,000 sheets an hour, up to about 7,800 on a fast one.
+export const demoOrganisations: DemoOrg[] = [
+  {
+    name: 'Larkspur Press & Carton',
+    kind: 'printer',
+    timeZone: 'America/Chicago',
+    postcode: '60614',
+    users: [
+      { email: 'maya@larkspur.example', name: 'Maya Lindqvist', role: 'buyer' },
+      { email: 'daniel@larkspur.example', name: 'Daniel Osei', role: 'purchasing' },
+      { email: 'priya@larkspur.example', name: 'Priya Raman', role: 'admin' },
+    ],
+    presses: [
+      {
+        name: 'Platen 1 (22 × 30)',
+        kind: 'platen',
+        maxSheetWidthIn: 22,
+        maxSheetLengthIn: 30,
+        typicalSpeedSph: 4000,
+        maxSpeedSph: 5500,
+      },
+      {
+        name: 'Flatbed A (28 × 40)',
+        kind: 'flatbed',
+        maxSheetWidthIn: 28,
+        maxSheetLengthIn: 40,
+        typicalSpeedSph: 5000,
+        maxSpeedSph: 7800,
+      },
+      {
+        name: 'Old platen (20 × 28)',
+        kind: 'platen',
+        maxSheetWidthIn: 20,
+        maxSheetLengthIn: 28,
+        typicalSpeedSph: 2000,
+        maxSpeedSph: 2800,
+      },
+    ],
+  },
+  {
+    name: 'Tidewater Print Finishing',
+    kind: 'printer',
+    timeZone: 'America/New_York',
+    postcode: '23510',
+    users: [
+      { email: 'tomas@tidewater.example', name: 'Tomás Herrera', role: 'buyer' },
+      { email: 'june@tidewater.example', name: 'June Park', role: 'purchasing' },
+      { email: 'ruth@tidewater.example', name: 'Ruth Adeyemi', role: 'admin' },
+    ],
+    presses: [
+      {
+        name: 'Flatbed 1 (23 × 29)',
+        kind: 'flatbed',
+        maxSheetWidthIn: 23,
+        maxSheetLengthIn: 29,
+        typicalSpeedSph: 4500,
+        maxSpeedSph: 6000,
+      },
+    ],
+  },
+  {
+    name: 'Brightline Rule & Die',
+    kind: 'die_shop',
+    timeZone: 'America/Chicago',
+    postcode: '60148',
+    users: [
+      { email: 'grace@brightline.example', name: 'Grace Whitfield', role: 'estimator' },
+      { email: 'ken@brightline.example', name: 'Ken Abiodun', role: 'admin' },
+    ],
+  },
+  {
+    name: 'Okafor Steel Rule Dies',
+    kind: 'die_shop',
+    timeZone: 'America/Indiana/Indianapolis',
+    postcode: '46204',
+    users: [
+      { email: 'chidi@okafor.example', name: 'Chidi Okafor', role: 'estimator' },
+      { email: 'ada@okafor.example', name: 'Ada Okafor', role: 'admin' },
+    ],
+  },
+  {
+    name: 'Cedar Bend Die Works',
+    kind: 'die_shop',
+    timeZone: 'America/Chicago',
+    postcode: '53202',
+    users: [
+      { email: 'lena@cedarbend.example', name: 'Lena Marsh', role: 'estimator' },
+      { email: 'oscar@cedarbend.example', name: 'Oscar Lind', role: 'admin' },
+    ],
+  },
+];

@@ -1,0 +1,198 @@
+// The demo's die requests, each with its own dieline, measured as an upload would be.
+import { createHash } from 'node:crypto';
+import type { Knex } from 'knex';
+import { analyseDieline } from '@kerfmark/dieline';
+import type { Storage } from '@kerfmark/storage';
+import { doorHanger, labelSheet, tuckEndCarton } from './demoDielines';
+
+interface DemoRequest {
+  org: string;
+  jobReference: string;
+  title: string;
+  status: 'draft' | 'open';
+  press: string;
+  fields: Record<string, unknown>;
+  deadlineDays: number;
+  needByDays: number;
+  invited?: string[];
+  dieline: { name: string; content: () => string };
+}
+
+export const demoRequests: DemoRequest[] = [
+  {
+    org: 'Larkspur Press & Carton',
+    jobReference: 'LPC-24117',
+    title: 'Straight tuck-end carton, 2 up',
+    status: 'open',
+    press: 'Platen 1 (22 × 30)',
+    fields: {
+      quantity: 1,
+      ups: 2,
+      pieceWidthIn: 2.5,
+      pieceHeightIn: 6,
+      stockName: '18 pt C1S SBS board',
+      caliperIn: 0.018,
+      stockWeightGsm: 300,
+      grain: 'long',
+      runSheets: 12000,
+      ruleTypes: ['cut', 'crease'],
+      counterWanted: true,
+      deliveryAddress: '2200 N Clybourn Ave, Chicago IL',
+      deliveryPostcode: '60614',
+      notes: 'Nicks at the glue flap corners only, please.',
+    },
+    deadlineDays: 5,
+    needByDays: 21,
+    dieline: { name: 'tuck-end-carton-2up.dxf', content: tuckEndCarton },
+  },
+  {
+    org: 'Larkspur Press & Carton',
+    jobReference: 'LPC-24130',
+    title: 'Rounded label sheet, 12 up, kiss cut',
+    status: 'open',
+    press: 'Platen 1 (22 × 30)',
+    fields: {
+      quantity: 2,
+      ups: 12,
+      pieceWidthIn: 3.5,
+      pieceHeightIn: 1.5,
+      stockName: '60 lb semi-gloss label stock',
+      caliperIn: 0.006,
+      runSheets: 5000,
+      ruleTypes: ['cut', 'kiss'],
+      ejectionRubberWanted: false,
+      deliveryPostcode: '60614',
+    },
+    deadlineDays: 2,
+    // Tight on purpose: five working days of lead time and the run do not fit in six days.
+    needByDays: 6,
+    invited: ['Brightline Rule & Die', 'Okafor Steel Rule Dies'],
+    dieline: { name: 'label-sheet-12up.dxf', content: labelSheet },
+  },
+  {
+    org: 'Larkspur Press & Carton',
+    jobReference: 'LPC-24152',
+    title: 'Door hanger with perforated coupon',
+    status: 'draft',
+    press: 'Old platen (20 × 28)',
+    fields: {
+      quantity: 1,
+      ups: 1,
+      pieceWidthIn: 4.25,
+      pieceHeightIn: 12,
+      stockName: '14 pt C2S cover',
+      caliperIn: 0.014,
+      runSheets: 20000,
+      ruleTypes: ['cut', 'perf'],
+      deliveryPostcode: '60614',
+    },
+    deadlineDays: 6,
+    needByDays: 12,
+    dieline: { name: 'door-hanger.dxf', content: doorHanger },
+  },
+  {
+    org: 'Tidewater Print Finishing',
+    jobReference: 'TPF-0871',
+    title: 'Retail carton for tea, 2 up',
+    status: 'open',
+    press: 'Flatbed 1 (23 × 29)',
+    fields: {
+      quantity: 1,
+      ups: 2,
+      stockName: '20 pt SBS',
+      caliperIn: 0.02,
+      runSheets: 30000,
+      ruleTypes: ['cut', 'crease'],
+      deliveryPostcode: '23510',
+    },
+    deadlineDays: 4,
+    needByDays: 25,
+    dieline: { name: 'tea-carton.dxf', content: tuckEndCarton },
+  },
+];
+
+export const atDays = (days: number) => new Date(Date.now() + days * 86_400_000);
+
+/** A demo dieline stored in S3 and recorded as the request's measured primary file. */
+export async function storeDemoDieline(
+  knex: Knex,
+  storage: Storage,
+  file: {
+    requestId: number;
+    uploadedBy: number;
+    fileName: string;
+    content: string;
+    metrics: unknown;
+    preview: unknown;
+    uploadedAt?: Date;
+  },
+): Promise<void> {
+  const s3Key = `requests/${file.requestId}/demo/${file.fileName}`;
+  await storage.put(s3Key, new TextEncoder().encode(file.content), 'application/dxf');
+  await knex('dielineFiles').insert({
+    requestId: file.requestId,
+    uploadedBy: file.uploadedBy,
+    fileName: file.fileName,
+    format: 'dxf',
+    contentType: 'application/dxf',
+    byteSize: Buffer.byteLength(file.content),
+    sha256: createHash('sha256').update(file.content).digest('hex'),
+    s3Key,
+    isPrimary: true,
+    analysisStatus: 'done',
+    metrics: JSON.stringify(file.metrics),
+    preview: JSON.stringify(file.preview),
+    analysedAt: file.uploadedAt ?? new Date(),
+    uploadedAt: file.uploadedAt ?? new Date(),
+  });
+}
+
+/** Demo requests with their dielines stored in S3 and measured, unless they are there already. */
+export async function seedRequests(knex: Knex, storage: Storage): Promise<void> {
+  for (const demo of demoRequests) {
+    const org = await knex('organisations').where({ name: demo.org }).first();
+    if (await knex('dieRequests').where({ organisationId: org.id, jobReference: demo.jobReference }).first()) continue;
+    const buyer = await knex('users').where({ organisationId: org.id, role: 'buyer' }).first();
+    const press = await knex('presses').where({ organisationId: org.id, name: demo.press }).first();
+    const content = demo.dieline.content();
+    const { metrics, preview } = analyseDieline(content, {
+      fileName: demo.dieline.name,
+      press: { widthIn: Number(press.maxSheetWidthIn), lengthIn: Number(press.maxSheetLengthIn) },
+    });
+    const [{ id }] = await knex('dieRequests')
+      .insert({
+        ...demo.fields,
+        organisationId: org.id,
+        createdBy: buyer.id,
+        title: demo.title,
+        jobReference: demo.jobReference,
+        status: demo.status,
+        pressId: press.id,
+        needByDate: atDays(demo.needByDays).toISOString().slice(0, 10),
+        bidDeadline: atDays(demo.deadlineDays),
+        visibility: demo.invited ? 'invited' : 'public',
+        publishedAt: demo.status === 'open' ? new Date() : null,
+      })
+      .returning('id');
+    for (const shopName of demo.invited ?? []) {
+      const shop = await knex('organisations').where({ name: shopName }).first();
+      await knex('requestInvitations').insert({ requestId: id, shopId: shop.id });
+    }
+    await storeDemoDieline(knex, storage, {
+      requestId: id,
+      uploadedBy: buyer.id,
+      fileName: demo.dieline.name,
+      content,
+      metrics,
+      preview,
+    });
+    await knex('auditLog').insert({
+      organisationId: org.id,
+      actorUserId: buyer.id,
+      entity: 'die_request',
+      entityId: id,
+      action: 'created',
+      detail: JSON.stringify({ demo: true }),
+    });
+  }
+}
