@@ -2,6 +2,7 @@ import { randomUUID } from 'node:crypto';
 import { setTimeout as sleep } from 'node:timers/promises';
 import type { Storage } from '@kerfmark/storage';
 import { afterAll, describe, expect, it } from 'vitest';
+import { rectangleDxf } from '@kerfmark/dieline/testing';
 import { createKnex } from '../db';
 import { analyseDielineFile, waitingAnalyses } from './analyseDieline';
 
@@ -9,65 +10,6 @@ import { analyseDielineFile, waitingAnalyses } from './analyseDieline';
 // sweep (which waits for files a few seconds old) leaves them alone; the store is a stand-in.
 const knex = createKnex(process.env.DATABASE_URL!);
 afterAll(() => knex.destroy());
-
-/** A 4 × 3 in rectangle of cutting rule (perimeter 2 × (4 + 3) = 14 in) and a 4 in crease across it. */
-const rectangleDxf = [
-  '0',
-  'SECTION',
-  '2',
-  'HEADER',
-  '9',
-  '$INSUNITS',
-  '70',
-  '1',
-  '0',
-  'ENDSEC',
-  '0',
-  'SECTION',
-  '2',
-  'ENTITIES',
-  '0',
-  'LWPOLYLINE',
-  '8',
-  'CUT',
-  '90',
-  '4',
-  '70',
-  '1',
-  '10',
-  '0',
-  '20',
-  '0',
-  '10',
-  '4',
-  '20',
-  '0',
-  '10',
-  '4',
-  '20',
-  '3',
-  '10',
-  '0',
-  '20',
-  '3',
-  '0',
-  'LINE',
-  '8',
-  'CREASE',
-  '10',
-  '0',
-  '20',
-  '1.5',
-  '11',
-  '4',
-  '21',
-  '1.5',
-  '0',
-  'ENDSEC',
-  '0',
-  'EOF',
-  '',
-].join('\n');
 
 /** A store that hands out the rectangle after `delayMs`, and can run a step while it waits. */
 function slowStore(delayMs: number, during?: () => Promise<void>): Storage & { reads: number } {
