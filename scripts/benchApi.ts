@@ -2,11 +2,11 @@
 // a request's detail and the bid comparison, over 2,000 requests, 20,000 bids and 100,000 price
 // records; each beside a bare Express + pg route that reads the same rows (ratio).
 import path from 'node:path';
-import autocannon from 'autocannon';
 import express from 'express';
 import knexFactory from 'knex';
 import pg from 'pg';
-import { analyseDieline } from '../packages/dieline/src/index';
+import { load } from './lib/autocannonLoad';
+import { generateBenchData } from './lib/benchData';
 import { recordResults, type BenchResult } from './lib/benchResults';
 import { profile, repoRoot } from './lib/profile';
 import {
@@ -26,144 +26,11 @@ const SECONDS = Number(process.env.BENCH_SECONDS ?? 8);
 const p = profile('test');
 const supervisor = new Supervisor(path.join(p.dataDir, 'logs'), { echo: false });
 
-const dxf = [
-  '0',
-  'SECTION',
-  '2',
-  'ENTITIES',
-  '0',
-  'LWPOLYLINE',
-  '8',
-  'CUT',
-  '90',
-  '4',
-  '70',
-  '1',
-  '10',
-  '0',
-  '20',
-  '0',
-  '10',
-  '8',
-  '20',
-  '0',
-  '10',
-  '8',
-  '20',
-  '5',
-  '10',
-  '0',
-  '20',
-  '5',
-  '0',
-  'ENDSEC',
-  '0',
-  'EOF',
-  '',
-].join('\n');
-
-/** p-th percentile of sorted values, nearest rank. */
-const percentile = (sorted: number[], p: number) =>
-  sorted[Math.min(sorted.length - 1, Math.ceil((p / 100) * sorted.length) - 1)] ?? NaN;
-
-async function load(url: string, token: string) {
-  const headers = { Authorization: `Bearer ${token}` };
-  // A short warm-up first (JIT, connection pools, caches), then the measured run.
-  await autocannon({ url, connections: 50, duration: 2, headers });
-  const latencies: number[] = [];
-  const instance = autocannon({ url, connections: 50, duration: SECONDS, headers });
-  instance.on('response', (_client: unknown, _status: number, _bytes: number, ms: number) => latencies.push(ms));
-  const result = await instance;
-  latencies.sort((a, b) => a - b);
-  return {
-    rps: result.requests.average,
-    p50: percentile(latencies, 50),
-    p95: percentile(latencies, 95),
-    p99: percentile(latencies, 99),
-    errors: result.errors + result.non2xx,
-  };
-}
-
 try {
   const env = await bringUp(p, supervisor, { fresh: true, productionSweeps: true });
   const knex = knexFactory({ client: 'pg', connection: env.DATABASE_URL });
-  const printer = await knex('organisations').where({ name: 'Larkspur Press & Carton' }).first();
-  const buyer = await knex('users').where({ organisation_id: printer.id, role: 'buyer' }).first();
   console.log('· generating 2,000 requests, 20,000 bids, 100,000 price records');
-  const shops: number[] = [];
-  for (let i = 0; i < BIDS_PER_REQUEST; i++) {
-    const [s] = await knex('organisations')
-      .insert({ name: `Bench shop ${i}`, kind: 'die_shop', time_zone: 'America/Chicago', postcode: '60148' })
-      .returning('id');
-    shops.push(s.id);
-  }
-  const { metrics, preview } = analyseDieline(dxf);
-  const deadline = new Date(Date.now() + 5 * 86_400_000);
-  for (let done = 0; done < REQUESTS; done += 500) {
-    const ids = await knex('die_requests')
-      .insert(
-        Array.from({ length: 500 }, (_, i) => ({
-          organisation_id: printer.id,
-          created_by: buyer.id,
-          title: `Bench carton ${done + i}`,
-          status: 'open',
-          quantity: 1,
-          ups: 2,
-          rule_types: '{cut,crease}',
-          need_by_date: '2027-03-01',
-          bid_deadline: deadline,
-          delivery_postcode: '60614',
-          published_at: new Date(),
-        })),
-      )
-      .returning('id');
-    await knex('dieline_files').insert(
-      ids.map(({ id }: { id: number }) => ({
-        request_id: id,
-        file_name: 'bench.dxf',
-        format: 'dxf',
-        content_type: 'application/dxf',
-        byte_size: dxf.length,
-        sha256: 'bench',
-        s3_key: `bench/${id}.dxf`,
-        is_primary: true,
-        analysis_status: 'done',
-        metrics: JSON.stringify(metrics),
-        preview: JSON.stringify(preview),
-      })),
-    );
-    await knex('bids').insert(
-      ids.flatMap(({ id }: { id: number }) =>
-        shops.map((shopId, k) => ({
-          request_id: id,
-          shop_id: shopId,
-          lines: JSON.stringify([{ kind: 'die', description: '', amountCents: 50_000 + k * 1000 }]),
-          currency: 'USD',
-          total_cents: 50_000 + k * 1000,
-          die_cents: 50_000 + k * 1000,
-          lead_days: 5 + k,
-          promised_ship_date: '2027-02-01',
-          valid_until: '2027-02-15',
-        })),
-      ),
-    );
-  }
-  for (let done = 0; done < PRICE_RECORDS; done += 5000) {
-    await knex('price_records').insert(
-      Array.from({ length: 5000 }, (_, i) => ({
-        organisation_id: printer.id,
-        shop_name: `Bench shop ${i % 10}`,
-        total_cents: 60_000 + (i % 500) * 100,
-        die_cents: 55_000 + (i % 500) * 100,
-        currency: 'USD',
-        priced_on: '2026-06-01',
-        rule_length_in: 50 + (i % 300),
-        bends: i % 40,
-        complexity: 'simple',
-        source: 'import',
-      })),
-    );
-  }
+  await generateBenchData(knex, { requests: REQUESTS, bidsPerRequest: BIDS_PER_REQUEST, priceRecords: PRICE_RECORDS });
   await knex.raw('ANALYZE');
   const sampleRequest = (await knex('die_requests').where({ title: 'Bench carton 1000' }).first()).id;
   await knex('die_requests')
@@ -271,8 +138,8 @@ try {
   const rows: string[] = [];
   const results: BenchResult[] = [];
   for (const c of cases) {
-    const api = await load(c.api[0], c.api[1]);
-    const bare = await load(c.base, '');
+    const api = await load(c.api[0], c.api[1], SECONDS);
+    const bare = await load(c.base, '', SECONDS);
     const ratio = api.rps / bare.rps;
     results.push({
       figure: `API ${c.name}, 50 connections`,

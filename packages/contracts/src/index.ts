@@ -7,6 +7,7 @@ export * from './errors';
 export * from './queues';
 export * from './dates';
 export * from './dateFields';
+export * from './requestStatus';
 export * from './requests';
 export * from './requestDtos';
 export * from './bids';

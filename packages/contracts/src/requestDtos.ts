@@ -2,7 +2,8 @@ import type { DielineMetrics } from '@kerfmark/dieline';
 import type { StockKind } from '@kerfmark/stock';
 import type { BidDto } from './bids';
 import type { Press } from './presses';
-import type { Grain, RequestAction, RequestStatus, RuleType, Visibility } from './requests';
+import type { Grain, RuleType, Visibility } from './requests';
+import type { RequestAction, RequestStatus } from './requestStatus';
 
 /** The dieline metrics as the analysis reports them (lengths in inches): the dieline package's own type. */
 export type { DielineMetrics } from '@kerfmark/dieline';
