@@ -1,8 +1,8 @@
 import { bidLineLabels, formatInZone } from '@kerfmark/contracts';
-import { formatMoney, sumCents } from '@kerfmark/pricing';
+import { formatMoney } from '@kerfmark/pricing';
 import PDFDocument from 'pdfkit';
 import type { PurchaseOrderDoc } from './types';
-import { unprintableCharacter } from './unprintableCharacter';
+import { checkDocument, plain } from './checkDocument';
 
 // The standard PDF fonts: nothing embedded, nothing fetched. They cover Windows-1252 only.
 const REGULAR = 'Helvetica';
@@ -105,53 +105,6 @@ export async function purchaseOrderPdf(doc: PurchaseOrderDoc): Promise<Buffer> {
   pageFooters(pdf, doc.poNumber, left, width);
   pdf.end();
   return bytes;
-}
-
-/** Refuses a document whose sums, currency, time zone or characters would print wrong. */
-function checkDocument(doc: PurchaseOrderDoc): void {
-  if (doc.lines.length === 0) throw new RangeError('A purchase order needs at least one price line');
-  const sum = sumCents(doc.lines.map((line) => line.amountCents));
-  if (sum !== doc.totalCents)
-    throw new RangeError(`The price lines add up to ${sum} but the total is ${doc.totalCents} (minor units)`);
-  try {
-    formatMoney({ cents: 0, currency: doc.currency });
-  } catch {
-    throw new RangeError(`Not an ISO 4217 currency code: "${doc.currency}"`);
-  }
-  try {
-    formatInZone(doc.issuedAt, doc.timeZone);
-  } catch {
-    throw new RangeError(`Not a valid issue date or time zone: "${doc.timeZone}"`);
-  }
-  const texts: Array<[string, string | null]> = [
-    ['PO number', doc.poNumber],
-    ["buyer's organisation", doc.buyer.organisation],
-    ["buyer's contact", doc.buyer.contact],
-    ["buyer's e-mail", doc.buyer.email],
-    ['delivery address', doc.buyer.deliveryAddress],
-    ['delivery postcode', doc.buyer.deliveryPostcode],
-    ["supplier's organisation", doc.supplier.organisation],
-    ["supplier's postcode", doc.supplier.postcode],
-    ['request title', doc.request.title],
-    ['job reference', doc.request.jobReference],
-    ['dieline file name', doc.dieline?.fileName ?? null],
-    ['award reason', doc.awardReason],
-    ['notes', doc.notes],
-    ...doc.lines.map((line, i): [string, string] => [`price line ${i + 1}`, `${line.kind} ${line.description}`]),
-  ];
-  for (const [where, text] of texts) {
-    const bad = text === null ? undefined : unprintableCharacter(plain(text));
-    // Refuse rather than print garbage: the standard PDF fonts cover Western European letters only.
-    if (bad)
-      throw new RangeError(
-        `The purchase order cannot print ${JSON.stringify(bad)} (in the ${where}): use Western European letters`,
-      );
-  }
-}
-
-/** Text as the standard fonts print it: pdfkit shows a carriage return or a tab as a stray glyph. */
-function plain(text: string): string {
-  return text.replace(/\r\n?/g, '\n').replace(/\t/g, ' ');
 }
 
 function collect(pdf: Pdf): Promise<Buffer> {
