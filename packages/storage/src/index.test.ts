@@ -22,12 +22,14 @@ describe('storage on the S3 fake', () => {
   it('gives a presigned link that downloads the file and then expires', async () => {
     const key = `test/${Date.now()}-link.dxf`;
     await storage.put(key, new TextEncoder().encode('0\nEOF\n'), 'application/dxf');
-    const url = await storage.downloadUrl(key, 'carton front.dxf', 1);
+    // Signing times are whole seconds (AWS Signature Version 4's X-Amz-Date), so a 1 s link can be
+    // stale at once on a busy machine: 3 s of life, then a wait past it.
+    const url = await storage.downloadUrl(key, 'carton front.dxf', 3);
     const res = await fetch(url);
     expect(res.status).toBe(200);
     expect(await res.text()).toBe('0\nEOF\n');
     expect(res.headers.get('content-disposition')).toContain('carton%20front.dxf');
-    await new Promise((r) => setTimeout(r, 2100));
+    await new Promise((r) => setTimeout(r, 4100));
     expect((await fetch(url)).status).toBe(403);
   });
 });
