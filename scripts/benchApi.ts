@@ -121,7 +121,7 @@ try {
   const cases = [
     {
       name: 'open-requests board',
-      api: [`${env.APP_URL}/api/marketplace/requests`, estimatorToken],
+      api: [`${env.APP_URL}/api/open-requests`, estimatorToken],
       base: `${baseUrl}/board`,
     },
     {

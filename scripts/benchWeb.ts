@@ -17,7 +17,7 @@ export { measureEntryChunk, type EntryChunk };
 /** kB as Vite's build report counts them (1,000 bytes), so the figures compare with its output. */
 const KB = 1000;
 export const ENTRY_GZIP_TARGET_BYTES = 250 * KB;
-const ROW = '[data-test="marketplace-table"] tr.ant-table-row';
+const ROW = '[data-test="open-requests-table"] tr.ant-table-row';
 const FIRST_ROW_MARK = 'bench:board-first-row';
 
 const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)]!;
@@ -62,7 +62,7 @@ function readTimings(mark: string) {
   const fcp = performance.getEntriesByName('first-contentful-paint')[0];
   const firstRow = performance.getEntriesByName(mark)[0]!.startTime;
   const resources = performance.getEntriesByType('resource') as PerformanceResourceTiming[];
-  const board = resources.find((r) => new URL(r.name).pathname === '/api/marketplace/requests');
+  const board = resources.find((r) => new URL(r.name).pathname === '/api/open-requests');
   const before = resources.filter((r) => r.responseEnd <= firstRow);
   return {
     firstRowMs: firstRow,

@@ -42,12 +42,15 @@ describe('a print buyer posts a die request and a die shop sees it', () => {
     await signIn(p, 'grace@brightline.example');
     await p.waitForURL(`${baseUrl}/`);
     await p.locator('[data-test=nav] >> text=Open requests').click();
-    await p.locator('[data-test=marketplace-table]').waitFor();
+    await p.locator('[data-test=open-requests-table]').waitFor();
     await screenshot(p, '14-open-requests');
-    // The board pages at 25: find this run's request by its title.
-    await p.locator('input[data-test=board-search], [data-test=board-search] input').first().fill(title);
-    await expect.poll(() => p.locator('[data-test=marketplace-table]').innerText()).toContain(title);
-    await p.locator(`[data-test=marketplace-table] >> text=${title}`).click();
+    // Open requests page at 25: find this run's request by its title.
+    await p
+      .locator('input[data-test=open-requests-search], [data-test=open-requests-search] input')
+      .first()
+      .fill(title);
+    await expect.poll(() => p.locator('[data-test=open-requests-table]').innerText()).toContain(title);
+    await p.locator(`[data-test=open-requests-table] >> text=${title}`).click();
     await expect.poll(() => p.locator('[data-test=metrics]').innerText()).toContain('Cutting rule');
     expect(await p.locator('[data-test=dieline-drop]').count()).toBe(0);
     await screenshot(p, '15-estimator-request');

@@ -20,7 +20,7 @@ import { fulfilmentRoutes } from './routes/fulfilmentRoutes';
 import { fileRoutes } from './routes/fileRoutes';
 import { notificationRoutes } from './routes/notificationRoutes';
 import { libraryRoutes } from './routes/libraryRoutes';
-import { marketplaceRoutes } from './routes/marketplaceRoutes';
+import { openRequestRoutes } from './routes/openRequestRoutes';
 import { pressRoutes } from './routes/pressRoutes';
 import { priceHistoryRoutes } from './routes/priceHistoryRoutes';
 import { requestRoutes } from './routes/requestRoutes';
@@ -76,7 +76,7 @@ export function createApp(deps: AppDeps): Express {
   api.use(awardRoutes(services, requireAuth));
   api.use(fulfilmentRoutes(services, requireAuth));
   api.use(libraryRoutes(services, requireAuth));
-  api.use(marketplaceRoutes(services, requireAuth));
+  api.use(openRequestRoutes(services, requireAuth));
   api.use(notFoundHandler);
   app.use('/api', api);
 

@@ -138,8 +138,8 @@ export const RequestListQuery = z.object({
 });
 export type RequestListQuery = z.input<typeof RequestListQuery>;
 
-/** The die shops' board of open requests: filters, sort and page, all applied by the server. */
-export const MarketplaceQuery = z.object({
+/** The die shops' list of open requests: filters, sort and page, all applied by the server. */
+export const OpenRequestsQuery = z.object({
   q: z.string().trim().max(100).optional(),
   minIn: z.coerce.number().min(0).max(1_000_000).optional(),
   maxIn: z.coerce.number().min(0).max(1_000_000).optional(),
@@ -177,7 +177,7 @@ export const MarketplaceQuery = z.object({
   page: z.coerce.number().int().min(1).max(10_000).default(1),
   pageSize: z.coerce.number().int().min(1).max(100).default(25),
 });
-export type MarketplaceQuery = z.input<typeof MarketplaceQuery>;
+export type OpenRequestsQuery = z.input<typeof OpenRequestsQuery>;
 
 export const QuestionCreate = z.object({
   question: z

@@ -18,7 +18,7 @@ export function openToShop(knex: Knex, shopId: number, table = 'die_requests') {
 }
 
 /**
- * The board's condition, the SQL form of "bidding is open and the request is open to this shop"
+ * The open-requests condition, the SQL form of "bidding is open and the request is open to this shop"
  * (`biddingOpen` and `maySee`): open, before its deadline, public or the shop invited.
  */
 export function biddableByShop(knex: Knex, shopId: number, table = 'die_requests') {

@@ -359,10 +359,10 @@ const cases: RouteCase[] = [
     expect: printers(204),
   },
 
-  // The die shops' board, bids, the award and the die's way back.
+  // The die shops' open requests, bids, the award and the die's way back.
   {
-    name: 'GET /api/marketplace/requests',
-    send: () => request(app).get('/api/marketplace/requests'),
+    name: 'GET /api/open-requests',
+    send: () => request(app).get('/api/open-requests'),
     expect: shops(200),
   },
   { name: 'GET /api/die-shops', send: () => request(app).get('/api/die-shops'), expect: printers(200) },

@@ -113,7 +113,7 @@ describe('sealed bids', () => {
   });
 });
 
-describe('the open-requests board', () => {
+describe('open requests', () => {
   it('shows distance from the shop, and marks requests the shop bid on or passed on', async () => {
     const first = await createOpenRequest(w);
     const second2 = await createOpenRequest(w);
@@ -122,11 +122,11 @@ describe('the open-requests board', () => {
       .set(bearer(w.tokens.estimator))
       .send({ reason: 'Too large for our laser' });
     expect(declined.status, JSON.stringify(declined.body)).toBe(204);
-    const board = await request(app)
-      .get('/api/marketplace/requests')
+    const open = await request(app)
+      .get('/api/open-requests')
       .query({ q: w.printer.name, hideDeclined: 'false' })
       .set(bearer(w.tokens.estimator));
-    const row = (id: number) => board.body.items.find((r: { id: number }) => r.id === id);
+    const row = (id: number) => open.body.items.find((r: { id: number }) => r.id === id);
     // Shop and delivery share the postcode 60614: no distance to speak of.
     expect(row(first.id)).toMatchObject({ declined: true, hasBid: false, distanceMiles: 0 });
     expect(row(second2.id)).toMatchObject({ declined: false });

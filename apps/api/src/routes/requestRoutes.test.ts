@@ -79,11 +79,11 @@ describe('die requests', () => {
     const published = await request(app).post(`/api/requests/${draft.id}/publish`).set(bearer(w.tokens.buyer));
     expect(published.status, JSON.stringify(published.body)).toBe(200);
     expect(published.body.status).toBe('open');
-    const board = await request(app)
-      .get('/api/marketplace/requests')
+    const open = await request(app)
+      .get('/api/open-requests')
       .query({ q: w.printer.name })
       .set(bearer(w.tokens.estimator));
-    expect(board.body.items.map((r: { id: number }) => r.id)).toContain(draft.id);
+    expect(open.body.items.map((r: { id: number }) => r.id)).toContain(draft.id);
     const seen = await request(app).get(`/api/requests/${draft.id}`).set(bearer(w.tokens.estimator));
     expect(seen.status).toBe(200);
     expect(seen.body.isOwner).toBe(false);
@@ -148,12 +148,12 @@ describe('die requests', () => {
     expect((await request(app).get(`/api/requests/${draft.id}`).set(bearer(outsider.tokens.estimator))).status).toBe(
       404,
     );
-    const board = await request(app)
-      .get('/api/marketplace/requests')
+    const open = await request(app)
+      .get('/api/open-requests')
       .query({ q: w.printer.name })
       .set(bearer(outsider.tokens.estimator));
-    expect(board.status).toBe(200);
-    expect(board.body.items.map((r: { id: number }) => r.id)).not.toContain(draft.id);
+    expect(open.status).toBe(200);
+    expect(open.body.items.map((r: { id: number }) => r.id)).not.toContain(draft.id);
   });
 });
 

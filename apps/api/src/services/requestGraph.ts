@@ -86,7 +86,7 @@ function adoptParts(request: DieRequest, parts: RequestPart[]): DieRequest {
 }
 
 /**
- * Reads requests with the parts named, in one query: the views read most (the board, a
+ * Reads requests with the parts named, in one query: the views read most (open requests, a
  * request's page, the bid comparison) would otherwise spend a query and a model graph on each
  * part. `query` is already narrowed to what the user may see; the views only read the parts.
  * `columns` are the request's own columns to read (a list reads fewer than a request's page).

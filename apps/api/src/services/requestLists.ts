@@ -1,4 +1,4 @@
-import type { DieRequestSummary, MarketplaceQuery, Page, RequestListQuery } from '@kerfmark/contracts';
+import type { DieRequestSummary, OpenRequestsQuery, Page, RequestListQuery } from '@kerfmark/contracts';
 import type { Knex } from 'knex';
 import type { z } from 'zod';
 import type { AuthUser } from '../auth/passport';
@@ -6,7 +6,7 @@ import { containsPattern } from '../lib/containsPattern';
 import { distanceMiles } from '../lib/distanceMiles';
 import { knownPostcodes, postcodeCentre } from '../lib/postcodeCentre';
 import { DieRequest, Organisation } from '../models';
-import { boardPage } from './boardPage';
+import { openRequestsPage } from './openRequestsPage';
 import { toSummary } from './requestViews';
 
 /** The printer's own requests: filtered, sorted and paged. */
@@ -34,17 +34,17 @@ export async function listOwnRequests(
   return { items: result.results.map(toSummary), total: result.total, page: q.page, pageSize: q.pageSize };
 }
 
-/** The board of open requests a die shop may bid on: filtered, sorted and paged by the database. */
-export async function boardOfOpenRequests(
+/** The open requests a die shop may bid on: filtered, sorted and paged by the database. */
+export async function openRequestsFor(
   knex: Knex,
   actor: AuthUser,
-  q: z.output<typeof MarketplaceQuery>,
+  q: z.output<typeof OpenRequestsQuery>,
 ): Promise<Page<DieRequestSummary>> {
   const from = postcodeCentre(actor.orgPostcode);
   const miles = from
     ? knownPostcodes().map(({ postcode, centre }) => ({ postcode, miles: distanceMiles(from, centre) }))
     : [];
-  const { rows, total } = await boardPage(knex, actor.organisationId, q, miles);
+  const { rows, total } = await openRequestsPage(knex, actor.organisationId, q, miles);
   return {
     items: rows.map(({ request, ...row }) => ({ ...toSummary(request), ...row })),
     total,

@@ -4,7 +4,7 @@ import {
   type DieRequestCreate,
   type DieRequestDetail,
   type DieRequestUpdate,
-  MarketplaceQuery,
+  OpenRequestsQuery,
   RequestListQuery,
   type BidDto,
 } from '@kerfmark/contracts';
@@ -32,7 +32,7 @@ import { readRequestGraph } from './requestGraph';
 import { toBidDto } from './requestViews';
 import { tellBidders } from './tellBidders';
 import { tellOfDeadline } from './tellOfDeadline';
-import { boardOfOpenRequests, dieShops, listOwnRequests } from './requestLists';
+import { openRequestsFor, dieShops, listOwnRequests } from './requestLists';
 import { answerQuestion, askQuestion } from './requestQuestions';
 
 async function bidDto(bid: Bid): Promise<BidDto> {
@@ -130,8 +130,8 @@ export function createRequestService(deps: ServiceDeps) {
 
     list: (actor: AuthUser, q: z.output<typeof RequestListQuery>) => listOwnRequests(actor, q),
     dieShops,
-    /** The board of open requests a die shop may bid on: filtered, sorted and paged by the database. */
-    marketplace: (actor: AuthUser, q: z.output<typeof MarketplaceQuery>) => boardOfOpenRequests(knex, actor, q),
+    /** The open requests a die shop may bid on: filtered, sorted and paged by the database. */
+    openRequests: (actor: AuthUser, q: z.output<typeof OpenRequestsQuery>) => openRequestsFor(knex, actor, q),
 
     async create(actor: AuthUser, input: DieRequestCreate): Promise<DieRequestDetail> {
       const { invitedShopIds = [], ...fields } = input;

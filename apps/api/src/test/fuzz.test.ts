@@ -16,7 +16,7 @@ import {
   LayerMapUpdate,
   LibraryDieUpdate,
   LoginInput,
-  MarketplaceQuery,
+  OpenRequestsQuery,
   PreferencesUpdate,
   PressCreate,
   PressUpdate,
@@ -249,7 +249,7 @@ const cases: Record<string, Case> = {
     },
   },
   'GET /api/requests/:id/library-matches': { as: 'buyer', params: id('open') },
-  'GET /api/marketplace/requests': { as: 'estimator', query: MarketplaceQuery },
+  'GET /api/open-requests': { as: 'estimator', query: OpenRequestsQuery },
 };
 
 /** Write routes not fuzzed with JSON, and why. */

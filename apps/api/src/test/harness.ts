@@ -130,7 +130,7 @@ export async function waitForEmail(
 
 /**
  * An open request with a measured dieline (the 4 × 3 in test rectangle: 14 in of cutting rule and
- * 4 in of creasing rule), made straight in the database so marketplace tests need no worker.
+ * 4 in of creasing rule), made straight in the database so bidding tests need no worker.
  */
 export async function createOpenRequest(
   world: { printer: Organisation; users: { buyer: User } },

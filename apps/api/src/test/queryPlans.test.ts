@@ -77,10 +77,8 @@ beforeAll(async () => {
 const bearer = (token: string) => ({ Authorization: `Bearer ${token}` });
 
 describe('the hot queries use indexes', () => {
-  it('the open-requests board', async () => {
-    expect(await scansOf(() => request(app).get('/api/marketplace/requests').set(bearer(w.tokens.estimator)))).toEqual(
-      [],
-    );
+  it('the open requests', async () => {
+    expect(await scansOf(() => request(app).get('/api/open-requests').set(bearer(w.tokens.estimator)))).toEqual([]);
   });
 
   it('a request’s detail, for the printer and for a die shop', async () => {

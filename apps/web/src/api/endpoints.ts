@@ -80,7 +80,7 @@ export const requestsApi = {
     api<RequestQuestionDto>(`/requests/${id}/questions`, { method: 'POST', body: { question } }),
   answer: (id: number, questionId: number, answer: string) =>
     api<RequestQuestionDto>(`/requests/${id}/questions/${questionId}/answer`, { method: 'POST', body: { answer } }),
-  marketplace: (query: Query) => api<Page<DieRequestSummary>>(`/marketplace/requests?${searchParams(query)}`),
+  openRequests: (query: Query) => api<Page<DieRequestSummary>>(`/open-requests?${searchParams(query)}`),
   dieShops: () => api<Array<{ id: number; name: string; postcode: string | null }>>('/die-shops'),
 };
 

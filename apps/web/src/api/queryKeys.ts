@@ -8,7 +8,7 @@ import type { MaybeRef } from 'vue';
 export const queryKeys = {
   request: (id?: MaybeRef<number | null>) => (id === undefined ? ['request'] : ['request', id]),
   requests: (query?: MaybeRef<unknown>) => (query === undefined ? ['requests'] : ['requests', query]),
-  marketplace: (query: MaybeRef<unknown>) => ['marketplace', query],
+  openRequests: (query: MaybeRef<unknown>) => ['open-requests', query],
   bids: (requestId?: MaybeRef<number>, status?: MaybeRef<string>) =>
     requestId === undefined ? ['bids'] : ['bids', requestId, status],
   estimateAid: () => ['estimate-aid'],

@@ -53,7 +53,7 @@ export const appRoutes: RouteRecordRaw[] = [
   {
     path: 'open-requests',
     name: 'open-requests',
-    component: () => import('../views/MarketplaceView.vue'),
+    component: () => import('../views/OpenRequestsView.vue'),
     meta: { title: 'Open requests', access: { kinds: ['die_shop'] } },
   },
   {

@@ -15,9 +15,9 @@ async function setRuleLength(requestId: number, inches: number, complexity: 'sim
   );
 }
 
-async function board(query: Record<string, string | number>) {
+async function openRequests(query: Record<string, string | number>) {
   const res = await request(app)
-    .get('/api/marketplace/requests')
+    .get('/api/open-requests')
     .query({ q: w.printer.name, ...query })
     .set(bearer(w.tokens.estimator));
   expect(res.status, JSON.stringify(res.body)).toBe(200);
@@ -43,35 +43,35 @@ beforeAll(async () => {
     .post(`/api/requests/${declined.id}/decline`)
     .set(bearer(w.tokens.estimator))
     .send({ reason: 'No capacity this week' });
-  // Closed to bids: not on the board at all.
+  // Closed to bids: not among the open requests at all.
   await createOpenRequest(w, { deadline: new Date(Date.now() - DAY) });
   ids = { soon: soon.id, later: later.id, long: long.id, declined: declined.id };
 });
 
-describe('the open-requests board', () => {
+describe('open requests', () => {
   it('lists open requests soonest deadline first, hiding those the shop passed on, and counts them', async () => {
-    const page = await board({});
+    const page = await openRequests({});
     expect(page.items.map((r) => r.id)).toEqual([ids.soon, ids.later, ids.long]);
     expect(page.total).toBe(3);
-    const all = await board({ hideDeclined: 'false' });
+    const all = await openRequests({ hideDeclined: 'false' });
     expect(all.items.map((r) => r.id)).toEqual([ids.soon, ids.declined, ids.later, ids.long]);
     expect(all.items.find((r) => r.id === ids.declined)?.declined).toBe(true);
   });
 
   it('filters by rule length, complexity, deadline and rule types', async () => {
-    expect((await board({ minIn: 100 })).items.map((r) => r.id)).toEqual([ids.long]);
-    expect((await board({ maxIn: 18 })).items.map((r) => r.id)).toEqual([ids.soon, ids.later]);
-    expect((await board({ complexity: 'complex' })).items.map((r) => r.id)).toEqual([ids.long]);
-    expect((await board({ withinDays: 1 })).items.map((r) => r.id)).toEqual([ids.soon]);
-    expect((await board({ ruleTypes: 'cut,crease' })).total).toBe(3);
-    expect((await board({ ruleTypes: 'perf' })).total).toBe(0);
+    expect((await openRequests({ minIn: 100 })).items.map((r) => r.id)).toEqual([ids.long]);
+    expect((await openRequests({ maxIn: 18 })).items.map((r) => r.id)).toEqual([ids.soon, ids.later]);
+    expect((await openRequests({ complexity: 'complex' })).items.map((r) => r.id)).toEqual([ids.long]);
+    expect((await openRequests({ withinDays: 1 })).items.map((r) => r.id)).toEqual([ids.soon]);
+    expect((await openRequests({ ruleTypes: 'cut,crease' })).total).toBe(3);
+    expect((await openRequests({ ruleTypes: 'perf' })).total).toBe(0);
   });
 
   it('sorts by rule length and need-by date, and pages', async () => {
-    expect((await board({ sort: '-ruleLength' })).items[0]!.id).toBe(ids.long);
-    expect((await board({ sort: '-needByDate' })).items[0]!.id).toBe(ids.soon);
-    const first = await board({ pageSize: 2, page: 1 });
-    const second = await board({ pageSize: 2, page: 2 });
+    expect((await openRequests({ sort: '-ruleLength' })).items[0]!.id).toBe(ids.long);
+    expect((await openRequests({ sort: '-needByDate' })).items[0]!.id).toBe(ids.soon);
+    const first = await openRequests({ pageSize: 2, page: 1 });
+    const second = await openRequests({ pageSize: 2, page: 2 });
     expect(first.items.map((r) => r.id)).toEqual([ids.soon, ids.later]);
     expect(second.items.map((r) => r.id)).toEqual([ids.long]);
     expect(second.total).toBe(3);
@@ -79,7 +79,7 @@ describe('the open-requests board', () => {
 
   it('refuses filters it does not understand with a 400 naming them', async () => {
     const res = await request(app)
-      .get('/api/marketplace/requests')
+      .get('/api/open-requests')
       .query({ complexity: 'medium', ruleTypes: 'cut,laser', pageSize: 1000 })
       .set(bearer(w.tokens.estimator));
     expect(res.status).toBe(400);

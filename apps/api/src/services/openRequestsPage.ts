@@ -1,4 +1,4 @@
-import type { MarketplaceQuery } from '@kerfmark/contracts';
+import type { OpenRequestsQuery } from '@kerfmark/contracts';
 import type { Knex } from 'knex';
 import type { z } from 'zod';
 import { containsPattern } from '../lib/containsPattern';
@@ -21,15 +21,15 @@ const ORDER: Record<string, string> = {
 };
 
 /**
- * One page of the board of requests open to this die shop, filtered and sorted by the database
+ * One page of the requests open to this die shop, filtered and sorted by the database
  * and read in full, with the count of every match. The request rows carry their measured
  * dieline's figures (migration 009); `miles` gives the distance from the shop to each delivery
  * postcode it knows.
  */
-export async function boardPage(
+export async function openRequestsPage(
   knex: Knex,
   shopId: number,
-  q: z.output<typeof MarketplaceQuery>,
+  q: z.output<typeof OpenRequestsQuery>,
   miles: Array<{ postcode: string; miles: number }>,
 ): Promise<{ rows: Array<BoardRow & { request: DieRequest }>; total: number }> {
   // The requests that match, as a fresh query each time it is needed.

@@ -47,7 +47,7 @@ async function pdfText(path: string): Promise<string> {
   return content.items.map((item) => ('str' in item ? item.str : '')).join(' ');
 }
 
-describe('the marketplace loop in the browser', () => {
+describe('bidding in the browser', () => {
   it('revises a bid in yen: the form shows whole yen, and takes the revision', async () => {
     const buyer = await as('maya@larkspur.example');
     const id = await postRequest(buyer, `Yen carton ${Date.now() % 100000}`);
