@@ -6,7 +6,7 @@ import type { AuthUser } from '../auth/passport';
 import { HttpError, notFound } from '../lib/httpError';
 import { todayIn } from '../lib/todayIn';
 import type { createPriceHistoryService } from './priceHistoryService';
-import type { createRequestService } from './requestService';
+import { visibleQuery } from './requestLookup';
 import { readRequestGraph } from './requestGraph';
 import { primaryFile } from './requestViews';
 
@@ -16,14 +16,13 @@ import { primaryFile } from './requestViews';
  */
 export async function compareSubmittedBids(
   knex: Knex,
-  requests: Pick<ReturnType<typeof createRequestService>, 'visibleQuery'>,
   priceHistory: Pick<ReturnType<typeof createPriceHistoryService>, 'fairPriceFor'>,
   actor: AuthUser,
   requestId: number,
 ): Promise<BidComparisonDto> {
   if (actor.orgKind !== 'printer') throw notFound('That die request');
   // For a printer, the requests it may see are its own.
-  const request = await readRequestGraph(knex, requests.visibleQuery(actor, requestId), [
+  const request = await readRequestGraph(knex, visibleQuery(actor, requestId), [
     'award',
     'fileSummaries',
     'submittedBids',

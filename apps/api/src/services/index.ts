@@ -25,7 +25,7 @@ export function createServices(deps: ServiceDeps, limiter: LoginLimiter) {
     library,
     requests,
     files: createFileService(deps, requests),
-    bids: createBidService(deps, requests, priceHistory),
+    bids: createBidService(deps, priceHistory),
     awards: createAwardService(deps, requests, purchaseDocuments),
     purchaseDocuments,
     fulfilment: createFulfilmentService(deps, { requests, library, priceHistory }),

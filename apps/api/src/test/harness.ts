@@ -13,6 +13,8 @@ import { createJobQueues } from '../lib/jobQueues';
 import { createRedis } from '../lib/redis';
 import { Organisation, Press, User } from '../models';
 import { insertOpenRequest } from './insertOpenRequest';
+import type { AuthUser } from '../auth/passport';
+import type { ServiceDeps } from '../services/deps';
 
 // Integration tests run against the real PostgreSQL, Redis and mail catcher that `npm test` starts.
 if (!process.env.DATABASE_URL) {
@@ -144,4 +146,31 @@ export async function createShop() {
   const shop = await createOrg('die_shop');
   const estimator = await createUser(shop, 'estimator');
   return { shop, estimator, token: await signIn(estimator) };
+}
+
+/** What the services are built with, the same as the app's: for testing a service's functions alone. */
+export const deps: ServiceDeps = {
+  config,
+  knex,
+  logger,
+  emails: queues.emails,
+  analyses: queues.analyses,
+  reminders: queues.reminders,
+  storage,
+};
+
+/** The signed-in user a route would hand a service, for a user made here. */
+export function actorOf(user: User, org: Organisation): AuthUser {
+  return {
+    id: user.id,
+    email: user.email,
+    name: user.name,
+    role: user.role,
+    organisationId: org.id,
+    orgKind: org.kind,
+    timeZone: org.timeZone,
+    orgPostcode: org.postcode,
+    jti: randomUUID(),
+    tokenExpiresAt: new Date(Date.now() + 3_600_000),
+  };
 }
