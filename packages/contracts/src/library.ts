@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { calendarDate } from './dateFields';
 import type { DielineMetrics } from './requestDtos';
+import type { RuleType } from './requests';
 
 export const dieConditions = ['good', 'worn', 'damaged', 'retired'] as const;
 
@@ -42,7 +43,7 @@ export interface LibraryDieDto {
   pieceWidthIn: number | null;
   pieceHeightIn: number | null;
   ups: number;
-  ruleTypes: string[];
+  ruleTypes: RuleType[];
   pressName: string | null;
   storageLocation: string | null;
   condition: (typeof dieConditions)[number];

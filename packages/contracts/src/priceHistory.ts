@@ -1,3 +1,4 @@
+import type { Complexity } from '@kerfmark/dieline';
 import { z } from 'zod';
 import { calendarDate } from './dateFields';
 
@@ -35,7 +36,7 @@ export interface PriceRecordDto {
   joints: number;
   punches: number;
   boardAreaSqIn: number;
-  complexity: 'simple' | 'complex';
+  complexity: Complexity;
   source: 'award' | 'import';
 }
 

@@ -8,6 +8,8 @@ export {
   COMPLEXITY_FEATURES_PER_INCH,
   COMPLEXITY_RULE,
   complexityOf,
+  complexities,
+  complexityLabels,
   featureCount,
   type Complexity,
   type FeatureCounts,

@@ -1,3 +1,4 @@
+import type { Complexity } from '@kerfmark/dieline';
 /** One received die as the price statistics see it. */
 export interface PriceObservation {
   /** The die's price in whole cents (minor units of `currency`). */
@@ -8,7 +9,7 @@ export interface PriceObservation {
   ruleLengthIn: number;
   /** Bends + curves + joints + punches. */
   features: number;
-  complexity: 'simple' | 'complex';
+  complexity: Complexity;
   /** 'YYYY-MM-DD' */
   pricedOn: string;
 }

@@ -1,3 +1,4 @@
+import type { Complexity } from '@kerfmark/dieline';
 import request from 'supertest';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { app, createOpenRequest, createWorld, knex, type World } from '../test/harness';
@@ -8,7 +9,7 @@ let w: World;
 let ids: { soon: number; later: number; long: number; declined: number };
 
 /** Sets the measured priced rule of a request's dieline (the fixture's rectangle is 18 in). */
-async function setRuleLength(requestId: number, inches: number, complexity: 'simple' | 'complex') {
+async function setRuleLength(requestId: number, inches: number, complexity: Complexity) {
   await knex.raw(
     `update dieline_files set metrics = jsonb_set(jsonb_set(metrics, '{length,total}', to_jsonb(?::float8)), '{complexity}', to_jsonb(?::text)) where request_id = ?`,
     [inches, complexity, requestId],

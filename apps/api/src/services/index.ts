@@ -19,17 +19,17 @@ import { createLibraryService } from './libraryService';
 export function createServices(deps: ServiceDeps, limiter: LoginLimiter) {
   const requests = createRequestService(deps);
   const priceHistory = createPriceHistoryService(deps);
-  const library = createLibraryService(deps, requests);
-  const purchaseDocuments = createPurchaseDocumentService(deps, requests);
+  const library = createLibraryService(deps);
+  const purchaseDocuments = createPurchaseDocumentService(deps);
   return {
     library,
     requests,
-    files: createFileService(deps, requests),
+    files: createFileService(deps),
     bids: createBidService(deps, priceHistory),
     awards: createAwardService(deps, requests, purchaseDocuments),
     purchaseDocuments,
     fulfilment: createFulfilmentService(deps, { requests, library, priceHistory }),
-    dashboard: createDashboardService(deps),
+    dashboard: createDashboardService(),
     priceHistory,
     auth: createAuthService(deps, limiter),
     users: createUserService(deps),

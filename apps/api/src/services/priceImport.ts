@@ -56,7 +56,7 @@ export interface ImportedRecord {
   curves: number;
   joints: number;
   punches: number;
-  complexity: 'simple' | 'complex';
+  complexity: Complexity;
 }
 
 /**

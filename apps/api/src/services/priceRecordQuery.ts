@@ -1,3 +1,4 @@
+import type { Complexity } from '@kerfmark/dieline';
 import type { PriceHistoryQuery, PriceRecordDto } from '@kerfmark/contracts';
 import type { Knex } from 'knex';
 import type { z } from 'zod';
@@ -37,6 +38,6 @@ export const toPriceRecordDto = (r: Record<string, unknown>): PriceRecordDto => 
   joints: Number(r.joints),
   punches: Number(r.punches),
   boardAreaSqIn: Number(r.boardAreaSqIn),
-  complexity: r.complexity as 'simple' | 'complex',
+  complexity: r.complexity as Complexity,
   source: r.source as 'award' | 'import',
 });

@@ -1,3 +1,4 @@
+import type { Complexity } from '@kerfmark/dieline';
 import type {
   LibraryDieDto,
   PriceRecordDto,
@@ -148,7 +149,7 @@ export interface PriceFitView {
       }
     | { enough: false; reason: string; needed: number };
   perInch: null | Record<
-    'simple' | 'complex',
+    Complexity,
     | { enough: true; n: number; q1Cents: number; medianCents: number; q3Cents: number }
     | { enough: false; reason: string }
   >;
@@ -160,7 +161,7 @@ export interface PriceFitView {
   points: Array<{
     ruleLengthIn: number;
     dieCents: number;
-    complexity: 'simple' | 'complex';
+    complexity: Complexity;
     pricedOn: string;
     shopName: string;
     features: number;

@@ -7,7 +7,9 @@ export const COMPLEXITY_RULE =
   `${COMPLEXITY_FEATURES_PER_INCH} per inch of priced rule (cutting, creasing, perforating and kiss-cut ` +
   'rule together); otherwise it is simple. A drawing with no priced rule is simple.';
 
-export type Complexity = 'simple' | 'complex';
+export const complexities = ['simple', 'complex'] as const;
+export type Complexity = (typeof complexities)[number];
+export const complexityLabels: Record<Complexity, string> = { simple: 'Simple', complex: 'Complex' };
 
 export interface FeatureCounts {
   bends: number;

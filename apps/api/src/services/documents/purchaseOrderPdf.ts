@@ -1,4 +1,5 @@
 import { bidLineLabels, formatInZone } from '@kerfmark/contracts';
+import { complexityLabels } from '@kerfmark/dieline';
 import { formatMoney } from '@kerfmark/pricing';
 import PDFDocument from 'pdfkit';
 import type { PurchaseOrderDoc } from './types';
@@ -82,7 +83,7 @@ export async function purchaseOrderPdf(doc: PurchaseOrderDoc): Promise<Buffer> {
       'Total rule length',
       `${new Intl.NumberFormat('en-US', { maximumFractionDigits: 1 }).format(doc.dieline.totalRuleIn)} in`,
     );
-    field(pdf, 'Complexity', doc.dieline.complexity === 'complex' ? 'Complex' : 'Simple');
+    field(pdf, 'Complexity', complexityLabels[doc.dieline.complexity]);
   } else {
     pdf.text('No dieline attached.');
   }

@@ -1,3 +1,4 @@
+import type { Complexity } from '@kerfmark/dieline';
 /** What a purchase order document says; money in integer cents (minor units) with its currency. */
 export interface PurchaseOrderDoc {
   poNumber: string;
@@ -19,7 +20,7 @@ export interface PurchaseOrderDoc {
     quantity: number;
     ups: number;
   };
-  dieline: { fileName: string; totalRuleIn: number; complexity: 'simple' | 'complex' } | null;
+  dieline: { fileName: string; totalRuleIn: number; complexity: Complexity } | null;
   lines: Array<{ kind: string; description: string; amountCents: number }>;
   totalCents: number;
   currency: string;
