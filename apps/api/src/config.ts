@@ -1,14 +1,5 @@
 import { z } from 'zod';
-import {
-  envInt,
-  envLogLevel,
-  envNodeEnv,
-  envRedisUrl,
-  envStorage,
-  envUrl,
-  readEnv,
-  storageSettings,
-} from '@kerfmark/contracts';
+import { envInt, envShared, readEnv, requireAppUrlInProduction, storageSettings } from '@kerfmark/contracts';
 import type { StorageConfig } from '@kerfmark/storage';
 
 /**
@@ -20,13 +11,10 @@ const MIN_PRODUCTION_SECRET = 32;
 
 const schema = z
   .object({
-    NODE_ENV: envNodeEnv,
+    ...envShared,
     // Loopback locally; a container sets 0.0.0.0 so that its port can be published.
     HOST: z.string().trim().min(1).default('127.0.0.1'),
     PORT: envInt(4100, 0, 65_535),
-    APP_URL: envUrl(['http:', 'https:']).optional(),
-    DATABASE_URL: envUrl(['postgres:', 'postgresql:']),
-    REDIS_URL: envRedisUrl,
     JWT_SECRET: z.string({ error: 'is not set' }),
     TOKEN_TTL_SECONDS: envInt(8 * 3600, 60),
     BCRYPT_ROUNDS: envInt(11, 4, 15),
@@ -44,8 +32,6 @@ const schema = z
         /^\d+$/.test(value) ? Number(value) : value === 'true' ? true : value === 'false' ? false : value,
       ),
     SHUTDOWN_GRACE_MS: envInt(10_000, 0),
-    LOG_LEVEL: envLogLevel,
-    ...envStorage,
   })
   .superRefine((env, ctx) => {
     if (env.NODE_ENV !== 'production') return;
@@ -63,12 +49,7 @@ const schema = z
       });
     }
     // Links in e-mails and HSTS follow it: the local default would send users to 127.0.0.1.
-    if (!env.APP_URL)
-      ctx.addIssue({
-        code: 'custom',
-        path: ['APP_URL'],
-        message: 'is not set (required in production: the public address of the app)',
-      });
+    requireAppUrlInProduction(env, ctx);
   });
 
 /** Everything the API reads from its environment, read once at start-up. */

@@ -1,41 +1,18 @@
 import { z } from 'zod';
-import {
-  envInt,
-  envLogLevel,
-  envNodeEnv,
-  envRedisUrl,
-  envStorage,
-  envUrl,
-  readEnv,
-  storageSettings,
-} from '@kerfmark/contracts';
+import { envInt, envShared, envUrl, readEnv, requireAppUrlInProduction, storageSettings } from '@kerfmark/contracts';
 
 const schema = z
   .object({
-    NODE_ENV: envNodeEnv,
-    DATABASE_URL: envUrl(['postgres:', 'postgresql:']),
-    REDIS_URL: envRedisUrl,
+    ...envShared,
     SMTP_URL: envUrl(['smtp:', 'smtps:']),
     MAIL_FROM: z.string().default('Kerfmark <no-reply@kerfmark.test>'),
-    APP_URL: envUrl(['http:', 'https:']).optional(),
     OUTBOX_SWEEP_MS: envInt(30_000, 100),
     REMINDER_SWEEP_MS: envInt(300_000, 100),
     ANALYSIS_SWEEP_MS: envInt(30_000, 100),
     // How often the worker checks that its sweeps are still scheduled in Redis.
     SCHEDULE_CHECK_MS: envInt(30_000, 100),
-    LOG_LEVEL: envLogLevel,
-    ...envStorage,
   })
-  .superRefine((env, ctx) => {
-    if (env.NODE_ENV !== 'production') return;
-    // The links in every e-mail and reminder point there.
-    if (!env.APP_URL)
-      ctx.addIssue({
-        code: 'custom',
-        path: ['APP_URL'],
-        message: 'is not set (required in production: the public address of the app)',
-      });
-  });
+  .superRefine(requireAppUrlInProduction);
 
 /** Everything the worker reads from its environment, read once at start-up; throws a ConfigError of one line. */
 export function loadConfig(env: Record<string, string | undefined> = process.env) {

@@ -58,6 +58,29 @@ export const envStorage = {
   S3_SECRET_ACCESS_KEY: text().optional(),
 };
 
+/** What the API and the worker both read: the environment, the database, Redis, the app's address, logging, S3. */
+export const envShared = {
+  NODE_ENV: envNodeEnv,
+  DATABASE_URL: envUrl(['postgres:', 'postgresql:']),
+  REDIS_URL: envRedisUrl,
+  APP_URL: envUrl(['http:', 'https:']).optional(),
+  LOG_LEVEL: envLogLevel,
+  ...envStorage,
+};
+
+/** In production the links in every e-mail and reminder (and HSTS) need the public address. */
+export function requireAppUrlInProduction(
+  env: { NODE_ENV: string; APP_URL?: string },
+  ctx: { addIssue: (issue: { code: 'custom'; path: string[]; message: string }) => void },
+) {
+  if (env.NODE_ENV === 'production' && !env.APP_URL)
+    ctx.addIssue({
+      code: 'custom',
+      path: ['APP_URL'],
+      message: 'is not set (required in production: the public address of the app)',
+    });
+}
+
 /** The storage settings as the storage package takes them, from variables checked by `envStorage`. */
 export function storageSettings(e: {
   S3_ENDPOINT?: string;

@@ -1,9 +1,11 @@
 // The demo buyer's history: dies bought and received, with their purchase orders and prices.
+import type { BidLine } from '@kerfmark/contracts';
 import type { Knex } from 'knex';
+import { insertSubmittedBid } from './seedBid';
 import { analyseDieline } from '@kerfmark/dieline';
 import type { Storage } from '@kerfmark/storage';
 import { nextPurchaseOrderNumber } from '../../src/services/purchaseOrderNumber';
-import { receivedDiePriceRecord } from '../../src/services/receivedDiePriceRecord';
+import { receivedDiePriceRecord } from '../../src/services/priceHistory/receivedDiePriceRecord';
 import { doorHanger, labelSheet, tuckEndCarton } from './demoDielines';
 import { seedImportedPrices } from './demoImportedPrices';
 import { seedOpenBids } from './demoOpenBids';
@@ -81,7 +83,6 @@ export async function seedHistory(knex: Knex, storage: Storage): Promise<void> {
     const { metrics, preview } = analyseDieline(content);
     const awardedAt = atDays(-past.monthsAgo * 30);
     const promised = atDays(-past.monthsAgo * 30 + 7);
-    const total = past.dieCents + past.extrasCents;
     const [{ id: requestId }] = await knex('dieRequests')
       .insert({
         organisationId: org.id,
@@ -116,38 +117,20 @@ export async function seedHistory(knex: Knex, storage: Storage): Promise<void> {
       preview,
       uploadedAt,
     });
-    const lines = [
+    const lines: BidLine[] = [
       { kind: 'die', description: 'Steel-rule die', amountCents: past.dieCents },
       { kind: 'shipping', description: 'Ground', amountCents: past.extrasCents },
     ];
-    const [{ id: bidId }] = await knex('bids')
-      .insert({
-        requestId,
-        shopId: shop.id,
-        status: 'submitted',
-        revision: 1,
-        lines: JSON.stringify(lines),
-        currency: 'USD',
-        totalCents: total,
-        dieCents: past.dieCents,
-        leadDays: 5,
-        promisedShipDate: day(promised),
-        validUntil: day(atDays(-past.monthsAgo * 30 + 30)),
-        submittedAt: atDays(-past.monthsAgo * 30 - 5),
-      })
-      .returning('id');
-    await knex('bidRevisions').insert({
-      bidId,
-      revision: 1,
-      action: 'submitted',
-      lines: JSON.stringify(lines),
+    const { id: bidId, totalCents: total } = await insertSubmittedBid(knex, {
+      requestId,
+      shopId: shop.id,
+      createdBy: estimator.id,
+      lines,
       currency: 'USD',
-      totalCents: total,
       leadDays: 5,
       promisedShipDate: day(promised),
       validUntil: day(atDays(-past.monthsAgo * 30 + 30)),
-      createdBy: estimator.id,
-      createdAt: atDays(-past.monthsAgo * 30 - 5),
+      submittedAt: atDays(-past.monthsAgo * 30 - 5),
     });
     const [{ id: awardId }] = await knex('awards')
       .insert({

@@ -1,8 +1,10 @@
 import type { Knex } from 'knex';
+import type { BidLine } from '@kerfmark/contracts';
+import { insertSubmittedBid } from './seedBid';
 import { addWorkingDays } from '@kerfmark/pricing';
 import { atDays } from './demoRequests';
 
-/** Open bids from two shops on the demo tuck-end carton, so a board and a comparison have content. */
+/** Open bids from two shops on the demo tuck-end carton, so the open requests and a comparison have content. */
 const demoBids = [
   { jobReference: 'LPC-24117', shop: 'Okafor Steel Rule Dies', dieCents: 112_000, leadDays: 6 },
   { jobReference: 'LPC-24117', shop: 'Cedar Bend Die Works', dieCents: 104_500, leadDays: 8 },
@@ -14,40 +16,20 @@ export async function seedOpenBids(knex: Knex): Promise<void> {
     const request = await knex('dieRequests').where({ jobReference: demo.jobReference }).first();
     const shop = await knex('organisations').where({ name: demo.shop }).first();
     const estimator = await knex('users').where({ organisationId: shop.id, role: 'estimator' }).first();
-    const lines = [
+    const lines: BidLine[] = [
       { kind: 'die', description: 'Steel-rule die on 5/8 in board', amountCents: demo.dieCents },
       { kind: 'counter', description: 'Phenolic counter', amountCents: 18_000 },
       { kind: 'shipping', description: 'Ground', amountCents: 4_500 },
     ];
-    const total = demo.dieCents + 22_500;
-    const shipDate = addWorkingDays(new Date().toISOString().slice(0, 10), demo.leadDays);
-    const validUntil = atDays(45).toISOString().slice(0, 10);
-    const [{ id: bidId }] = await knex('bids')
-      .insert({
-        requestId: request.id,
-        shopId: shop.id,
-        status: 'submitted',
-        revision: 1,
-        lines: JSON.stringify(lines),
-        currency: 'USD',
-        totalCents: total,
-        dieCents: demo.dieCents,
-        leadDays: demo.leadDays,
-        promisedShipDate: shipDate,
-        validUntil,
-      })
-      .returning('id');
-    await knex('bidRevisions').insert({
-      bidId,
-      revision: 1,
-      action: 'submitted',
-      lines: JSON.stringify(lines),
-      currency: 'USD',
-      totalCents: total,
-      leadDays: demo.leadDays,
-      promisedShipDate: shipDate,
-      validUntil,
+    await insertSubmittedBid(knex, {
+      requestId: request.id,
+      shopId: shop.id,
       createdBy: estimator.id,
+      lines,
+      currency: 'USD',
+      leadDays: demo.leadDays,
+      promisedShipDate: addWorkingDays(new Date().toISOString().slice(0, 10), demo.leadDays),
+      validUntil: atDays(45).toISOString().slice(0, 10),
     });
   }
 }

@@ -3,7 +3,7 @@ import { checkNeedBy, runHours } from '@kerfmark/pricing';
 import type { AuthUser } from '../auth/passport';
 import { todayIn } from '../lib/todayIn';
 import type { DieRequest, RequestQuestion } from '../models';
-import { primaryFile, toFileDto, toPressDto, toSummary } from '../services/requestViews';
+import { primaryFile, toFileDto, toPressDto, toSummary } from '../dto/requestViews';
 
 /** The parts of a request's page that differ by audience; the presenters fill them in. */
 export type AudienceFields =

@@ -5,12 +5,12 @@ import type { AuthUser } from '../auth/passport';
 import { badRequest, conflict, HttpError, notFound } from '../lib/httpError';
 import { todayIn } from '../lib/todayIn';
 import { Award, Bid, type DieRequest } from '../models';
-import { closeBiddingInside } from './closeBidding';
+import { closeBiddingInside } from './bids/closeBidding';
 import type { ServiceDeps } from './deps';
 import { nextPurchaseOrderNumber } from './purchaseOrderNumber';
 import type { createPurchaseDocumentService } from './purchaseDocumentService';
 import type { createRequestService } from './requestService';
-import { transitionRequest } from './requestStatus';
+import { transitionRequest } from './requests/requestStatus';
 import { tellBidders } from './tellBidders';
 
 type Requests = Pick<ReturnType<typeof createRequestService>, 'factsFor' | 'detail'>;

@@ -5,16 +5,16 @@ import type { AuthUser } from '../auth/passport';
 import { HttpError, notFound } from '../lib/httpError';
 import { Bid, BidRevision, DieRequest } from '../models';
 import { recordAudit } from './auditService';
-import { compareSubmittedBids } from './bidComparison';
-import { bidTerms, type ParsedBid } from './bidTerms';
-import { bidWithRevisions } from './bidWithRevisions';
-import { closeBiddingInside } from './closeBidding';
+import { compareSubmittedBids } from './bids/bidComparison';
+import { bidTerms, type ParsedBid } from './bids/bidTerms';
+import { bidWithRevisions } from './bids/bidWithRevisions';
+import { closeBiddingInside } from './bids/closeBidding';
 import type { ServiceDeps } from './deps';
-import { biddingClosed, ownBid } from './ownBid';
+import { biddingClosed, ownBid } from './bids/ownBid';
 import type { createPriceHistoryService } from './priceHistoryService';
-import { requestDetail } from './requestDetail';
-import { findOwned, findVisible } from './requestLookup';
-import { shopEstimateAid } from './shopEstimateAid';
+import { requestDetail } from './requests/requestDetail';
+import { findOwned, findVisible } from './requests/requestLookup';
+import { shopEstimateAid } from './bids/shopEstimateAid';
 
 /** The revision history row of a bid as it now stands. */
 function revisionRow(bid: Bid, action: BidRevision['action'], actor: AuthUser) {

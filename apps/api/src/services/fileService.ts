@@ -5,7 +5,7 @@ import type { ServiceDeps } from './deps';
 import { storageDown, visibleFile } from './files/fileAccess';
 import { makePrimaryFile, remapLayers, removeFile } from './files/fileChanges';
 import { uploadDieline, type UploadedFile } from './files/uploadDieline';
-import { toFileDto } from './requestViews';
+import { toFileDto } from '../dto/requestViews';
 
 export type { UploadedFile };
 

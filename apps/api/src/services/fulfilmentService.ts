@@ -7,10 +7,10 @@ import type { ServiceDeps } from './deps';
 import type { createLibraryService } from './libraryService';
 import { notifyOrganisation, type Notice } from './notificationService';
 import type { createPriceHistoryService } from './priceHistoryService';
-import { receivedDiePriceRecord } from './receivedDiePriceRecord';
+import { receivedDiePriceRecord } from './priceHistory/receivedDiePriceRecord';
 import type { createRequestService } from './requestService';
-import { transitionRequest } from './requestStatus';
-import { primaryFile } from './requestViews';
+import { transitionRequest } from './requests/requestStatus';
+import { primaryFile } from '../dto/requestViews';
 
 type Requests = Pick<ReturnType<typeof createRequestService>, 'findOwned' | 'detail'>;
 type Library = Pick<ReturnType<typeof createLibraryService>, 'addReceived'>;

@@ -1,5 +1,5 @@
 import type { Press as PressDto, PressCreate, PressUpdate } from '@kerfmark/contracts';
-import { toPressDto } from './requestViews';
+import { toPressDto } from '../dto/requestViews';
 import { PressCreate as PressCreateSchema } from '@kerfmark/contracts';
 import { UniqueViolationError } from 'objection';
 import type { AuthUser } from '../auth/passport';

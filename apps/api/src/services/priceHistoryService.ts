@@ -3,15 +3,15 @@ import type { AuthUser } from '../auth/passport';
 import { notFound } from '../lib/httpError';
 import { DieRequest } from '../models';
 import type { ServiceDeps } from './deps';
-import { fairPriceFor } from './fairPriceFor';
-import { createHistoryFits } from './historyFits';
-import { importPriceRecords } from './importPriceRecords';
-import { priceHistoryChart } from './priceHistoryChart';
-import { priceHistoryCsv } from './priceHistoryCsv';
-import { previewImport } from './priceImport';
-import { priceRecordPage } from './priceRecordPage';
-import type { PriceFilters } from './priceRecordQuery';
-import { primaryFile } from './requestViews';
+import { fairPriceFor } from './priceHistory/fairPriceFor';
+import { createHistoryFits } from './priceHistory/historyFits';
+import { importPriceRecords } from './priceHistory/importPriceRecords';
+import { priceHistoryChart } from './priceHistory/priceHistoryChart';
+import { priceHistoryCsv } from './priceHistory/priceHistoryCsv';
+import { previewImport } from './priceHistory/priceImport';
+import { priceRecordPage } from './priceHistory/priceRecordPage';
+import type { PriceFilters } from './priceHistory/priceRecordQuery';
+import { primaryFile } from '../dto/requestViews';
 
 /** The printer's own price history: records, the fit, fair-price bands and the CSV import and export. */
 export function createPriceHistoryService({ knex }: ServiceDeps) {

@@ -7,8 +7,8 @@ import { Award, Bid, Organisation, User } from '../models';
 import type { ServiceDeps } from './deps';
 import { ocdsRelease } from './documents/ocdsRelease';
 import { purchaseOrderPdf } from './documents/purchaseOrderPdf';
-import { findOwned } from './requestLookup';
-import { primaryFile } from './requestViews';
+import { findOwned } from './requests/requestLookup';
+import { primaryFile } from '../dto/requestViews';
 
 /** The purchase order PDF: for the printer that issued it and the shop it was issued to. Kept once made. */
 export async function purchaseOrderDocument(

@@ -3,12 +3,12 @@ import type { DieRequestCreate, DieRequestDetail, DieRequestUpdate } from '@kerf
 import type { OpenRequestsQuery, RequestListQuery } from '@kerfmark/contracts';
 import type { AuthUser } from '../auth/passport';
 import type { ServiceDeps } from './deps';
-import { requestDetail } from './requestDetail';
-import { createRequest, updateRequest } from './requestEdits';
-import { cancelRequest, publishRequest } from './requestLifecycle';
-import { dieShops, listOwnRequests, openRequestsFor } from './requestLists';
-import { factsFor, findOwned, findVisible, visibleQuery } from './requestLookup';
-import { answerQuestion, askQuestion } from './requestQuestions';
+import { requestDetail } from './requests/requestDetail';
+import { createRequest, updateRequest } from './requests/requestEdits';
+import { cancelRequest, publishRequest } from './requests/requestLifecycle';
+import { dieShops, listOwnRequests, openRequestsFor } from './requests/requestLists';
+import { factsFor, findOwned, findVisible, visibleQuery } from './requests/requestLookup';
+import { answerQuestion, askQuestion } from './requests/requestQuestions';
 
 /** Die requests: each change answers with the request's page as the user now sees it. */
 export function createRequestService(deps: ServiceDeps) {

@@ -1,4 +1,4 @@
-import type { ParsedBid } from '../services/bidTerms';
+import type { ParsedBid } from '../services/bids/bidTerms';
 
 /** A plain bid: one die line, a week's lead time, a price that holds for 60 days. */
 export function aBid(overrides: Partial<ParsedBid> = {}): ParsedBid {

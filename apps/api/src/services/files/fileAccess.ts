@@ -3,7 +3,7 @@ import { assertMay, loadFacts } from '../../access';
 import type { AuthUser } from '../../auth/passport';
 import { HttpError, notFound } from '../../lib/httpError';
 import { DielineFile, type DieRequest } from '../../models';
-import { findVisible } from '../requestLookup';
+import { findVisible } from '../requests/requestLookup';
 
 /** A file of a request this user may see; any other is the same 404. */
 export async function visibleFile(

@@ -3,7 +3,7 @@ import type { AuthUser } from '../../auth/passport';
 import { DielineFile } from '../../models';
 import { recordAudit } from '../auditService';
 import type { ServiceDeps } from '../deps';
-import { toFileDto } from '../requestViews';
+import { toFileDto } from '../../dto/requestViews';
 import { assertMayChangeFiles, ownedFile } from './fileAccess';
 
 /** The file the request's metrics come from; after bidding closes, what the bids and award rest on. */

@@ -7,7 +7,7 @@ import { safeFileName } from '../../lib/safeFileName';
 import { DieRequest, DielineFile } from '../../models';
 import { recordAudit } from '../auditService';
 import type { ServiceDeps } from '../deps';
-import { toFileDto } from '../requestViews';
+import { toFileDto } from '../../dto/requestViews';
 import { assertMayChangeFiles, storageDown } from './fileAccess';
 
 const CONTENT_TYPES: Record<DielineFormat, string> = {

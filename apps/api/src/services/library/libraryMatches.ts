@@ -2,8 +2,8 @@ import type { LibraryDieDto } from '@kerfmark/contracts';
 import { matchDies, type DieShape } from '@kerfmark/dieline';
 import type { Knex } from 'knex';
 import type { AuthUser } from '../../auth/passport';
-import { findOwned } from '../requestLookup';
-import { primaryFile } from '../requestViews';
+import { findOwned } from '../requests/requestLookup';
+import { primaryFile } from '../../dto/requestViews';
 import { toLibraryDieDto, visibleDies } from './libraryDieRows';
 
 /** Library dies that could do the job of this request, best first: at most ten, none retired. */

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { aBid } from '../test/aBid';
-import { actorOf, createOpenRequest, createWorld, knex } from '../test/harness';
-import { todayIn } from '../lib/todayIn';
+import { aBid } from '../../test/aBid';
+import { actorOf, createOpenRequest, createWorld, knex } from '../../test/harness';
+import { todayIn } from '../../lib/todayIn';
 import { bidTerms } from './bidTerms';
 
 const isWeekend = (day: string) => [0, 6].includes(new Date(`${day}T12:00:00Z`).getUTCDay());

@@ -1,9 +1,9 @@
 import { formatInZone } from '@kerfmark/contracts';
 import type { Knex } from 'knex';
-import { assertMay, biddingOpen, loadFacts } from '../access';
-import type { AuthUser } from '../auth/passport';
-import { HttpError, notFound } from '../lib/httpError';
-import { Bid, type DieRequest } from '../models';
+import { assertMay, biddingOpen, loadFacts } from '../../access';
+import type { AuthUser } from '../../auth/passport';
+import { HttpError, notFound } from '../../lib/httpError';
+import { Bid, type DieRequest } from '../../models';
 
 /** Why a bid may not be sent or changed now, in the bidder's time zone. */
 export function biddingClosed(request: DieRequest, timeZone: string): HttpError {

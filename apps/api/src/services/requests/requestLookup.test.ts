@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { actorOf, createOpenRequest, createShop, createWorld, knex } from '../test/harness';
-import { aBid } from '../test/aBid';
-import { submitBid } from './bidService';
+import { actorOf, createOpenRequest, createShop, createWorld, knex } from '../../test/harness';
+import { aBid } from '../../test/aBid';
+import { submitBid } from '../bidService';
 import { factsFor, findOwned, findVisible } from './requestLookup';
 
 describe('request lookups', () => {

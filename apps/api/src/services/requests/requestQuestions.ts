@@ -1,9 +1,9 @@
 import type { RequestQuestionDto } from '@kerfmark/contracts';
 import type { Knex } from 'knex';
-import { assertMay, loadFacts, questionDto } from '../access';
-import type { AuthUser } from '../auth/passport';
-import { notFound } from '../lib/httpError';
-import { RequestQuestion } from '../models';
+import { assertMay, loadFacts, questionDto } from '../../access';
+import type { AuthUser } from '../../auth/passport';
+import { notFound } from '../../lib/httpError';
+import { RequestQuestion } from '../../models';
 
 /** A die shop asks the printer about an open request; the access rules say when it may. */
 export async function askQuestion(

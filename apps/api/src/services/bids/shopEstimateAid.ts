@@ -1,5 +1,5 @@
 import type { Knex } from 'knex';
-import type { AuthUser } from '../auth/passport';
+import type { AuthUser } from '../../auth/passport';
 
 export interface EstimateAidRow {
   currency: string;

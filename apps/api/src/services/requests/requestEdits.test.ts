@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import { DieRequest } from '../models';
-import { aBid } from '../test/aBid';
-import { actorOf, createOpenRequest, createOrg, createPress, createWorld, deps, knex } from '../test/harness';
-import { submitBid } from './bidService';
+import { DieRequest } from '../../models';
+import { aBid } from '../../test/aBid';
+import { actorOf, createOpenRequest, createOrg, createPress, createWorld, deps, knex } from '../../test/harness';
+import { submitBid } from '../bidService';
 import { createRequest, updateRequest } from './requestEdits';
 
 const HOUR = 3_600_000;

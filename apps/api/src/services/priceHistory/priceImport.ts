@@ -10,7 +10,7 @@ import {
 import { complexityOf, type Complexity } from '@kerfmark/dieline';
 import { isCurrencyCode, parseMoneyInput } from '@kerfmark/pricing';
 import Papa from 'papaparse';
-import { badRequest } from '../lib/httpError';
+import { badRequest } from '../../lib/httpError';
 
 export const MAX_IMPORT_ROWS = 20_000;
 

@@ -1,8 +1,8 @@
 import type { Knex } from 'knex';
 import type { QueryBuilder } from 'objection';
-import { TIES_PART } from '../access/loadFacts';
-import type { RequestTies } from '../models';
-import { SUBMITTED_BIDS_PART, toSubmittedBid } from './submittedBids';
+import { TIES_PART } from '../../access/loadFacts';
+import type { RequestTies } from '../../models';
+import { SUBMITTED_BIDS_PART, toSubmittedBid } from '../bids/submittedBids';
 import {
   DielineFile,
   type Award,
@@ -10,7 +10,7 @@ import {
   type Organisation,
   type Press,
   type RequestQuestion,
-} from '../models';
+} from '../../models';
 
 export type RequestPart =
   | 'organisation'

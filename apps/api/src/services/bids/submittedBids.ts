@@ -1,4 +1,4 @@
-import type { SubmittedBid } from '../models/SubmittedBid';
+import type { SubmittedBid } from '../../models/SubmittedBid';
 
 /**
  * A request's submitted bids as a JSON array, lowest total first, each with its shop's name and

@@ -1,12 +1,12 @@
 import { PublishReady } from '@kerfmark/contracts';
-import { badRequest, HttpError } from '../lib/httpError';
-import { sealOnCancel } from '../access';
-import type { AuthUser } from '../auth/passport';
-import { parse } from '../lib/parse';
-import type { ServiceDeps } from './deps';
+import { badRequest, HttpError } from '../../lib/httpError';
+import { sealOnCancel } from '../../access';
+import type { AuthUser } from '../../auth/passport';
+import { parse } from '../../lib/parse';
+import type { ServiceDeps } from '../deps';
 import { factsFor, findOwned } from './requestLookup';
 import { transitionRequest } from './requestStatus';
-import { tellBidders } from './tellBidders';
+import { tellBidders } from '../tellBidders';
 
 /** Opens a complete draft for bids: dates, stock and at least one measured dieline. */
 export async function publishRequest(deps: ServiceDeps, actor: AuthUser, id: number): Promise<void> {

@@ -1,10 +1,10 @@
 import type { Transition } from '@kerfmark/contracts';
 import type { Knex } from 'knex';
-import { factsOf, refuse, transitionRefusal } from '../access';
-import type { AuthUser } from '../auth/passport';
-import { DieRequest } from '../models';
-import { recordAudit } from './auditService';
-import type { ReminderPlanner } from './deps';
+import { factsOf, refuse, transitionRefusal } from '../../access';
+import type { AuthUser } from '../../auth/passport';
+import { DieRequest } from '../../models';
+import { recordAudit } from '../auditService';
+import type { ReminderPlanner } from '../deps';
 
 /**
  * The one place a request changes status: the move must be in the transition table, made by

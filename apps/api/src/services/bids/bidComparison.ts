@@ -1,14 +1,14 @@
 import { pricedLength, type BidComparisonDto } from '@kerfmark/contracts';
 import { compareBids } from '@kerfmark/pricing';
 import type { Knex } from 'knex';
-import { factsOf, visibleParts } from '../access';
-import type { AuthUser } from '../auth/passport';
-import { HttpError, notFound } from '../lib/httpError';
-import { todayIn } from '../lib/todayIn';
-import type { createPriceHistoryService } from './priceHistoryService';
-import { visibleQuery } from './requestLookup';
-import { readRequestGraph } from './requestGraph';
-import { primaryFile } from './requestViews';
+import { factsOf, visibleParts } from '../../access';
+import type { AuthUser } from '../../auth/passport';
+import { HttpError, notFound } from '../../lib/httpError';
+import { todayIn } from '../../lib/todayIn';
+import type { createPriceHistoryService } from '../priceHistoryService';
+import { visibleQuery } from '../requests/requestLookup';
+import { readRequestGraph } from '../requests/requestGraph';
+import { primaryFile } from '../../dto/requestViews';
 
 /**
  * The sealed bids, opened, side by side: only the printer, and only once the sealed-bid rule

@@ -1,11 +1,11 @@
 import type { DieRequestCreate, DieRequestUpdate } from '@kerfmark/contracts';
 import type { Knex } from 'knex';
-import { assertMay, deadlineMoveRefusal, refuse, type RequestFacts } from '../access';
-import type { AuthUser } from '../auth/passport';
-import { badRequest } from '../lib/httpError';
-import { DieRequest, Organisation, Press } from '../models';
-import { recordAudit } from './auditService';
-import type { ServiceDeps } from './deps';
+import { assertMay, deadlineMoveRefusal, refuse, type RequestFacts } from '../../access';
+import type { AuthUser } from '../../auth/passport';
+import { badRequest } from '../../lib/httpError';
+import { DieRequest, Organisation, Press } from '../../models';
+import { recordAudit } from '../auditService';
+import type { ServiceDeps } from '../deps';
 import { factsFor } from './requestLookup';
 import { tellOfDeadline } from './tellOfDeadline';
 

@@ -1,13 +1,13 @@
 import type { DieRequestSummary, OpenRequestsQuery, Page, RequestListQuery } from '@kerfmark/contracts';
 import type { Knex } from 'knex';
 import type { z } from 'zod';
-import type { AuthUser } from '../auth/passport';
-import { containsPattern } from '../lib/containsPattern';
-import { distanceMiles } from '../lib/distanceMiles';
-import { knownPostcodes, postcodeCentre } from '../lib/postcodeCentre';
-import { DieRequest, Organisation } from '../models';
+import type { AuthUser } from '../../auth/passport';
+import { containsPattern } from '../../lib/containsPattern';
+import { distanceMiles } from '../../lib/distanceMiles';
+import { knownPostcodes, postcodeCentre } from '../../lib/postcodeCentre';
+import { DieRequest, Organisation } from '../../models';
 import { openRequestsPage } from './openRequestsPage';
-import { toSummary } from './requestViews';
+import { toSummary } from '../../dto/requestViews';
 
 /** The printer's own requests: filtered, sorted and paged. */
 export async function listOwnRequests(

@@ -1,10 +1,10 @@
 import type { Knex } from 'knex';
-import { biddingOpen } from '../access';
-import type { AuthUser } from '../auth/passport';
-import type { DieRequest } from '../models';
-import type { ServiceDeps } from './deps';
-import { transitionRequest } from './requestStatus';
-import { tellBidders } from './tellBidders';
+import { biddingOpen } from '../../access';
+import type { AuthUser } from '../../auth/passport';
+import type { DieRequest } from '../../models';
+import type { ServiceDeps } from '../deps';
+import { transitionRequest } from '../requests/requestStatus';
+import { tellBidders } from '../tellBidders';
 
 /**
  * Closes bidding on a locked request inside the caller's transaction. Purchasing's early close is

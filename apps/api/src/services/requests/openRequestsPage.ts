@@ -1,11 +1,11 @@
 import type { OpenRequestsQuery } from '@kerfmark/contracts';
 import type { Knex } from 'knex';
 import type { z } from 'zod';
-import { containsPattern } from '../lib/containsPattern';
-import { DieRequest } from '../models';
-import { biddableByShop } from '../access';
+import { containsPattern } from '../../lib/containsPattern';
+import { DieRequest } from '../../models';
+import { biddableByShop } from '../../access';
 import { readRequestGraph } from './requestGraph';
-import { SUMMARY_COLUMNS } from './requestViews';
+import { SUMMARY_COLUMNS } from '../../dto/requestViews';
 
 export interface BoardRow {
   distanceMiles: number | null;

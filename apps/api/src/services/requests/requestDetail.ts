@@ -1,12 +1,12 @@
 import type { DieRequestDetail } from '@kerfmark/contracts';
 import type { Knex } from 'knex';
-import { factsOf, presentToOwner, presentToShop } from '../access';
-import type { AuthUser } from '../auth/passport';
-import { notFound } from '../lib/httpError';
-import { Bid } from '../models';
+import { factsOf, presentToOwner, presentToShop } from '../../access';
+import type { AuthUser } from '../../auth/passport';
+import { notFound } from '../../lib/httpError';
+import { Bid } from '../../models';
 import { readRequestGraph } from './requestGraph';
 import { visibleQuery } from './requestLookup';
-import { bidWithRevisions } from './bidWithRevisions';
+import { bidWithRevisions } from '../bids/bidWithRevisions';
 
 /** A request's page as this user may see it: the owner's view, or a die shop's with its own bid. */
 export async function requestDetail(knex: Knex, actor: AuthUser, id: number): Promise<DieRequestDetail> {

@@ -2,10 +2,10 @@ import type { BidInput } from '@kerfmark/contracts';
 import { addWorkingDays, sumCents } from '@kerfmark/pricing';
 import type { Knex } from 'knex';
 import type { z } from 'zod';
-import type { AuthUser } from '../auth/passport';
-import { badRequest } from '../lib/httpError';
-import { todayIn } from '../lib/todayIn';
-import type { DieRequest } from '../models';
+import type { AuthUser } from '../../auth/passport';
+import { badRequest } from '../../lib/httpError';
+import { todayIn } from '../../lib/todayIn';
+import type { DieRequest } from '../../models';
 
 export type ParsedBid = z.output<typeof BidInput>;
 

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { actorOf, createOrg, createWorld, knex } from '../test/harness';
+import { actorOf, createOrg, createWorld, knex } from '../../test/harness';
 import { shopEstimateAid } from './shopEstimateAid';
 
 async function priceRecord(

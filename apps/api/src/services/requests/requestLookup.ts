@@ -1,8 +1,8 @@
 import type { Knex } from 'knex';
-import { loadFacts, visibleTo, type RequestFacts } from '../access';
-import type { AuthUser } from '../auth/passport';
-import { notFound } from '../lib/httpError';
-import { DieRequest } from '../models';
+import { loadFacts, visibleTo, type RequestFacts } from '../../access';
+import type { AuthUser } from '../../auth/passport';
+import { notFound } from '../../lib/httpError';
+import { DieRequest } from '../../models';
 
 /** The query for a request this user may see. */
 export function visibleQuery(actor: AuthUser, id: number, trx?: Knex.Transaction) {

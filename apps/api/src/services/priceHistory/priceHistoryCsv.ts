@@ -1,7 +1,7 @@
 import { toMajorString } from '@kerfmark/pricing';
 import type { Knex } from 'knex';
 import Papa from 'papaparse';
-import { formulaSafe } from '../lib/formulaSafe';
+import { formulaSafe } from '../../lib/formulaSafe';
 import { filteredRecords, toPriceRecordDto, type PriceFilters } from './priceRecordQuery';
 
 /** The filtered history as CSV, money in major units (as people read it), dates as YYYY-MM-DD. */

@@ -1,8 +1,8 @@
 import { formatInZone } from '@kerfmark/contracts';
 import type { Knex } from 'knex';
-import type { DieRequest } from '../models';
-import type { ServiceDeps } from './deps';
-import { tellBidders } from './tellBidders';
+import type { DieRequest } from '../../models';
+import type { ServiceDeps } from '../deps';
+import { tellBidders } from '../tellBidders';
 
 /** Every bidder hears of a new deadline, in its own time zone. */
 export async function tellOfDeadline(

@@ -1,8 +1,8 @@
 import type { ImportRowError } from '@kerfmark/contracts';
 import type { Knex } from 'knex';
-import type { AuthUser } from '../auth/passport';
-import { HttpError } from '../lib/httpError';
-import { recordAudit } from './auditService';
+import type { AuthUser } from '../../auth/passport';
+import { HttpError } from '../../lib/httpError';
+import { recordAudit } from '../auditService';
 import { readImport } from './priceImport';
 
 /** Imports every row or none: a single bad row stops the whole file, with each error listed. */
