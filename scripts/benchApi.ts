@@ -1,4 +1,4 @@
-// Benchmark: API throughput and latency (autocannon, 50 connections) on the open-requests board,
+// Benchmark: API throughput and latency (autocannon, 50 connections) on the open requests,
 // a request's detail and the bid comparison, over 2,000 requests, 20,000 bids and 100,000 price
 // records; each beside a bare Express + pg route that reads the same rows (ratio).
 import path from 'node:path';
@@ -12,7 +12,7 @@ import { profile, repoRoot } from './lib/profile';
 import {
   ENTRY_GZIP_TARGET_BYTES,
   formatWebRows,
-  measureBoardRender,
+  measureOpenRequestsRender,
   measureEntryChunk,
   WEB_TABLE_HEADER,
 } from './benchWeb';
@@ -59,8 +59,8 @@ try {
   const pool = new pg.Pool({ connectionString: env.DATABASE_URL, max: 10 });
   const shopId = (await knex('organisations').where({ name: 'Brightline Rule & Die' }).first()).id;
   const base = express();
-  base.get('/board', async (_req, res) => {
-    // The board's reads: the page of matching requests in full, and the count of all matches.
+  base.get('/open-requests', async (_req, res) => {
+    // The open requests' reads: the page of matching requests in full, and the count of all matches.
     const matching = `FROM die_requests r WHERE r.status = 'open' AND r.bid_deadline > now() AND r.visibility = 'public'
        AND r.id NOT IN (SELECT request_id FROM request_declines WHERE shop_id = $1)`;
     const [page, count] = await Promise.all([
@@ -120,9 +120,9 @@ try {
 
   const cases = [
     {
-      name: 'open-requests board',
+      name: 'open requests',
       api: [`${env.APP_URL}/api/open-requests`, estimatorToken],
-      base: `${baseUrl}/board`,
+      base: `${baseUrl}/open-requests`,
     },
     {
       name: 'request detail',
@@ -160,17 +160,17 @@ try {
   console.log('|----------------------|--------|--------|--------|--------|---------------|-------|--------|');
   for (const row of rows) console.log(row);
 
-  // The web app over the same data set: what index.html loads, and the board's first row in Chromium.
+  // The web app over the same data set: what index.html loads, and the open requests' first row in Chromium.
   const entry = await measureEntryChunk(path.join(repoRoot, 'apps/web/dist'));
-  const board = await measureBoardRender(
+  const openRequests = await measureOpenRequestsRender(
     env.APP_URL!,
     { email: 'grace@brightline.example', password: 'kerfmark-demo-2026' },
     5,
   );
   console.log(
-    `\nWeb app: the entry index.html loads, and the open-requests board cold in headless Chromium (median of ${board.runs})`,
+    `\nWeb app: the entry index.html loads, and the open requests cold in headless Chromium (median of ${openRequests.runs})`,
   );
-  console.log([...WEB_TABLE_HEADER, ...formatWebRows(entry, board)].join('\n'));
+  console.log([...WEB_TABLE_HEADER, ...formatWebRows(entry, openRequests)].join('\n'));
   results.push(
     {
       figure: 'web entry (JS + CSS), gzip',
@@ -179,9 +179,9 @@ try {
       met: entry.gzip < ENTRY_GZIP_TARGET_BYTES,
     },
     {
-      figure: 'board first row, cold, Chromium',
-      value: `${board.firstRowMs.toFixed(0)} ms`,
-      baseline: `FCP ${board.fcpMs.toFixed(0)} ms`,
+      figure: 'open requests first row, cold, Chromium',
+      value: `${openRequests.firstRowMs.toFixed(0)} ms`,
+      baseline: `FCP ${openRequests.fcpMs.toFixed(0)} ms`,
     },
   );
   recordResults(results);

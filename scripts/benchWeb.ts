@@ -1,5 +1,5 @@
 // Benchmark: the web app's first load. (1) The entry that index.html loads (its module script, the
-// chunks it preloads and its stylesheet), raw and gzip; (2) the open-requests board in headless
+// chunks it preloads and its stylesheet), raw and gzip; (2) the open requests in headless
 // Chromium: navigation start to the first table row on screen, cold (a new browser context per
 // run, so an empty cache), median of N runs.
 //
@@ -18,33 +18,33 @@ export { measureEntryChunk, type EntryChunk };
 const KB = 1000;
 export const ENTRY_GZIP_TARGET_BYTES = 250 * KB;
 const ROW = '[data-test="open-requests-table"] tr.ant-table-row';
-const FIRST_ROW_MARK = 'bench:board-first-row';
+const FIRST_ROW_MARK = 'bench:open-requests-first-row';
 
 const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)]!;
 
-export interface BoardRender {
+export interface OpenRequestsRender {
   runs: number;
-  /** Navigation start to the frame that first holds a visible board row (median, ms). */
+  /** Navigation start to the frame that first holds a visible open-requests row (median, ms). */
   firstRowMs: number;
   /** The browser's first-contentful-paint (median, ms). */
   fcpMs: number;
   /** DOMContentLoaded end (median, ms). */
   domContentLoadedMs: number;
-  /** The board's API answer fully received (median, ms). */
-  boardApiMs: number;
+  /** The open requests' API answer fully received (median, ms). */
+  openRequestsApiMs: number;
   /** Bytes over the wire before the first row (median). */
   transferBytes: number;
   samples: Array<{
     firstRowMs: number;
     fcpMs: number;
     domContentLoadedMs: number;
-    boardApiMs: number;
+    openRequestsApiMs: number;
     transferBytes: number;
   }>;
 }
 
 /**
- * Runs in the page before its own scripts: marks the first frame in which a board row is in the
+ * Runs in the page before its own scripts: marks the first frame in which an open-requests row is in the
  * document with a layout box (the same test of visibility Playwright uses). Functions sent to the
  * page must not declare named functions inside: tsx adds `__name()` calls the page lacks.
  */
@@ -62,29 +62,29 @@ function readTimings(mark: string) {
   const fcp = performance.getEntriesByName('first-contentful-paint')[0];
   const firstRow = performance.getEntriesByName(mark)[0]!.startTime;
   const resources = performance.getEntriesByType('resource') as PerformanceResourceTiming[];
-  const board = resources.find((r) => new URL(r.name).pathname === '/api/open-requests');
+  const answer = resources.find((r) => new URL(r.name).pathname === '/api/open-requests');
   const before = resources.filter((r) => r.responseEnd <= firstRow);
   return {
     firstRowMs: firstRow,
     fcpMs: fcp?.startTime ?? Number.NaN,
     domContentLoadedMs: nav?.domContentLoadedEventEnd ?? Number.NaN,
-    boardApiMs: board?.responseEnd ?? Number.NaN,
+    openRequestsApiMs: answer?.responseEnd ?? Number.NaN,
     transferBytes: (nav?.transferSize ?? 0) + before.reduce((total, r) => total + r.transferSize, 0),
   };
 }
 
 /**
  * Signs in once through the sign-in page (the app keeps its token in localStorage), then loads the
- * open-requests board `runs` times, each in a new browser context carrying only that storage.
+ * open requests `runs` times, each in a new browser context carrying only that storage.
  */
-export async function measureBoardRender(
+export async function measureOpenRequestsRender(
   appUrl: string,
   credentials: { email: string; password: string },
   runs = 5,
-): Promise<BoardRender> {
+): Promise<OpenRequestsRender> {
   if (!Number.isInteger(runs) || runs < 1) throw new Error(`runs must be a whole number of at least 1, not ${runs}`);
   if (!process.env.CHROMIUM_PATH)
-    ensureDebianPackage('/usr/bin/chromium', 'chromium', 'The board render benchmark (headless Chromium)');
+    ensureDebianPackage('/usr/bin/chromium', 'chromium', 'The open-requests render benchmark (headless Chromium)');
   const origin = new URL(appUrl).origin;
   const browser = await launch();
   try {
@@ -100,32 +100,32 @@ export async function measureBoardRender(
     const storageState = await signIn.storageState();
     await signIn.close();
 
-    const samples: BoardRender['samples'] = [];
+    const samples: OpenRequestsRender['samples'] = [];
     for (let i = 0; i < runs; i++) {
       const context = await browser.newContext({ viewport: { width: 1366, height: 900 }, storageState });
       try {
         await context.addInitScript(markFirstRow, [ROW, FIRST_ROW_MARK] as [string, string]);
-        const board = await context.newPage();
-        await board.goto(`${origin}/open-requests`, { waitUntil: 'commit' });
-        await board
+        const page = await context.newPage();
+        await page.goto(`${origin}/open-requests`, { waitUntil: 'commit' });
+        await page
           .waitForFunction((mark) => performance.getEntriesByName(mark).length > 0, FIRST_ROW_MARK, { timeout: 30_000 })
           .catch(() => {
             throw new Error(
-              `no board row appeared within 30 s (the page is at ${board.url()}); does ${credentials.email} see open requests?`,
+              `no open-requests row appeared within 30 s (the page is at ${page.url()}); does ${credentials.email} see open requests?`,
             );
           });
-        samples.push(await board.evaluate(readTimings, FIRST_ROW_MARK));
+        samples.push(await page.evaluate(readTimings, FIRST_ROW_MARK));
       } finally {
         await context.close();
       }
     }
-    const med = (key: keyof BoardRender['samples'][number]) => median(samples.map((s) => s[key]));
+    const med = (key: keyof OpenRequestsRender['samples'][number]) => median(samples.map((s) => s[key]));
     return {
       runs,
       firstRowMs: med('firstRowMs'),
       fcpMs: med('fcpMs'),
       domContentLoadedMs: med('domContentLoadedMs'),
-      boardApiMs: med('boardApiMs'),
+      openRequestsApiMs: med('openRequestsApiMs'),
       transferBytes: med('transferBytes'),
       samples,
     };
@@ -143,7 +143,7 @@ export const WEB_TABLE_HEADER = [
 ];
 
 /** Table rows for the web figures, in the shape of the bench's other tables. */
-export function formatWebRows(entry: EntryChunk, board?: BoardRender): string[] {
+export function formatWebRows(entry: EntryChunk, openRequests?: OpenRequestsRender): string[] {
   const row = (figure: string, value: string, note: string) =>
     `| ${figure.padEnd(38)} | ${value.padStart(9)} | ${note.padEnd(39)} |`;
   const rows = [
@@ -158,14 +158,14 @@ export function formatWebRows(entry: EntryChunk, board?: BoardRender): string[] 
       `${entry.files.length} files; JS ${kb(entry.jsGzip)} gzip, CSS ${kb(entry.cssGzip)}`,
     ),
   ];
-  if (board) {
-    const note = `median of ${board.runs} cold loads`;
+  if (openRequests) {
+    const note = `median of ${openRequests.runs} cold loads`;
     rows.push(
-      row('board: first row visible', ms(board.firstRowMs), note),
-      row('board: first-contentful-paint', ms(board.fcpMs), note),
-      row('board: DOMContentLoaded', ms(board.domContentLoadedMs), note),
-      row('board: API answer received', ms(board.boardApiMs), note),
-      row('board: bytes before first row', kb(board.transferBytes), 'over the wire (assets gzipped)'),
+      row('open requests: first row visible', ms(openRequests.firstRowMs), note),
+      row('open requests: first-contentful-paint', ms(openRequests.fcpMs), note),
+      row('open requests: DOMContentLoaded', ms(openRequests.domContentLoadedMs), note),
+      row('open requests: API answer received', ms(openRequests.openRequestsApiMs), note),
+      row('open requests: bytes before first row', kb(openRequests.transferBytes), 'over the wire (assets gzipped)'),
     );
   }
   return rows;
@@ -175,8 +175,8 @@ if (process.argv[1] && import.meta.url === pathToFileURL(process.argv[1]).href) 
   try {
     const entry = await measureEntryChunk(process.env.BENCH_WEB_DIST ?? path.join(repoRoot, 'apps/web/dist'));
     const appUrl = process.env.BENCH_WEB_URL;
-    const board = appUrl
-      ? await measureBoardRender(
+    const openRequests = appUrl
+      ? await measureOpenRequestsRender(
           appUrl,
           {
             email: process.env.BENCH_WEB_EMAIL ?? 'grace@brightline.example',
@@ -189,8 +189,8 @@ if (process.argv[1] && import.meta.url === pathToFileURL(process.argv[1]).href) 
       console.log(
         `  ${f.kind.padEnd(14)} ${f.file.padEnd(44)} ${kb(f.raw).padStart(9)} raw ${kb(f.gzip).padStart(9)} gzip`,
       );
-    if (!board) console.log('  (set BENCH_WEB_URL to a running app to time the board too)');
-    console.log([...WEB_TABLE_HEADER, ...formatWebRows(entry, board)].join('\n'));
+    if (!openRequests) console.log('  (set BENCH_WEB_URL to a running app to time the open requests too)');
+    console.log([...WEB_TABLE_HEADER, ...formatWebRows(entry, openRequests)].join('\n'));
   } catch (error) {
     console.error(`benchmark failed: ${(error as Error).stack}`);
     process.exitCode = 1;

@@ -15,8 +15,8 @@ describe('import loops', () => {
 
   it('reads imports of the source, across workspace packages too', () => {
     const graph = importGraph();
-    const bidService = path.join(repoRoot, 'apps/api/src/services/bidService.ts');
-    expect(graph.get(bidService)).toContain(path.join(repoRoot, 'packages/pricing/src/index.ts'));
+    const bidTerms = path.join(repoRoot, 'apps/api/src/services/bids/bidTerms.ts');
+    expect(graph.get(bidTerms)).toContain(path.join(repoRoot, 'packages/pricing/src/index.ts'));
   });
 
   it('no module of the project imports itself back, not even through types', () => {
