@@ -16,7 +16,7 @@ export {
 } from './metrics/complexity';
 export { BEND_MIN_DEGREES } from './metrics/bends';
 export { PUNCH_MAX_IN } from './metrics/contours';
-export { DEFAULT_MARGIN_IN } from './metrics/board';
+export { DEFAULT_MARGIN_IN, fitsPress } from './metrics/board';
 export type { Press, Size } from './metrics/board';
 export type { LengthByType } from './metrics/lengths';
 export type { DielinePreview, PreviewPath } from './preview';

@@ -103,4 +103,21 @@ describe('checkArrival', () => {
       ok: false,
     });
   });
+
+  // Common practice: presses run on working days, so a run due on a Saturday (or a holiday) has to
+  // finish the working day before; the run starts the working day after the die arrives.
+  it('ends the run on the last working day on or before a weekend or holiday need-by date', () => {
+    // Need-by Sat 5 Dec, one 8-hour shift: the run is Fri 4 Dec, so the die must arrive Thu 3 Dec.
+    expect(checkArrival({ needByDate: '2026-12-05', dieReadyBy: '2026-12-04', runHours: 8 })).toMatchObject({
+      latestArrival: '2026-12-03',
+      slackDays: -1,
+      ok: false,
+    });
+    // Need-by Fri 25 Dec, a holiday: the run is Thu 24 Dec, the die due Wed 23 Dec.
+    const holidays = new Set(['2026-12-25']);
+    expect(checkArrival({ needByDate: '2026-12-25', dieReadyBy: '2026-12-23', runHours: 8, holidays })).toMatchObject({
+      latestArrival: '2026-12-23',
+      slackDays: 0,
+    });
+  });
 });

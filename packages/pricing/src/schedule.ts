@@ -55,6 +55,11 @@ export function addWorkingDays(start: string, days: number, holidays: ReadonlySe
   return fromUtc(ms);
 }
 
+/** `date` itself if it is a working day, else the working day before it. */
+export function lastWorkingDayOnOrBefore(date: string, holidays: ReadonlySet<string> = new Set()): string {
+  return isWorkingDay(date, holidays) ? date : addWorkingDays(date, -1, holidays);
+}
+
 /** Working days from `from` to `to`, counting `to` but not `from`; negative when `to` is earlier. */
 export function workingDaysBetween(from: string, to: string, holidays: ReadonlySet<string> = new Set()): number {
   const a = toUtc(from);
@@ -108,7 +113,8 @@ export function checkArrival(opts: {
 }): NeedByCheck {
   const holidays = opts.holidays ?? new Set<string>();
   const runDays = Math.ceil(opts.runHours / (opts.hoursPerDay ?? 8));
-  const latestArrival = addWorkingDays(opts.needByDate, -runDays, holidays);
+  // The run needs working days: a need-by date on a weekend or holiday ends it the working day before.
+  const latestArrival = addWorkingDays(lastWorkingDayOnOrBefore(opts.needByDate, holidays), -runDays, holidays);
   const slackDays = workingDaysBetween(opts.dieReadyBy, latestArrival, holidays);
   return { dieReadyBy: opts.dieReadyBy, runDays, latestArrival, slackDays, ok: slackDays >= 0 };
 }

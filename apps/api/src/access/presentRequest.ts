@@ -1,5 +1,6 @@
 import type { DieRequestDetail, RequestQuestionDto } from '@kerfmark/contracts';
 import { checkNeedBy, runHours } from '@kerfmark/pricing';
+import { fitsPress } from '@kerfmark/dieline';
 import type { AuthUser } from '../auth/passport';
 import { todayIn } from '../lib/todayIn';
 import type { DieRequest, RequestQuestion } from '../models';
@@ -27,10 +28,7 @@ export function requestFields(request: DieRequest, actor: AuthUser): Omit<DieReq
   const board = file?.analysisStatus === 'done' ? file.metrics?.board : undefined;
   const press = request.press ?? null;
   const fits =
-    board && press
-      ? (board.width <= press.maxSheetWidthIn && board.height <= press.maxSheetLengthIn) ||
-        (board.height <= press.maxSheetWidthIn && board.width <= press.maxSheetLengthIn)
-      : null;
+    board && press ? fitsPress(board, { widthIn: press.maxSheetWidthIn, lengthIn: press.maxSheetLengthIn }) : null;
   const hours = press && request.runSheets ? runHours(request.runSheets, press.typicalSpeedSph) : null;
   const needBy = request.needByDate
     ? {
