@@ -86,6 +86,7 @@ declare module 'vue' {
     NotificationBell: typeof import('./components/NotificationBell.vue')['default']
     PressDatesStep: typeof import('./components/request-form/PressDatesStep.vue')['default']
     PressFormModal: typeof import('./components/PressFormModal.vue')['default']
+    PressRunFields: typeof import('./components/PressRunFields.vue')['default']
     PriceCharts: typeof import('./components/PriceCharts.vue')['default']
     PriceImportModal: typeof import('./components/PriceImportModal.vue')['default']
     QueryState: typeof import('./components/QueryState.vue')['default']

@@ -1,3 +1,4 @@
+import { CUTTING_RULE_HEIGHTS_IN } from '@kerfmark/stock';
 import { z } from 'zod';
 
 export const pressKinds = ['platen', 'flatbed', 'rotary'] as const;
@@ -24,6 +25,23 @@ const Speed = z
   .positive('A speed must be more than 0')
   .max(50_000, 'A speed is at most 50,000 sheets an hour');
 
+// Common practice: one, two or three shifts a day; 8 hours is the usual shift.
+const ShiftsPerDay = z
+  .number({ error: 'Enter the shifts a day' })
+  .int('Whole shifts')
+  .min(1, 'At least 1 shift a day')
+  .max(3, 'At most 3 shifts a day');
+const ShiftHours = z
+  .number({ error: 'Enter the hours of a shift' })
+  .min(1, 'A shift is at least 1 hour')
+  .max(12, 'A shift is at most 12 hours')
+  .multipleOf(0.25, 'Enter hours in quarters');
+
+const CuttingRuleHeight = z.union(
+  CUTTING_RULE_HEIGHTS_IN.map((h) => z.literal(h)),
+  { error: `Choose a cutting rule height: ${CUTTING_RULE_HEIGHTS_IN.join(' in or ')} in` },
+);
+
 const PressFields = z.object({
   name: z.string({ error: 'Enter a name' }).trim().min(1, 'Enter a name').max(120, 'A name has at most 120 characters'),
   kind: PressKind,
@@ -31,22 +49,38 @@ const PressFields = z.object({
   maxSheetLengthIn: SheetSide,
   typicalSpeedSph: Speed,
   maxSpeedSph: Speed,
+  shiftsPerDay: ShiftsPerDay,
+  shiftHours: ShiftHours,
+  /** The cutting rule height the press's dies are made to; creasing rule height follows from it. */
+  cuttingRuleHeightIn: CuttingRuleHeight,
   active: z.boolean({ error: 'Choose whether the press is in use' }),
 });
 
 const speedOrder = (v: { typicalSpeedSph?: number; maxSpeedSph?: number }) =>
   v.typicalSpeedSph === undefined || v.maxSpeedSph === undefined || v.typicalSpeedSph <= v.maxSpeedSph;
 const speedOrderIssue = { error: 'The typical speed cannot be above the maximum speed', path: ['typicalSpeedSph'] };
+const dayFits = (v: { shiftsPerDay?: number; shiftHours?: number }) =>
+  v.shiftsPerDay === undefined || v.shiftHours === undefined || v.shiftsPerDay * v.shiftHours <= 24;
+const dayFitsIssue = { error: 'The shifts add up to more than 24 hours a day', path: ['shiftHours'] };
 
-export const PressCreate = PressFields.extend({ active: PressFields.shape.active.default(true) }).refine(
-  speedOrder,
-  speedOrderIssue,
-);
+/** Hours the press runs in a working day: its shifts times their length. */
+export const pressHoursPerDay = (press: { shiftsPerDay: number; shiftHours: number }) =>
+  press.shiftsPerDay * press.shiftHours;
+
+export const PressCreate = PressFields.extend({
+  active: PressFields.shape.active.default(true),
+  shiftsPerDay: ShiftsPerDay.default(1),
+  shiftHours: ShiftHours.default(8),
+  cuttingRuleHeightIn: CuttingRuleHeight.default(0.937),
+})
+  .refine(speedOrder, speedOrderIssue)
+  .refine(dayFits, dayFitsIssue);
 export type PressCreate = z.infer<typeof PressCreate>;
 
 export const PressUpdate = PressFields.partial()
   .refine((v) => Object.keys(v).length > 0, { error: 'Nothing to change' })
-  .refine(speedOrder, speedOrderIssue);
+  .refine(speedOrder, speedOrderIssue)
+  .refine(dayFits, dayFitsIssue);
 export type PressUpdate = z.infer<typeof PressUpdate>;
 
 export const Press = PressFields.extend({

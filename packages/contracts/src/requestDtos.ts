@@ -73,6 +73,7 @@ export interface DieRequestDetail extends DieRequestSummary {
   pieceHeightIn: number | null;
   stockName: string | null;
   caliperIn: number | null;
+  crushedCaliperIn: number | null;
   stockWeightGsm: number | null;
   grain: Grain | null;
   stockKind: StockKind;

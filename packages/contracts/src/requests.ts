@@ -57,6 +57,13 @@ const DieRequestFields = z.object({
     .max(0.5, 'At most 0.5 in')
     .nullable()
     .optional(),
+  // Corrugated only: the board pressed flat under the creasing rule, thinner than its caliper.
+  crushedCaliperIn: z
+    .number({ error: 'Enter the crushed thickness' })
+    .min(0.001, 'At least 0.001 in')
+    .max(0.5, 'At most 0.5 in')
+    .nullable()
+    .optional(),
   stockWeightGsm: z
     .number({ error: 'Enter the stock weight' })
     .min(20, 'At least 20 g/m²')

@@ -13,14 +13,14 @@ describe('creasingGuidance', () => {
     const g = creasingGuidance({ caliperIn: halfMm, stockKind: 'paperboard', grainParallelToCrease: false });
     expect(g.rule).toEqual({ points: 2, thickness: { in: 0.028, mm: 0.71 } });
     expect(g.channelFactor).toBe(1.5);
-    expect(g.channelWidth.mm).toBe(1.46);
-    expect(g.creasingRuleHeight.mm).toBe(23.3);
+    expect(g.channelWidth?.mm).toBe(1.46);
+    expect(g.creasingRuleHeight?.mm).toBe(23.3);
     expect(g.cuttingRuleHeight).toEqual({ in: 0.937, mm: 23.8 });
     // Channel depth about the caliper (common practice).
     expect(g.channelDepth).toEqual({ in: 0.02, mm: 0.5 });
     // Arithmetic in inches: 0.937 − 0.5 / 25.4 = 0.91731 → 0.917; 1.5 × 0.019685 + 0.028 = 0.05753 → 0.058.
-    expect(g.creasingRuleHeight.in).toBe(0.917);
-    expect(g.channelWidth.in).toBe(0.058);
+    expect(g.creasingRuleHeight?.in).toBe(0.917);
+    expect(g.channelWidth?.in).toBe(0.058);
     expect(g.warnings).toEqual([]);
     expect(g.note).toBe(GUIDANCE_NOTE);
   });
@@ -29,7 +29,7 @@ describe('creasingGuidance', () => {
     // Common practice: 1.3 × caliper + rule thickness, grain parallel. Arithmetic: 1.3 × 0.50 + 0.7112 = 1.3612 → 1.36 mm.
     const g = creasingGuidance({ caliperIn: halfMm, stockKind: 'paperboard', grainParallelToCrease: true });
     expect(g.channelFactor).toBe(1.3);
-    expect(g.channelWidth.mm).toBe(1.36);
+    expect(g.channelWidth?.mm).toBe(1.36);
   });
 
   it('takes the wider factor and says so when the grain is not given', () => {
@@ -46,15 +46,16 @@ describe('creasingGuidance', () => {
     ).toBe(1.5);
   });
 
-  it('treats paper like paperboard', () => {
-    // Common practice gives factors for paperboard only; paper takes them. Arithmetic for 0.008 in
-    // paper, grain parallel: 1.3 × 0.008 + 0.028 = 0.0384 in = 0.97536 mm → 0.98 mm; across: 1.5 × 0.008 + 0.028 = 0.04 in = 1.016 mm → 1.02 mm.
-    expect(
-      creasingGuidance({ caliperIn: 0.008, stockKind: 'paper', grainParallelToCrease: true }).channelWidth,
-    ).toEqual({ in: 0.038, mm: 0.98 });
-    expect(
-      creasingGuidance({ caliperIn: 0.008, stockKind: 'paper', grainParallelToCrease: false }).channelWidth,
-    ).toEqual({ in: 0.04, mm: 1.02 });
+  it('gives paper about twice its caliper plus the rule, grain or not', () => {
+    // Paper mills' published creasing guides (from memory): channel ≈ 2 × paper caliper + rule width.
+    // Arithmetic for 0.008 in paper: 2 × 0.008 + 0.028 = 0.044 in = 1.1176 mm → 1.12 mm.
+    for (const grainParallelToCrease of [true, false, null]) {
+      const g = creasingGuidance({ caliperIn: 0.008, stockKind: 'paper', grainParallelToCrease });
+      expect(g.channelFactor).toBe(2);
+      expect(g.channelWidth).toEqual({ in: 0.044, mm: 1.12 });
+      // One factor either way: no warning about the grain.
+      expect(g.warnings).toEqual([]);
+    }
   });
 
   it('uses a 3 pt rule for heavier board', () => {
@@ -63,20 +64,44 @@ describe('creasingGuidance', () => {
     const g = creasingGuidance({ caliperIn: 0.03, stockKind: 'paperboard', grainParallelToCrease: false });
     expect(g.rule).toEqual({ points: 3, thickness: { in: 0.042, mm: 1.07 } });
     expect(g.channelWidth).toEqual({ in: 0.087, mm: 2.21 });
-    expect(g.creasingRuleHeight.in).toBe(0.907);
+    expect(g.creasingRuleHeight?.in).toBe(0.907);
   });
 
-  it('uses the corrugated factor and a heavier rule for corrugated', () => {
-    // Common practice: about 1.8 to 2.0 × caliper + rule thickness for corrugated; 4 pt = 0.056 in,
-    // 6 pt = 0.084 in. Arithmetic: 1/16 in flute, across: 2.0 × 0.0625 + 0.056 = 0.181 in = 4.5974 mm.
-    const across = creasingGuidance({ caliperIn: 0.0625, stockKind: 'corrugated', grainParallelToCrease: false });
+  it('sizes corrugated on its crushed thickness, and waits for it', () => {
+    // Common practice: about 1.8 to 2.0 × the crushed board thickness + rule thickness; 4 pt =
+    // 0.056 in, 6 pt = 0.084 in. A 1/16 in flute crushed to 0.03 in, across: 2.0 × 0.03 + 0.056
+    // = 0.116 in = 2.9464 mm → 2.95 mm; creasing rule 0.937 − 0.03 = 0.907 in; depth 0.03 in.
+    const across = creasingGuidance({
+      caliperIn: 0.0625,
+      crushedCaliperIn: 0.03,
+      stockKind: 'corrugated',
+      grainParallelToCrease: false,
+    });
     expect(across.rule.points).toBe(4);
     expect(across.channelFactor).toBe(2);
-    expect(across.channelWidth).toEqual({ in: 0.181, mm: 4.6 });
-    // Arithmetic: parallel, 1.8 × 0.0625 + 0.056 = 0.1685 in = 4.2799 mm.
-    const parallel = creasingGuidance({ caliperIn: 0.0625, stockKind: 'corrugated', grainParallelToCrease: true });
+    expect(across.creasedThickness).toEqual({ in: 0.03, mm: 0.76 });
+    expect(across.channelWidth).toEqual({ in: 0.116, mm: 2.95 });
+    expect(across.creasingRuleHeight?.in).toBe(0.907);
+    expect(across.channelDepth?.in).toBe(0.03);
+    // Arithmetic: parallel, 1.8 × 0.03 + 0.056 = 0.11 in = 2.794 mm → 2.79 mm.
+    const parallel = creasingGuidance({
+      caliperIn: 0.0625,
+      crushedCaliperIn: 0.03,
+      stockKind: 'corrugated',
+      grainParallelToCrease: true,
+    });
     expect(parallel.channelFactor).toBe(1.8);
-    expect(parallel.channelWidth.mm).toBe(4.28);
+    expect(parallel.channelWidth?.mm).toBe(2.79);
+    // Without the crushed thickness: the rule, but no channel or height, and a warning asking for it.
+    const waiting = creasingGuidance({ caliperIn: 0.0625, stockKind: 'corrugated', grainParallelToCrease: false });
+    expect(waiting.rule.points).toBe(4);
+    expect(waiting.channelWidth).toBeNull();
+    expect(waiting.creasingRuleHeight).toBeNull();
+    expect(waiting.warnings.map((w) => w.code)).toEqual(['crushed-not-given']);
+    // A crushed thickness above the caliper is no crushing.
+    expect(() => creasingGuidance({ caliperIn: 0.0625, crushedCaliperIn: 0.07, stockKind: 'corrugated' })).toThrow(
+      /crushedCaliperIn .* at most/,
+    );
     // Arithmetic: 6 pt = 0.084 in × 25.4 = 2.1336 mm → 2.13 mm.
     expect(creasingGuidance({ caliperIn: 0.16, stockKind: 'corrugated', grainParallelToCrease: false }).rule).toEqual({
       points: 6,

@@ -9,8 +9,13 @@ export interface CreasingInput {
   stockKind: StockKind;
   /** Whether the grain (for corrugated, the flutes) runs parallel to the crease; not given when unknown. */
   grainParallelToCrease?: boolean | null;
-  /** Cutting rule height in the die; 0.937 in unless given. */
+  /** Cutting rule height in the die (the press's setting); 0.937 in unless given. */
   ruleHeightIn?: number;
+  /**
+   * Corrugated only: the board's crushed (compacted) thickness under the creasing rule, which
+   * sizes the channel and the creasing rule's height; the full caliper (the flute) would not.
+   */
+  crushedCaliperIn?: number | null;
   /** Distance from this creasing rule to the nearest other rule, when the layout is known. */
   nearestRuleGapIn?: number | null;
 }
@@ -21,30 +26,36 @@ export interface Length {
   mm: number;
 }
 
-export type CreasingWarningCode = 'grain-not-given' | 'rules-too-close';
+export type CreasingWarningCode = 'grain-not-given' | 'rules-too-close' | 'crushed-not-given';
 
 export interface CreasingGuidance {
   stockKind: StockKind;
   caliper: Length;
   rule: { points: RulePoints; thickness: Length };
   cuttingRuleHeight: Length;
-  /** Cutting rule height less the caliper; a little lower still with a metal-based counter. */
-  creasingRuleHeight: Length;
-  /** The factor on the caliper in channel width = factor × caliper + rule thickness. */
+  /**
+   * The thickness the creasing rule and channel are sized on: the caliper, or for corrugated the
+   * crushed thickness; null for corrugated whose crushed thickness is not given.
+   */
+  creasedThickness: Length | null;
+  /** Cutting rule height less the creased thickness; a little lower still with a metal-based counter. */
+  creasingRuleHeight: Length | null;
+  /** The factor on the thickness in channel width = factor × thickness + rule thickness. */
   channelFactor: number;
-  channelWidth: Length;
-  channelDepth: Length;
+  channelWidth: Length | null;
+  channelDepth: Length | null;
   warnings: Array<{ code: CreasingWarningCode; text: string }>;
   note: string;
 }
 
 /**
- * Channel factors (common practice): paperboard 1.3 to 1.5, the lower when the grain runs
- * parallel to the crease; corrugated about 1.8 to 2.0, read the same way for the flutes.
- * Paper takes paperboard's. Unknown grain takes the higher, wider factor.
+ * Channel factors: paperboard 1.3 to 1.5, the lower when the grain runs parallel to the crease
+ * (common practice); corrugated about 1.8 to 2.0 on the crushed thickness, read the same way for
+ * the flutes (common practice); paper about 2 × caliper + rule width either way (paper mills'
+ * published creasing guides, from memory). Unknown grain takes the higher, wider factor.
  */
 const CHANNEL_FACTOR: Readonly<Record<StockKind, { parallel: number; across: number }>> = {
-  paper: { parallel: 1.3, across: 1.5 },
+  paper: { parallel: 2, across: 2 },
   paperboard: { parallel: 1.3, across: 1.5 },
   corrugated: { parallel: 1.8, across: 2.0 },
 };
@@ -58,8 +69,9 @@ const MAX_RULE_HEIGHT_IN = 3;
 
 /**
  * Suggested creasing rule and counter channel for a stock: the rule thickness from the
- * trade's bands, creasing rule height = cutting rule height − caliper, channel width =
- * factor × caliper + rule thickness, channel depth ≈ caliper. Guidance, carried in `note`.
+ * trade's bands, creasing rule height = cutting rule height − thickness, channel width =
+ * factor × thickness + rule thickness, channel depth ≈ thickness, where the thickness is the
+ * caliper, or corrugated's crushed thickness. Guidance, carried in `note`.
  */
 export function creasingGuidance(input: CreasingInput): CreasingGuidance {
   const caliperIn = checkNumber('caliperIn', input.caliperIn, { above: 0, atMost: MAX_CALIPER_IN, unit: 'in' });
@@ -78,13 +90,20 @@ export function creasingGuidance(input: CreasingInput): CreasingGuidance {
       ? null
       : checkNumber('nearestRuleGapIn', input.nearestRuleGapIn, { above: 0, atMost: MAX_RULE_GAP_IN, unit: 'in' });
 
+  const crushedIn =
+    input.crushedCaliperIn == null
+      ? null
+      : checkNumber('crushedCaliperIn', input.crushedCaliperIn, { above: 0, atMost: caliperIn, unit: 'in' });
+  // Paper and paperboard crease on their caliper; corrugated on its crushed thickness only.
+  const creasedIn = stockKind === 'corrugated' ? crushedIn : caliperIn;
+
   const points = creasingRuleFor(caliperIn, stockKind);
   const thicknessIn = RULE_THICKNESS_IN[points];
   const factors = CHANNEL_FACTOR[stockKind];
   const channelFactor = parallel === true ? factors.parallel : factors.across;
 
   const warnings: CreasingGuidance['warnings'] = [];
-  if (parallel === null) {
+  if (parallel === null && factors.parallel !== factors.across) {
     warnings.push({
       code: 'grain-not-given',
       text: `The grain direction is not given, so the channel uses the wider factor (${factors.across}); with the grain parallel to the crease it would be ${factors.parallel}.`,
@@ -97,15 +116,23 @@ export function creasingGuidance(input: CreasingInput): CreasingGuidance {
     });
   }
 
+  if (creasedIn === null) {
+    warnings.push({
+      code: 'crushed-not-given',
+      text: 'Give the crushed board thickness (the board pressed flat under the creasing rule): corrugated creases on it, not on the full caliper, so the channel and the creasing rule height wait for it.',
+    });
+  }
+
   return {
     stockKind,
     caliper: lengthOf(caliperIn),
     rule: { points, thickness: lengthOf(thicknessIn) },
     cuttingRuleHeight: lengthOf(ruleHeightIn),
-    creasingRuleHeight: lengthOf(ruleHeightIn - caliperIn),
+    creasedThickness: creasedIn === null ? null : lengthOf(creasedIn),
+    creasingRuleHeight: creasedIn === null ? null : lengthOf(ruleHeightIn - creasedIn),
     channelFactor,
-    channelWidth: lengthOf(channelFactor * caliperIn + thicknessIn),
-    channelDepth: lengthOf(caliperIn),
+    channelWidth: creasedIn === null ? null : lengthOf(channelFactor * creasedIn + thicknessIn),
+    channelDepth: creasedIn === null ? null : lengthOf(creasedIn),
     warnings,
     note: GUIDANCE_NOTE,
   };

@@ -9,6 +9,10 @@ export type RulePoints = keyof typeof RULE_THICKNESS_IN;
 /** The usual cutting rule height (common practice): 0.937 in, 23.80 mm. */
 export const CUTTING_RULE_HEIGHT_IN = 0.937;
 
+/** Cutting rule heights in use (common practice): 0.937 in (23.80 mm) and 0.918 in (23.32 mm). */
+export const CUTTING_RULE_HEIGHTS_IN = [0.937, 0.918] as const;
+export type CuttingRuleHeight = (typeof CUTTING_RULE_HEIGHTS_IN)[number];
+
 /**
  * Caliper bands for the creasing rule (common practice; the trade picks from a few stock
  * thicknesses rather than computing one): paper and paperboard up to 0.024 in (24 pt, about

@@ -1,4 +1,4 @@
-import type { OrgKind, Role } from '@kerfmark/contracts';
+import type { OrgKind, PressKind, Role } from '@kerfmark/contracts';
 
 // The demo scenario's organisations, people and presses: invented, for the demo only.
 
@@ -12,11 +12,12 @@ interface DemoOrg {
   users: Array<{ email: string; name: string; role: Role }>;
   presses?: Array<{
     name: string;
-    kind: 'platen' | 'flatbed' | 'rotary';
+    kind: PressKind;
     maxSheetWidthIn: number;
     maxSheetLengthIn: number;
     typicalSpeedSph: number;
     maxSpeedSph: number;
+    shiftsPerDay?: number;
   }>;
 }
 
@@ -49,6 +50,7 @@ export const demoOrganisations: DemoOrg[] = [
         maxSheetLengthIn: 40,
         typicalSpeedSph: 5000,
         maxSpeedSph: 7800,
+        shiftsPerDay: 2,
       },
       {
         name: 'Old platen (20 × 28)',

@@ -1,4 +1,4 @@
-import type { DieRequestDetail, RequestQuestionDto } from '@kerfmark/contracts';
+import { pressHoursPerDay, type DieRequestDetail, type RequestQuestionDto } from '@kerfmark/contracts';
 import { checkNeedBy, runHours } from '@kerfmark/pricing';
 import { fitsPress } from '@kerfmark/dieline';
 import type { AuthUser } from '../auth/passport';
@@ -38,6 +38,7 @@ export function requestFields(request: DieRequest, actor: AuthUser): Omit<DieReq
           needByDate: request.needByDate,
           leadDays: request.plannedLeadDays,
           runHours: hours ?? 0,
+          hoursPerDay: press ? pressHoursPerDay(press) : undefined,
         }),
       }
     : null;
@@ -47,6 +48,7 @@ export function requestFields(request: DieRequest, actor: AuthUser): Omit<DieReq
     pieceHeightIn: request.pieceHeightIn,
     stockName: request.stockName,
     caliperIn: request.caliperIn,
+    crushedCaliperIn: request.crushedCaliperIn,
     stockWeightGsm: request.stockWeightGsm,
     grain: request.grain,
     stockKind: request.stockKind,

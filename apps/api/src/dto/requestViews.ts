@@ -35,6 +35,9 @@ export function toPressDto(press: Press): PressDto {
     maxSheetLengthIn: press.maxSheetLengthIn,
     typicalSpeedSph: press.typicalSpeedSph,
     maxSpeedSph: press.maxSpeedSph,
+    shiftsPerDay: press.shiftsPerDay,
+    shiftHours: press.shiftHours,
+    cuttingRuleHeightIn: press.cuttingRuleHeightIn,
     active: press.active,
     createdAt: press.createdAt.toISOString(),
   };

@@ -29,6 +29,7 @@ export class DieRequest extends Model {
   pieceHeightIn!: number | null;
   stockName!: string | null;
   caliperIn!: number | null;
+  crushedCaliperIn!: number | null;
   stockWeightGsm!: number | null;
   grain!: Grain | null;
   stockKind!: 'paper' | 'paperboard' | 'corrugated';

@@ -1,5 +1,5 @@
 import { Model } from 'objection';
-import type { PressKind } from '@kerfmark/contracts';
+import type { Press as PressDto, PressKind } from '@kerfmark/contracts';
 
 export class Press extends Model {
   static override tableName = 'presses';
@@ -12,6 +12,9 @@ export class Press extends Model {
   maxSheetLengthIn!: number;
   typicalSpeedSph!: number;
   maxSpeedSph!: number;
+  shiftsPerDay!: number;
+  shiftHours!: number;
+  cuttingRuleHeightIn!: PressDto['cuttingRuleHeightIn'];
   active!: boolean;
   createdAt!: Date;
 }

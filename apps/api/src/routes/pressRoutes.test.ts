@@ -41,6 +41,38 @@ describe('presses', () => {
     ]);
   });
 
+  it('keeps how the press runs: shifts a day, their length and the cutting rule height', async () => {
+    const { tokens } = await createWorld();
+    const auth = { Authorization: `Bearer ${tokens.printerAdmin}` };
+    const created = await request(app).post('/api/presses').set(auth).send(platen());
+    // Common practice: one shift of 8 hours, and 0.937 in cutting rule, unless said otherwise.
+    expect(created.body).toMatchObject({ shiftsPerDay: 1, shiftHours: 8, cuttingRuleHeightIn: 0.937 });
+    const edited = await request(app)
+      .patch(`/api/presses/${created.body.id}`)
+      .set(auth)
+      .send({ shiftsPerDay: 2, shiftHours: 7.5, cuttingRuleHeightIn: 0.918 });
+    expect(edited.status, JSON.stringify(edited.body)).toBe(200);
+    expect(edited.body).toMatchObject({ shiftsPerDay: 2, shiftHours: 7.5, cuttingRuleHeightIn: 0.918 });
+    const height = await request(app)
+      .patch(`/api/presses/${created.body.id}`)
+      .set(auth)
+      .send({ cuttingRuleHeightIn: 0.95 });
+    expect(height.status).toBe(400);
+    expect(Object.keys(height.body.error.fields)).toEqual(['cuttingRuleHeightIn']);
+    // Three shifts of 8.5 hours do not fit a day; checked against the stored shifts too (7.5 h now).
+    const day = await request(app)
+      .patch(`/api/presses/${created.body.id}`)
+      .set(auth)
+      .send({ shiftsPerDay: 3, shiftHours: 8.5 });
+    expect(day.status).toBe(400);
+    expect(Object.keys(day.body.error.fields)).toEqual(['shiftHours']);
+    const third = await request(app).patch(`/api/presses/${created.body.id}`).set(auth).send({ shiftsPerDay: 3 });
+    expect(third.status).toBe(200);
+    const longer = await request(app).patch(`/api/presses/${created.body.id}`).set(auth).send({ shiftHours: 9 });
+    expect(longer.status).toBe(400);
+    expect(Object.keys(longer.body.error.fields)).toEqual(['shiftHours']);
+  });
+
   it('names every invalid field', async () => {
     const { tokens } = await createWorld();
     const res = await request(app).post('/api/presses').set('Authorization', `Bearer ${tokens.printerAdmin}`).send({

@@ -13,6 +13,8 @@ export interface RequestForm {
   pieceHeightIn: number | undefined;
   stockName: string;
   caliperPt: number | undefined;
+  /** Corrugated only, in points like the caliper. */
+  crushedPt: number | undefined;
   /** The weight as typed, in g/m² or in pounds of a US basis grade. */
   stockWeight: number | undefined;
   weightUnit: WeightUnit;
@@ -62,6 +64,7 @@ export function emptyRequestForm(): RequestForm {
     pieceHeightIn: undefined,
     stockName: '',
     caliperPt: undefined,
+    crushedPt: undefined,
     stockWeight: undefined,
     weightUnit: 'gsm',
     stockKind: 'paperboard',
@@ -98,6 +101,8 @@ export function toRequestInput(form: RequestForm): DieRequestCreate {
     pieceHeightIn: form.pieceHeightIn ?? null,
     stockName: blankToNull(form.stockName),
     caliperIn: form.caliperPt ? Math.round(form.caliperPt * 10) / 10000 : null,
+    crushedCaliperIn:
+      form.stockKind === 'corrugated' && form.crushedPt ? Math.round(form.crushedPt * 10) / 10000 : null,
     stockWeightGsm: weightInGsm(form.stockWeight, form.weightUnit),
     stockWeightEntry: form.stockWeight ? `${form.stockWeight} ${weightUnitLabels[form.weightUnit]}` : null,
     stockKind: form.stockKind,
@@ -131,6 +136,7 @@ export function fromRequest(request: DieRequestDetail): RequestForm {
     pieceHeightIn: request.pieceHeightIn ?? undefined,
     stockName: request.stockName ?? '',
     caliperPt: request.caliperIn ? Math.round(request.caliperIn * 10000) / 10 : undefined,
+    crushedPt: request.crushedCaliperIn ? Math.round(request.crushedCaliperIn * 10000) / 10 : undefined,
     ...weightFromEntry(request.stockWeightEntry, request.stockWeightGsm),
     stockKind: request.stockKind,
     grain: request.grain ?? undefined,

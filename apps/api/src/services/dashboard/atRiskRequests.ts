@@ -1,4 +1,4 @@
-import { formatCalendarDate as day, type AtRiskItem } from '@kerfmark/contracts';
+import { formatCalendarDate as day, pressHoursPerDay, type AtRiskItem } from '@kerfmark/contracts';
 import { addWorkingDays, checkArrival, runHours } from '@kerfmark/pricing';
 import { factsOf, visibleParts } from '../../access';
 import type { AuthUser } from '../../auth/passport';
@@ -46,6 +46,7 @@ export async function atRiskRequests(actor: AuthUser): Promise<AtRiskItem[]> {
       needByDate: request.needByDate!,
       dieReadyBy: dieExpected < today ? today : dieExpected,
       runHours: hours,
+      hoursPerDay: request.press ? pressHoursPerDay(request.press) : undefined,
     });
     const late = Boolean(request.lateFlaggedAt);
     if (check.ok && !late) continue;

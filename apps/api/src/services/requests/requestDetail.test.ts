@@ -21,3 +21,17 @@ describe('requestDetail', () => {
     expect((await requestDetail(knex, buyer, request.id)).boardFitsPress).toBe(false);
   });
 });
+
+describe('requestDetail need-by check', () => {
+  it('plans the die-cutting run in the press’s shifts', async () => {
+    const w = await createWorld();
+    const press = await createPress(w.printer); // 4,000 sheets an hour
+    const request = await createOpenRequest(w);
+    // 64,000 sheets at 4,000 an hour: 16 hours, two days of one 8-hour shift, one day of two.
+    await DieRequest.query().patch({ pressId: press.id, runSheets: 64_000 }).findById(request.id);
+    const buyer = actorOf(w.users.buyer, w.printer);
+    expect((await requestDetail(knex, buyer, request.id)).needBy?.runDays).toBe(2);
+    await press.$query().patch({ shiftsPerDay: 2 });
+    expect((await requestDetail(knex, buyer, request.id)).needBy?.runDays).toBe(1);
+  });
+});
