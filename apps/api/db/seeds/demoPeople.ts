@@ -18,6 +18,7 @@ interface DemoOrg {
     typicalSpeedSph: number;
     maxSpeedSph: number;
     shiftsPerDay?: number;
+    cuttingRuleHeightIn?: 0.937 | 0.918;
   }>;
 }
 
@@ -59,6 +60,8 @@ export const demoOrganisations: DemoOrg[] = [
         maxSheetLengthIn: 28,
         typicalSpeedSph: 2000,
         maxSpeedSph: 2800,
+        // An older press whose dies are made to the lower cutting rule height.
+        cuttingRuleHeightIn: 0.918,
       },
     ],
   },

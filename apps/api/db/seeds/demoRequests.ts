@@ -37,7 +37,8 @@ export const demoRequests: DemoRequest[] = [
       runSheets: 12000,
       ruleTypes: ['cut', 'crease'],
       counterWanted: true,
-      deliveryAddress: '2200 N Clybourn Ave, Chicago IL',
+      // An invented street; the postcode is a real area, as postcodes may be.
+      deliveryAddress: '418 Fenwick Yard Lane, Chicago IL',
       deliveryPostcode: '60614',
       notes: 'Nicks at the glue flap corners only, please.',
     },
