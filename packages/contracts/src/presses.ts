@@ -1,4 +1,4 @@
-import { CUTTING_RULE_HEIGHTS_IN } from '@kerfmark/stock';
+import { CUTTING_RULE_HEIGHT_IN, CUTTING_RULE_HEIGHTS_IN } from '@kerfmark/stock';
 import { z } from 'zod';
 
 export const pressKinds = ['platen', 'flatbed', 'rotary'] as const;
@@ -71,7 +71,7 @@ export const PressCreate = PressFields.extend({
   active: PressFields.shape.active.default(true),
   shiftsPerDay: ShiftsPerDay.default(1),
   shiftHours: ShiftHours.default(8),
-  cuttingRuleHeightIn: CuttingRuleHeight.default(0.937),
+  cuttingRuleHeightIn: CuttingRuleHeight.default(CUTTING_RULE_HEIGHT_IN),
 })
   .refine(speedOrder, speedOrderIssue)
   .refine(dayFits, dayFitsIssue);

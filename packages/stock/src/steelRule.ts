@@ -6,12 +6,12 @@ import { checkStockKind, type StockKind } from './stockKind';
 export const RULE_THICKNESS_IN = { 2: 0.028, 3: 0.042, 4: 0.056, 6: 0.084 } as const;
 export type RulePoints = keyof typeof RULE_THICKNESS_IN;
 
-/** The usual cutting rule height (common practice): 0.937 in, 23.80 mm. */
-export const CUTTING_RULE_HEIGHT_IN = 0.937;
-
 /** Cutting rule heights in use (common practice): 0.937 in (23.80 mm) and 0.918 in (23.32 mm). */
 export const CUTTING_RULE_HEIGHTS_IN = [0.937, 0.918] as const;
 export type CuttingRuleHeight = (typeof CUTTING_RULE_HEIGHTS_IN)[number];
+
+/** The usual cutting rule height (common practice): 0.937 in, 23.80 mm. */
+export const CUTTING_RULE_HEIGHT_IN: CuttingRuleHeight = 0.937;
 
 /**
  * Caliper bands for the creasing rule (common practice; the trade picks from a few stock

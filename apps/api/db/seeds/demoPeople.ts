@@ -1,4 +1,4 @@
-import type { OrgKind, PressKind, Role } from '@kerfmark/contracts';
+import type { OrgKind, Press, PressKind, Role } from '@kerfmark/contracts';
 
 // The demo scenario's organisations, people and presses: invented, for the demo only.
 
@@ -18,7 +18,7 @@ interface DemoOrg {
     typicalSpeedSph: number;
     maxSpeedSph: number;
     shiftsPerDay?: number;
-    cuttingRuleHeightIn?: 0.937 | 0.918;
+    cuttingRuleHeightIn?: Press['cuttingRuleHeightIn'];
   }>;
 }
 
