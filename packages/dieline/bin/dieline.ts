@@ -3,7 +3,7 @@ import { readFileSync, statSync } from 'node:fs';
 import { basename } from 'node:path';
 import { parseArgs } from 'node:util';
 import {
-  analyseDieline,
+  analyseDielineAsync,
   type AnalyseOptions,
   COMPLEXITY_RULE,
   DEFAULT_LIMITS,
@@ -17,7 +17,7 @@ import {
 } from '../src/index';
 
 const USAGE =
-  'usage: dieline FILE [--json] [--margin IN] [--map LAYER=TYPE]... [--units in|mm|cm|m|ft|px] [--press WxL]';
+  'usage: dieline FILE [--json] [--margin IN] [--map LAYER=TYPE]... [--units in|mm|cm|m|ft|px] [--press WxL] [--page N]';
 
 class UsageError extends Error {}
 
@@ -31,6 +31,7 @@ function options(argv: string[]): { file: string; json: boolean; opts: AnalyseOp
       map: { type: 'string', multiple: true },
       units: { type: 'string' },
       press: { type: 'string' },
+      page: { type: 'string' },
       help: { type: 'boolean', short: 'h', default: false },
     },
   });
@@ -67,6 +68,11 @@ function options(argv: string[]): { file: string; json: boolean; opts: AnalyseOp
     if (!m) throw new UsageError(`--press "${values.press}" is not WIDTHxLENGTH in inches, e.g. 22x30`);
     opts.press = { widthIn: Number(m[1]), lengthIn: Number(m[2]) };
   }
+  if (values.page !== undefined) {
+    if (!/^\d+$/.test(values.page) || Number(values.page) < 1)
+      throw new UsageError(`--page "${values.page}" is not a page number (1, 2, …)`);
+    opts.page = Number(values.page);
+  }
   return { file: positionals[0]!, json: values.json ?? false, opts };
 }
 
@@ -93,6 +99,7 @@ function table(a: DielineAnalysis, file: string): string {
     ['board', `${f(m.board.width)} × ${f(m.board.height)} in`],
     ['fits press', m.fitsPress === null ? '- (no press given)' : m.fitsPress ? 'yes' : 'no'],
     ['complexity', m.complexity],
+    ...(m.page ? [['page', `${m.page.number} of ${m.page.count}`] as [string, string]] : []),
   ];
   const w = Math.max(...rows.map(([k]) => k.length));
   const lines = rows.map(([k, v]) => `${k.padEnd(w)}  ${v}`);
@@ -104,7 +111,7 @@ function table(a: DielineAnalysis, file: string): string {
   return `${lines.join('\n')}\n`;
 }
 
-function main(): number {
+async function main(): Promise<number> {
   let file = '';
   try {
     const parsed = options(process.argv.slice(2));
@@ -116,7 +123,7 @@ function main(): number {
         `The file is ${(size / 1048576).toFixed(1)} MB; the most accepted is ${DEFAULT_LIMITS.maxBytes / 1048576} MB.`,
       );
     }
-    const result = analyseDieline(new Uint8Array(readFileSync(file)), parsed.opts);
+    const result = await analyseDielineAsync(new Uint8Array(readFileSync(file)), parsed.opts);
     process.stdout.write(parsed.json ? `${JSON.stringify(result.metrics)}\n` : table(result, file));
     return 0;
   } catch (err) {
@@ -147,4 +154,4 @@ function main(): number {
   }
 }
 
-process.exitCode = main();
+process.exitCode = await main();

@@ -102,10 +102,8 @@ describe('analyseDieline', () => {
     expect(m.warnings.join(' ')).toMatch(/Not priced \(no rule type\): "Dims"/);
   });
 
-  it('refuses PDF with a clear way forward', () => {
-    expect(err(() => analyseDieline('%PDF-1.4\n%âãÏÓ\n1 0 obj'))).toMatch(
-      /^UNSUPPORTED_FORMAT: PDF dielines are not read: export the dieline .* as DXF or SVG/,
-    );
+  it('leaves PDF to the asynchronous reader', () => {
+    expect(err(() => analyseDieline('%PDF-1.4\n%âãÏÓ\n1 0 obj'))).toMatch(/^UNSUPPORTED_FORMAT: .*analyseDielineAsync/);
   });
 
   it('refuses a drawing with nothing to measure', () => {

@@ -1,4 +1,4 @@
-import type { DrawingUnits, LayerInfo, RulePath } from './drawing';
+import type { Drawing, DrawingUnits, LayerInfo, RulePath } from './drawing';
 import { DielineError } from './errors';
 import { type DielineFormat, decodeInput, detectFormat, FORMATS } from './input';
 import { DEFAULT_LIMITS, type Limits } from './limits';
@@ -11,6 +11,7 @@ import { countCurves, type LengthByType, lengthsByType, toMm } from './metrics/l
 import { buildPreview, type DielinePreview } from './preview';
 import { createRuleTypeResolver, isRuleType, type LayerMap } from './ruleType';
 import { readDxf } from './dxf/readDxf';
+import { readPdf } from './pdf/readPdf';
 import { readSvg } from './svg/readSvg';
 import { buildChains } from './topology/chains';
 import { removeDuplicates } from './topology/duplicates';
@@ -28,8 +29,10 @@ export interface AnalyseOptions {
   marginIn?: number;
   /** The press to check the board against; fitsPress is null without one. */
   press?: Press | null;
-  /** What one drawing unit is, over $INSUNITS (DXF) or width/height/viewBox (SVG). */
+  /** What one drawing unit is, over $INSUNITS (DXF) or width/height/viewBox (SVG); a PDF's are points. */
   units?: UnitName;
+  /** The PDF page to measure, from 1 (default: the first with stroked lines). */
+  page?: number;
   /** Tighter or looser bounds than DEFAULT_LIMITS. */
   limits?: Partial<Limits>;
 }
@@ -51,6 +54,8 @@ export interface DielineMetrics {
   warnings: string[];
   fitsPress: boolean | null;
   layers: LayerInfo[];
+  /** For a PDF: the page measured, from 1, and how many pages it has. */
+  page?: { number: number; count: number };
 }
 
 export interface DielineAnalysis {
@@ -62,23 +67,46 @@ export interface DielineAnalysis {
   drawingUnits: DrawingUnits;
 }
 
-/** Analyses a DXF or SVG dieline. Throws DielineError, with a code and a plain message, on bad input. */
+/**
+ * Analyses a DXF or SVG dieline, synchronously. A PDF needs analyseDielineAsync (its reader is
+ * asynchronous). Throws DielineError, with a code and a plain message, on bad input.
+ */
 export function analyseDieline(content: string | Uint8Array, opts: AnalyseOptions = {}): DielineAnalysis {
-  checkOptions(opts);
-  const limits: Limits = { ...DEFAULT_LIMITS, ...opts.limits };
-  const text = decodeInput(content, limits.maxBytes);
-  const format = opts.format ?? detectFormat(text, opts.fileName);
-  const resolve = createRuleTypeResolver(opts.layerMap);
+  const { text, format, limits, resolve } = prepare(content, opts);
   if (format === 'pdf') {
-    throw new DielineError(
-      'UNSUPPORTED_FORMAT',
-      'PDF dielines are not read: export the dieline from the drawing program as DXF or SVG and upload that.',
-    );
+    throw new DielineError('UNSUPPORTED_FORMAT', 'A PDF dieline is read by analyseDielineAsync.');
   }
   const drawing =
     format === 'dxf'
       ? readDxf(text, { resolve, limits, units: opts.units })
       : readSvg(text, { resolve, limits, units: opts.units });
+  return measure(drawing, format, opts);
+}
+
+/** Analyses a DXF, SVG or PDF dieline. Rejects with DielineError, with a code and a plain message, on bad input. */
+export async function analyseDielineAsync(
+  content: string | Uint8Array,
+  opts: AnalyseOptions = {},
+): Promise<DielineAnalysis> {
+  const { format, limits, resolve } = prepare(content, opts);
+  if (format !== 'pdf') return analyseDieline(content, { ...opts, format });
+  if (typeof content === 'string') {
+    throw new DielineError('BINARY', 'A PDF is binary: pass its bytes, not text.');
+  }
+  const drawing = await readPdf(content, { resolve, limits, page: opts.page });
+  return measure(drawing, format, opts);
+}
+
+function prepare(content: string | Uint8Array, opts: AnalyseOptions) {
+  checkOptions(opts);
+  const limits: Limits = { ...DEFAULT_LIMITS, ...opts.limits };
+  const text = decodeInput(content, limits.maxBytes);
+  const format = opts.format ?? detectFormat(text, opts.fileName);
+  return { text, format, limits, resolve: createRuleTypeResolver(opts.layerMap) };
+}
+
+/** The metrics and preview of a drawing read from any format. */
+function measure(drawing: Drawing, format: DielineFormat, opts: AnalyseOptions): DielineAnalysis {
   if (drawing.paths.length === 0) {
     throw new DielineError('NO_GEOMETRY', 'The drawing has no lines, arcs or curves to measure.');
   }
@@ -129,6 +157,7 @@ export function analyseDieline(content: string | Uint8Array, opts: AnalyseOption
     warnings,
     fitsPress: opts.press && priced.length > 0 ? fitsPress(board, opts.press) : null,
     layers: [...drawing.layers].sort((a, b) => a.name.localeCompare(b.name) || a.ruleType.localeCompare(b.ruleType)),
+    ...(drawing.page ? { page: drawing.page } : {}),
   };
   return { metrics, preview: buildPreview(paths, boundsOf(paths), drawing.yUp), format, drawingUnits: drawing.units };
 }
@@ -150,6 +179,8 @@ function checkOptions(opts: AnalyseOptions): void {
   }
   if (opts.units !== undefined && !isUnitName(opts.units))
     bad(`Unknown units "${String(opts.units)}"; use in, mm, cm, m, ft or px.`);
+  if (opts.page !== undefined && !(Number.isInteger(opts.page) && opts.page >= 1))
+    bad('The page must be a whole number, 1 or more.');
   for (const [layer, type] of Object.entries(opts.layerMap ?? {})) {
     if (!isRuleType(type))
       bad(`Layer "${layer}" is mapped to "${String(type)}"; use cut, crease, perf, kiss or other.`);

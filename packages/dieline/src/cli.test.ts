@@ -4,6 +4,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
+import { layer, pdfFile, PT, separation } from '../fixtures/pdfFile';
 
 // The command as `npm run -s dieline` runs it: tsx on bin/dieline.ts.
 const root = fileURLToPath(new URL('../../..', import.meta.url));
@@ -70,5 +71,48 @@ describe('dieline command', () => {
     const r = run(fixture('box-mm.dxf'), '--press', 'big');
     expect(r.status).toBe(2);
     expect(r.stderr).toMatch(/--press "big" is not WIDTHxLENGTH/);
+  }, 30_000);
+
+  it('measures a PDF by separation and by layer, on the page asked for', () => {
+    const dir = mkdtempSync(join(tmpdir(), 'dieline-'));
+    const file = join(dir, 'carton.pdf');
+    // Page 1: a 4 × 3 in rectangle on the "Cut" separation (14 in). Page 2: a 5 in line on the
+    // layer "Crease" (grey stroke, no separation).
+    writeFileSync(
+      file,
+      pdfFile(
+        [
+          { content: `/C0 CS 1 SCN 0 0 ${4 * PT} ${3 * PT} re S`, resources: '<< /ColorSpace << /C0 {{cut}} >> >>' },
+          { content: `/OC /L BDC 0 G 0 0 m ${5 * PT} 0 l S EMC`, resources: '<< /Properties << /L {{oc}} >> >>' },
+        ],
+        { objects: { cut: separation('Cut'), oc: layer('Crease') } },
+      ),
+    );
+    const first = run(file, '--json');
+    expect(first.status).toBe(0);
+    expect(JSON.parse(first.stdout)).toMatchObject({ length: { cut: 14, crease: 0 }, page: { number: 1, count: 2 } });
+    const second = run(file, '--json', '--page', '2');
+    expect(JSON.parse(second.stdout)).toMatchObject({ length: { cut: 0, crease: 5 }, page: { number: 2, count: 2 } });
+    expect(run(file, '--page', 'two').status).toBe(2);
+  }, 30_000);
+
+  it('exits non-zero for a PDF that is only an image', () => {
+    const dir = mkdtempSync(join(tmpdir(), 'dieline-'));
+    const file = join(dir, 'scan.pdf');
+    writeFileSync(
+      file,
+      pdfFile([{ content: 'q 612 0 0 792 0 0 cm /I Do Q', resources: '<< /XObject << /I {{img}} >> >>' }], {
+        objects: {
+          img: {
+            dict: '<< /Type /XObject /Subtype /Image /Width 1 /Height 1 /ColorSpace /DeviceGray /BitsPerComponent 8 >>',
+            stream: '\x00',
+          },
+        },
+      }),
+    );
+    const r = run(file, '--json');
+    expect(r.status).toBe(1);
+    expect(r.stdout).toBe('');
+    expect(r.stderr).toMatch(/only an image \(a scan or a flattened export\).*\[NO_VECTORS\]/);
   }, 30_000);
 });

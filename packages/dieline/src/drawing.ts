@@ -37,6 +37,8 @@ export interface Drawing {
   warnings: string[];
   /** Drawing y axis points up (DXF) rather than down (SVG); the preview flips it. */
   yUp: boolean;
+  /** For a PDF: the page measured, from 1, and how many there are. */
+  page?: { number: number; count: number };
 }
 
 /** Collects paths and counts while a reader walks a file, and enforces the size limits. */

@@ -9,6 +9,8 @@ export type DielineErrorCode =
   | 'TRUNCATED'
   | 'TOO_MANY_ENTITIES'
   | 'NO_GEOMETRY'
+  | 'NO_VECTORS'
+  | 'ENCRYPTED'
   | 'BAD_OPTION';
 
 export class DielineError extends Error {

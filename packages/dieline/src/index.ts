@@ -1,6 +1,6 @@
 // Dieline parsing and geometry metrics: pure, no I/O.
 export * from './units';
-export { analyseDieline } from './analyse';
+export { analyseDieline, analyseDielineAsync } from './analyse';
 export type { AnalyseOptions, DielineAnalysis, DielineMetrics } from './analyse';
 export { DielineError } from './errors';
 export type { DielineErrorCode } from './errors';

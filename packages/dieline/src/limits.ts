@@ -8,12 +8,18 @@ export interface Limits {
   maxEntities: number;
   /** Most segments (lines, arcs, curves) accepted. */
   maxSegments: number;
+  /** Most PDF drawing instructions run for a page, its forms included. */
+  maxPdfOperators: number;
+  /** Most bytes a PDF page's drawing instructions may unpack to. */
+  maxPdfContentBytes: number;
 }
 
 export const DEFAULT_LIMITS: Limits = {
   maxBytes: 32 * 1024 * 1024,
   maxEntities: 200_000,
   maxSegments: 1_000_000,
+  maxPdfOperators: 4_000_000,
+  maxPdfContentBytes: 128 * 1024 * 1024,
 };
 
 /** Rule ends closer than this join (0.05 mm), in inches. */

@@ -7,6 +7,8 @@ describe('rule type from names', () => {
     expect(ruleTypeFromName('Die cutting')).toBe('cut');
     expect(ruleTypeFromName('crease-2pt')).toBe('crease');
     expect(ruleTypeFromName('SCORE')).toBe('crease');
+    expect(ruleTypeFromName('Creasing')).toBe('crease');
+    expect(ruleTypeFromName('Scoring rules')).toBe('crease');
     expect(ruleTypeFromName('Perforation')).toBe('perf');
     expect(ruleTypeFromName('kiss')).toBe('kiss');
     expect(ruleTypeFromName('Dimensions')).toBeNull();

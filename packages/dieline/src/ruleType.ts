@@ -7,14 +7,15 @@ export const PRICED_RULE_TYPES: readonly PricedRuleType[] = ['cut', 'crease', 'p
 export type LayerMap = Readonly<Record<string, RuleType>>;
 
 /**
- * Keywords in the order they are tried. "kiss cut" and "perf-cut" names hold "cut" too, so
- * kiss and perf come first; crease and score before cut so "cut-score" is a crease.
+ * Keywords in the order they are tried, as stems so "Creasing" and "Scoring" match too.
+ * "kiss cut" and "perf-cut" names hold "cut" too, so kiss and perf come first; crease and
+ * score before cut so "cut-score" is a crease.
  */
 const KEYWORDS: ReadonlyArray<readonly [string, PricedRuleType]> = [
   ['kiss', 'kiss'],
   ['perf', 'perf'],
-  ['crease', 'crease'],
-  ['score', 'crease'],
+  ['creas', 'crease'],
+  ['scor', 'crease'],
   ['cut', 'cut'],
 ];
 

@@ -1,7 +1,8 @@
 import svgpath from 'svgpath';
 import { arc, curve, line, type Segment } from '../geometry/segment';
 import { ellipsePoint, type EllipseArc, svgArcToCenter } from '../geometry/svgArc';
-import { distToSegment, type Pt } from '../geometry/vec';
+import { bezier } from '../geometry/bezier';
+import type { Pt } from '../geometry/vec';
 
 export interface Subpath {
   segments: Segment[];
@@ -112,23 +113,5 @@ function sameEllipse(a: EllipseArc, b: EllipseArc): boolean {
     Math.abs(Math.sin(a.phi - b.phi)) <= 1e-9 &&
     Math.hypot(end.x - next.x, end.y - next.y) <= tol &&
     Math.abs(Math.cos(a.phi - b.phi) - 1) <= 1e-9
-  );
-}
-
-/** A Bézier curve of any degree by de Casteljau; straight when its controls lie on the chord. */
-function bezier(p: Pt[]): Segment {
-  const first = p[0]!;
-  const last = p[p.length - 1]!;
-  const size = Math.max(...p.map((q) => Math.hypot(q.x - first.x, q.y - first.y)));
-  if (p.every((q) => distToSegment(q, first, last) <= 1e-9 * size)) return line(first, last);
-  return curve(
-    (t) => {
-      let q = p;
-      while (q.length > 1)
-        q = q.slice(1).map((b, i) => ({ x: q[i]!.x + (b.x - q[i]!.x) * t, y: q[i]!.y + (b.y - q[i]!.y) * t }));
-      return q[0]!;
-    },
-    0,
-    1,
   );
 }
