@@ -11,6 +11,7 @@ import { countCurves, type LengthByType, lengthsByType, toMm } from './metrics/l
 import { buildPreview, type DielinePreview } from './preview';
 import { createRuleTypeResolver, isRuleType, type LayerMap } from './ruleType';
 import { readDxf } from './dxf/readDxf';
+import { type LayoutReport, stepAndRepeat, type UpsLayout } from './layout/stepAndRepeat';
 import { readPdf } from './pdf/readPdf';
 import { readSvg } from './svg/readSvg';
 import { buildChains } from './topology/chains';
@@ -33,6 +34,8 @@ export interface AnalyseOptions {
   units?: UnitName;
   /** The PDF page to measure, from 1 (default: the first with stroked lines). */
   page?: number;
+  /** The drawing is one up: lay it out into the whole die, which is what is measured. */
+  layout?: UpsLayout | null;
   /** Tighter or looser bounds than DEFAULT_LIMITS. */
   limits?: Partial<Limits>;
 }
@@ -56,6 +59,8 @@ export interface DielineMetrics {
   layers: LayerInfo[];
   /** For a PDF: the page measured, from 1, and how many pages it has. */
   page?: { number: number; count: number };
+  /** For a one-up drawing: how the whole die measured here was laid out, and one up's lengths. */
+  layout?: LayoutReport & { oneUpLength: LengthByType };
 }
 
 export interface DielineAnalysis {
@@ -80,7 +85,7 @@ export function analyseDieline(content: string | Uint8Array, opts: AnalyseOption
     format === 'dxf'
       ? readDxf(text, { resolve, limits, units: opts.units })
       : readSvg(text, { resolve, limits, units: opts.units });
-  return measure(drawing, format, opts);
+  return measure(drawing, format, opts, limits);
 }
 
 /** Analyses a DXF, SVG or PDF dieline. Rejects with DielineError, with a code and a plain message, on bad input. */
@@ -94,7 +99,7 @@ export async function analyseDielineAsync(
     throw new DielineError('BINARY', 'A PDF is binary: pass its bytes, not text.');
   }
   const drawing = await readPdf(content, { resolve, limits, page: opts.page });
-  return measure(drawing, format, opts);
+  return measure(drawing, format, opts, limits);
 }
 
 function prepare(content: string | Uint8Array, opts: AnalyseOptions) {
@@ -106,11 +111,23 @@ function prepare(content: string | Uint8Array, opts: AnalyseOptions) {
 }
 
 /** The metrics and preview of a drawing read from any format. */
-function measure(drawing: Drawing, format: DielineFormat, opts: AnalyseOptions): DielineAnalysis {
-  if (drawing.paths.length === 0) {
+function measure(read: Drawing, format: DielineFormat, opts: AnalyseOptions, limits: Limits): DielineAnalysis {
+  if (read.paths.length === 0) {
     throw new DielineError('NO_GEOMETRY', 'The drawing has no lines, arcs or curves to measure.');
   }
-  const warnings = [...drawing.warnings];
+  const warnings = [...read.warnings];
+  let drawing = read;
+  let layout: DielineMetrics['layout'];
+  if (opts.layout) {
+    const laid = stepAndRepeat(read, opts.layout, {
+      press: opts.press,
+      marginIn: opts.marginIn ?? DEFAULT_MARGIN_IN,
+      limits,
+    });
+    drawing = laid.drawing;
+    warnings.push(...laid.notes);
+    layout = { ...laid.report, oneUpLength: lengthsByType(removeDuplicates(read.paths).paths) };
+  }
 
   const dedup = removeDuplicates(drawing.paths);
   if (dedup.removed > 0) {
@@ -158,6 +175,7 @@ function measure(drawing: Drawing, format: DielineFormat, opts: AnalyseOptions):
     fitsPress: opts.press && priced.length > 0 ? fitsPress(board, opts.press) : null,
     layers: [...drawing.layers].sort((a, b) => a.name.localeCompare(b.name) || a.ruleType.localeCompare(b.ruleType)),
     ...(drawing.page ? { page: drawing.page } : {}),
+    ...(layout ? { layout } : {}),
   };
   return { metrics, preview: buildPreview(paths, boundsOf(paths), drawing.yUp), format, drawingUnits: drawing.units };
 }

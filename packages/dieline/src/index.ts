@@ -1,6 +1,7 @@
 // Dieline parsing and geometry metrics: pure, no I/O.
 export * from './units';
 export { analyseDieline, analyseDielineAsync } from './analyse';
+export { MAX_UPS, PIECE_GRAINS, type LayoutReport, type PieceGrain, type UpsLayout } from './layout/stepAndRepeat';
 export type { AnalyseOptions, DielineAnalysis, DielineMetrics } from './analyse';
 export { DielineError } from './errors';
 export type { DielineErrorCode } from './errors';
