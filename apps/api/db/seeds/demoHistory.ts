@@ -2,11 +2,11 @@
 import type { BidLine } from '@kerfmark/contracts';
 import type { Knex } from 'knex';
 import { insertSubmittedBid } from './seedBid';
-import { analyseDieline } from '@kerfmark/dieline';
+import { analyseDieline, PRICED_RULE_TYPES } from '@kerfmark/dieline';
 import type { Storage } from '@kerfmark/storage';
 import { nextPurchaseOrderNumber } from '../../src/services/purchaseOrderNumber';
 import { receivedDiePriceRecord } from '../../src/services/priceHistory/receivedDiePriceRecord';
-import { doorHanger, labelSheet, tuckEndCarton } from './demoDielines';
+import { doorHanger, hangTag, labelSheet, pizzaBox, shelfTalker, tuckEndCarton } from './demoDielines';
 import { seedImportedPrices } from './demoImportedPrices';
 import { seedOpenBids } from './demoOpenBids';
 import { atDays, storeDemoDieline } from './demoRequests';
@@ -16,8 +16,9 @@ import { atDays, storeDemoDieline } from './demoRequests';
 const pastDies = [
   {
     title: 'Pizza box, 1 up',
+    ups: 1,
     shop: 'Brightline Rule & Die',
-    dieline: tuckEndCarton,
+    dieline: { name: 'pizza-box-1up.dxf', content: () => pizzaBox({ sizeIn: 10, depthIn: 1.75 }) },
     dieCents: 118_500,
     extrasCents: 14_000,
     monthsAgo: 11,
@@ -25,8 +26,12 @@ const pastDies = [
   },
   {
     title: 'Shelf talker with perforation',
+    ups: 1,
     shop: 'Okafor Steel Rule Dies',
-    dieline: doorHanger,
+    dieline: {
+      name: 'shelf-talker-perf.dxf',
+      content: () => shelfTalker({ widthIn: 4, heightIn: 5, tabHeightIn: 1.25, couponHeightIn: 1.5 }),
+    },
     dieCents: 42_000,
     extrasCents: 3_500,
     monthsAgo: 9,
@@ -34,8 +39,12 @@ const pastDies = [
   },
   {
     title: 'Sample-pack label sheet',
+    ups: 12,
     shop: 'Cedar Bend Die Works',
-    dieline: labelSheet,
+    dieline: {
+      name: 'sample-pack-labels.dxf',
+      content: () => labelSheet({ across: 4, along: 3, widthIn: 2, heightIn: 3, cornerRadiusIn: 0.25, gapIn: 0.125 }),
+    },
     dieCents: 64_500,
     extrasCents: 5_000,
     monthsAgo: 7,
@@ -43,8 +52,12 @@ const pastDies = [
   },
   {
     title: 'Folding carton for candles',
+    ups: 1,
     shop: 'Brightline Rule & Die',
-    dieline: tuckEndCarton,
+    dieline: {
+      name: 'candle-carton-1up.dxf',
+      content: () => tuckEndCarton({ widthIn: 3.25, depthIn: 3.25, heightIn: 3.75, ups: 1 }),
+    },
     dieCents: 109_000,
     extrasCents: 12_500,
     monthsAgo: 5,
@@ -52,8 +65,21 @@ const pastDies = [
   },
   {
     title: 'Hang tag, 12 up',
+    ups: 12,
     shop: 'Okafor Steel Rule Dies',
-    dieline: labelSheet,
+    dieline: {
+      name: 'hang-tag-12up.dxf',
+      content: () =>
+        hangTag({
+          across: 4,
+          along: 3,
+          widthIn: 2,
+          heightIn: 3.5,
+          cornerRadiusIn: 0.25,
+          holeDiameterIn: 0.1875,
+          gapIn: 0.125,
+        }),
+    },
     dieCents: 71_000,
     extrasCents: 4_000,
     monthsAgo: 3,
@@ -61,8 +87,12 @@ const pastDies = [
   },
   {
     title: 'Hotel door hanger',
+    ups: 1,
     shop: 'Cedar Bend Die Works',
-    dieline: doorHanger,
+    dieline: {
+      name: 'hotel-door-hanger.dxf',
+      content: () => doorHanger({ widthIn: 3.5, heightIn: 9, holeDiameterIn: 1.625 }),
+    },
     dieCents: 39_500,
     extrasCents: 3_500,
     monthsAgo: 2,
@@ -79,8 +109,9 @@ export async function seedHistory(knex: Knex, storage: Storage): Promise<void> {
   for (const [i, past] of pastDies.entries()) {
     const shop = await knex('organisations').where({ name: past.shop }).first();
     const estimator = await knex('users').where({ organisationId: shop.id, role: 'estimator' }).first();
-    const content = past.dieline();
+    const content = past.dieline.content();
     const { metrics, preview } = analyseDieline(content);
+    const ruleTypes = PRICED_RULE_TYPES.filter((t) => metrics.length[t] > 0);
     const awardedAt = atDays(-past.monthsAgo * 30);
     const promised = atDays(-past.monthsAgo * 30 + 7);
     const [{ id: requestId }] = await knex('dieRequests')
@@ -91,10 +122,10 @@ export async function seedHistory(knex: Knex, storage: Storage): Promise<void> {
         jobReference: `LPC-2${3100 + i}`,
         status: 'received',
         quantity: 1,
-        ups: 1,
+        ups: past.ups,
         stockName: '18 pt SBS',
         caliperIn: 0.018,
-        ruleTypes: ['cut', 'crease'],
+        ruleTypes,
         pressId: press.id,
         needByDate: day(atDays(-past.monthsAgo * 30 + 14)),
         bidDeadline: atDays(-past.monthsAgo * 30 - 3),
@@ -111,7 +142,7 @@ export async function seedHistory(knex: Knex, storage: Storage): Promise<void> {
     await storeDemoDieline(knex, storage, {
       requestId,
       uploadedBy: purchasing.id,
-      fileName: `${past.dieline.name.replace(/[A-Z]/g, (c) => `-${c.toLowerCase()}`)}.dxf`,
+      fileName: past.dieline.name,
       content,
       metrics,
       preview,
@@ -153,8 +184,8 @@ export async function seedHistory(knex: Knex, storage: Storage): Promise<void> {
       organisationId: org.id,
       name: `${past.title} (LPC-2${3100 + i})`,
       requestId,
-      ups: 1,
-      ruleTypes: ['cut', 'crease'],
+      ups: past.ups,
+      ruleTypes,
       pressId: press.id,
       storageLocation: `Rack ${String.fromCharCode(65 + (i % 3))}-${10 + i}`,
       impressions: [182_000, 64_500, 12_000, 240_000, 31_000, 8_000][i] ?? 0,

@@ -44,7 +44,10 @@ export const demoRequests: DemoRequest[] = [
     },
     deadlineDays: 5,
     needByDays: 21,
-    dieline: { name: 'tuck-end-carton-2up.dxf', content: tuckEndCarton },
+    dieline: {
+      name: 'tuck-end-carton-2up.dxf',
+      content: () => tuckEndCarton({ widthIn: 2.5, depthIn: 1.5, heightIn: 6, ups: 2 }),
+    },
   },
   {
     org: 'Larkspur Press & Carton',
@@ -68,7 +71,11 @@ export const demoRequests: DemoRequest[] = [
     // Tight on purpose: five working days of lead time and the run do not fit in six days.
     needByDays: 6,
     invited: ['Brightline Rule & Die', 'Okafor Steel Rule Dies'],
-    dieline: { name: 'label-sheet-12up.dxf', content: labelSheet },
+    dieline: {
+      name: 'label-sheet-12up.dxf',
+      content: () =>
+        labelSheet({ across: 2, along: 6, widthIn: 3.5, heightIn: 1.5, cornerRadiusIn: 0.125, gapIn: 0.25 }),
+    },
   },
   {
     org: 'Larkspur Press & Carton',
@@ -89,7 +96,10 @@ export const demoRequests: DemoRequest[] = [
     },
     deadlineDays: 6,
     needByDays: 12,
-    dieline: { name: 'door-hanger.dxf', content: doorHanger },
+    dieline: {
+      name: 'door-hanger-coupon.dxf',
+      content: () => doorHanger({ widthIn: 4.25, heightIn: 12, holeDiameterIn: 2, couponHeightIn: 3 }),
+    },
   },
   {
     org: 'Tidewater Print Finishing',
@@ -108,7 +118,10 @@ export const demoRequests: DemoRequest[] = [
     },
     deadlineDays: 4,
     needByDays: 25,
-    dieline: { name: 'tea-carton.dxf', content: tuckEndCarton },
+    dieline: {
+      name: 'tea-carton-2up.dxf',
+      content: () => tuckEndCarton({ widthIn: 3, depthIn: 2.5, heightIn: 5.25, ups: 2 }),
+    },
   },
 ];
 
