@@ -2,7 +2,7 @@ import type { DielineMetrics } from '@kerfmark/dieline';
 import type { StockKind } from '@kerfmark/stock';
 import type { BidDto } from './bids';
 import type { Press } from './presses';
-import type { Grain, RuleType, Visibility } from './requests';
+import type { DielineShows, Grain, PieceGrain, RuleType, Visibility } from './requests';
 import type { RequestAction, RequestStatus } from './requestStatus';
 
 /** The dieline metrics as the analysis reports them (lengths in inches): the dieline package's own type. */
@@ -22,6 +22,8 @@ export interface DielineFileDto {
   analysisError: string | null;
   metrics: DielineMetrics | null;
   layerMap: Record<string, string>;
+  /** A PDF's page the buyer chose to measure; null: the first with stroked lines. */
+  pdfPage: number | null;
 }
 
 export interface DieRequestSummary {
@@ -69,6 +71,11 @@ export interface NeedByPlan {
 }
 
 export interface DieRequestDetail extends DieRequestSummary {
+  dielineShows: DielineShows;
+  upsAcross: number | null;
+  upsAlong: number | null;
+  gutterIn: number | null;
+  pieceGrain: PieceGrain | null;
   pieceWidthIn: number | null;
   pieceHeightIn: number | null;
   stockName: string | null;

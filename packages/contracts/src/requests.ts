@@ -1,3 +1,4 @@
+import { PIECE_GRAINS } from '@kerfmark/dieline';
 import { STOCK_KINDS } from '@kerfmark/stock';
 import { z } from 'zod';
 import { RequestStatus } from './requestStatus';
@@ -17,6 +18,11 @@ export const ruleTypeLabels: Record<RuleType | 'other', string> = {
 
 export const Grain = z.enum(['long', 'short']);
 export type Grain = z.infer<typeof Grain>;
+/** What the uploaded dieline shows: the whole die, or one up to be stepped and repeated. */
+export const DielineShows = z.enum(['whole-die', 'one-up']);
+export type DielineShows = z.infer<typeof DielineShows>;
+export const PieceGrain = z.enum(PIECE_GRAINS);
+export type PieceGrain = z.infer<typeof PieceGrain>;
 export const Visibility = z.enum(['public', 'invited']);
 export type Visibility = z.infer<typeof Visibility>;
 
@@ -47,6 +53,28 @@ const DieRequestFields = z.object({
     .int('A whole number of ups')
     .min(1, 'At least 1 up')
     .max(500, 'At most 500 ups'),
+  dielineShows: DielineShows,
+  upsAcross: z
+    .number({ error: 'Enter the ups across' })
+    .int('A whole number of ups')
+    .min(1, 'At least 1 up')
+    .max(100, 'At most 100 ups')
+    .nullable()
+    .optional(),
+  upsAlong: z
+    .number({ error: 'Enter the ups along' })
+    .int('A whole number of ups')
+    .min(1, 'At least 1 up')
+    .max(100, 'At most 100 ups')
+    .nullable()
+    .optional(),
+  gutterIn: z
+    .number({ error: 'Enter the gutter' })
+    .min(0, '0 or more (0 for shared cuts)')
+    .max(10, 'At most 10 in')
+    .nullable()
+    .optional(),
+  pieceGrain: PieceGrain.nullable().optional(),
   pieceWidthIn: Inches('The finished width').nullable().optional(),
   pieceHeightIn: Inches('The finished height').nullable().optional(),
   stockName: optionalText(120),
@@ -100,6 +128,7 @@ const DieRequestFields = z.object({
 
 const { shape } = DieRequestFields;
 export const DieRequestCreate = DieRequestFields.extend({
+  dielineShows: shape.dielineShows.default('whole-die'),
   stockKind: shape.stockKind.default('paperboard'),
   plannedLeadDays: shape.plannedLeadDays.default(5),
   counterWanted: shape.counterWanted.default(false),
@@ -200,6 +229,11 @@ export const AnswerCreate = z.object({
     .min(1, 'Write the answer')
     .max(4000, 'At most 4,000 characters'),
 });
+/** The PDF page to measure; null measures the first page with stroked lines. */
+export const PdfPageUpdate = z.object({
+  page: z.number({ error: 'Choose a page' }).int('Choose a page').min(1, 'Pages start at 1').max(9999).nullable(),
+});
+
 export const LayerMapUpdate = z.object({
   layerMap: z.record(z.string().max(255), z.enum(['cut', 'crease', 'perf', 'kiss', 'other'])),
 });

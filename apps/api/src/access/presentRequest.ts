@@ -44,6 +44,11 @@ export function requestFields(request: DieRequest, actor: AuthUser): Omit<DieReq
     : null;
   return {
     ...toSummary(request),
+    dielineShows: request.dielineShows,
+    upsAcross: request.upsAcross,
+    upsAlong: request.upsAlong,
+    gutterIn: request.gutterIn,
+    pieceGrain: request.pieceGrain,
     pieceWidthIn: request.pieceWidthIn,
     pieceHeightIn: request.pieceHeightIn,
     stockName: request.stockName,

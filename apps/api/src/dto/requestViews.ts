@@ -23,6 +23,7 @@ export function toFileDto(file: DielineFile): DielineFileDto {
     analysisError: file.analysisError,
     metrics: file.metrics,
     layerMap: file.layerMap ?? {},
+    pdfPage: file.pdfPage ?? null,
   };
 }
 

@@ -1,5 +1,5 @@
 import { Model } from 'objection';
-import type { Grain, RequestStatus, RuleType, Visibility } from '@kerfmark/contracts';
+import type { DielineShows, Grain, PieceGrain, RequestStatus, RuleType, Visibility } from '@kerfmark/contracts';
 import { DielineFile } from './DielineFile';
 import { Organisation } from './Organisation';
 import { Press } from './Press';
@@ -25,6 +25,11 @@ export class DieRequest extends Model {
   status!: RequestStatus;
   quantity!: number;
   ups!: number;
+  dielineShows!: DielineShows;
+  upsAcross!: number | null;
+  upsAlong!: number | null;
+  gutterIn!: number | null;
+  pieceGrain!: PieceGrain | null;
   pieceWidthIn!: number | null;
   pieceHeightIn!: number | null;
   stockName!: string | null;

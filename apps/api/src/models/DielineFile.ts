@@ -21,6 +21,7 @@ export class DielineFile extends Model {
   metrics!: DielineMetrics | null;
   preview!: unknown;
   layerMap!: Record<string, string>;
+  pdfPage!: number | null;
   analysisAttempts!: number;
   analysedAt!: Date | null;
   uploadedAt!: Date;
@@ -47,6 +48,7 @@ export class DielineFile extends Model {
     'analysis_error',
     'metrics',
     'layer_map',
+    'pdf_page',
     'analysis_attempts',
     'analysed_at',
     'uploaded_at',

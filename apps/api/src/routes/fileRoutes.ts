@@ -1,5 +1,5 @@
 import { Router, type RequestHandler } from 'express';
-import { LayerMapUpdate } from '@kerfmark/contracts';
+import { LayerMapUpdate, PdfPageUpdate } from '@kerfmark/contracts';
 import { parse, parseId } from '../lib/parse';
 import { allow } from '../middleware/allow';
 import type { Services } from '../services';
@@ -30,6 +30,11 @@ export function fileRoutes(services: Services, requireAuth: RequestHandler): Rou
   router.put('/:id/layers', printer, async (req, res) => {
     const { layerMap } = parse(LayerMapUpdate, req.body);
     res.json(await services.files.remap(req.user!, id(req.params.id), layerMap));
+  });
+
+  router.put('/:id/page', printer, async (req, res) => {
+    const { page } = parse(PdfPageUpdate, req.body);
+    res.json(await services.files.choosePage(req.user!, id(req.params.id), page));
   });
 
   router.delete('/:id', printer, async (req, res) => {

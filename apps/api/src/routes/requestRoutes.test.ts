@@ -4,6 +4,7 @@ import { describe, expect, it } from 'vitest';
 import { AuditEntry, DielineFile } from '../models';
 import { app, createPress, createWorld, type World } from '../test/harness';
 import { pngBytes, rectangleDxf, rectangleSvg } from '../test/fixtures';
+import { pdfFile, PT, separation } from '@kerfmark/dieline/testing';
 
 const bearer = (token: string) => ({ Authorization: `Bearer ${token}` });
 const inDays = (days: number) => new Date(Date.now() + days * 86_400_000);
@@ -329,5 +330,84 @@ describe('hostile dielines', () => {
     const file = await analysed(w, res.body.id);
     expect(file.analysisStatus).toBe('failed');
     expect(file.analysisError).toMatch(/entities|too many/i);
+  });
+});
+
+describe('PDF and one-up dielines', () => {
+  // A two-page PDF written here: page 1 holds only a title; page 2 a 4 × 3 in rectangle on the
+  // "Cut" separation (14 in) with a 4 in line across it on "Crease" (72 pt = 1 in).
+  const twoPagePdf = Buffer.from(
+    pdfFile(
+      [
+        { content: 'BT /F1 12 Tf 72 700 Td (Carton, 1 up) Tj ET' },
+        {
+          content: `/C0 CS 1 SCN 0 0 ${4 * PT} ${3 * PT} re S /C1 CS 1 SCN 0 ${1.5 * PT} m ${4 * PT} ${1.5 * PT} l S`,
+          resources: '<< /ColorSpace << /C0 {{cut}} /C1 {{crease}} >> >>',
+        },
+      ],
+      { objects: { cut: separation('Cut'), crease: separation('Crease') } },
+    ),
+  );
+
+  it('accepts a PDF by its content, measures its first page with rules, and measures the page chosen', async () => {
+    const w = await createWorld();
+    const draft = await createDraft(w);
+    const res = await upload(w, draft.id, 'carton-export', twoPagePdf);
+    expect(res.status, JSON.stringify(res.body)).toBe(201);
+    expect(res.body).toMatchObject({ format: 'pdf', pdfPage: null });
+    const file = await analysed(w, res.body.id);
+    expect(file.metrics).toMatchObject({ length: { cut: 14, crease: 4 }, page: { number: 2, count: 2 } });
+
+    const pick = (page: unknown, token = w.tokens.buyer) =>
+      request(app).put(`/api/files/${res.body.id}/page`).set(bearer(token)).send({ page });
+    expect((await pick(3)).status).toBe(400); // the PDF has two pages
+    expect((await pick('two')).status).toBe(400);
+    const first = await pick(1);
+    expect(first.status).toBe(200);
+    const failed = await analysed(w, res.body.id);
+    expect(failed).toMatchObject({ analysisStatus: 'failed', pdfPage: 1 });
+    expect(failed.analysisError).toMatch(/^Page 1 of the PDF has no vector lines/);
+    expect((await pick(null)).status).toBe(200);
+    expect((await analysed(w, res.body.id)).metrics.page).toEqual({ number: 2, count: 2 });
+
+    const other = await createWorld();
+    expect((await pick(2, other.tokens.buyer)).status).toBe(404);
+    const dxf = await upload(w, draft.id, 'c.dxf', rectangleDxf);
+    const notPdf = await request(app)
+      .put(`/api/files/${dxf.body.id}/page`)
+      .set(bearer(w.tokens.buyer))
+      .send({ page: 1 });
+    expect(notPdf.status).toBe(400);
+  });
+
+  it('lays a one-up dieline out into the whole die, and measures it again when the layout changes', async () => {
+    const w = await createWorld();
+    expect(
+      (
+        await request(app)
+          .post('/api/requests')
+          .set(bearer(w.tokens.buyer))
+          .send(draftBody({ dielineShows: 'one-up', upsAcross: 3 }))
+      ).status,
+    ).toBe(400);
+    const draft = await createDraft(w, { dielineShows: 'one-up', upsAcross: 3, upsAlong: 4, gutterIn: 0, ups: 1 });
+    const detail = await request(app).get(`/api/requests/${draft.id}`).set(bearer(w.tokens.buyer));
+    expect(detail.body).toMatchObject({ dielineShows: 'one-up', upsAcross: 3, upsAlong: 4, gutterIn: 0, ups: 12 });
+
+    const res = await upload(w, draft.id, 'one-up.pdf', twoPagePdf);
+    const file = await analysed(w, res.body.id);
+    // 3 × 4 ups of 4 × 3 in at a zero gutter: a 12 × 12 in grid, 5 rows and 4 columns of 12 in
+    // cutting rule (shared cuts once), and 12 creases of 4 in.
+    expect(file.metrics.length.cut).toBeCloseTo(108, 6);
+    expect(file.metrics.length.crease).toBeCloseTo(48, 6);
+    expect(file.metrics.layout).toMatchObject({ across: 3, along: 4, rotated: false, oneUpLength: { cut: 14 } });
+
+    const edit = await request(app)
+      .patch(`/api/requests/${draft.id}`)
+      .set(bearer(w.tokens.buyer))
+      .send({ gutterIn: 0.25 });
+    expect(edit.status, JSON.stringify(edit.body)).toBe(200);
+    const again = await analysed(w, res.body.id);
+    expect(again.metrics.length.cut).toBeCloseTo(12 * 14, 6);
   });
 });

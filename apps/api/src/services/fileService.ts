@@ -3,7 +3,7 @@ import type { AuthUser } from '../auth/passport';
 import { DielineFile } from '../models';
 import type { ServiceDeps } from './deps';
 import { storageDown, visibleFile } from './files/fileAccess';
-import { makePrimaryFile, remapLayers, removeFile } from './files/fileChanges';
+import { choosePdfPage, makePrimaryFile, remapLayers, removeFile } from './files/fileChanges';
 import { uploadDieline, type UploadedFile } from './files/uploadDieline';
 import { toFileDto } from '../dto/requestViews';
 
@@ -43,6 +43,7 @@ export function createFileService(deps: ServiceDeps) {
     makePrimary: (actor: AuthUser, fileId: number) => makePrimaryFile(deps, actor, fileId),
     remap: (actor: AuthUser, fileId: number, layerMap: Record<string, string>) =>
       remapLayers(deps, actor, fileId, layerMap),
+    choosePage: (actor: AuthUser, fileId: number, page: number | null) => choosePdfPage(deps, actor, fileId, page),
     remove: (actor: AuthUser, fileId: number) => removeFile(deps, actor, fileId),
   };
 }

@@ -1,4 +1,4 @@
-import { analyseDieline, DielineError, type LayerMap } from '@kerfmark/dieline';
+import { analyseDielineAsync, DielineError, type LayerMap, type UpsLayout } from '@kerfmark/dieline';
 import type { Storage } from '@kerfmark/storage';
 import type { Knex } from 'knex';
 
@@ -26,7 +26,20 @@ interface ClaimedFile {
   file_name: string;
   s3_key: string;
   layer_map: LayerMap | null;
+  pdf_page: number | null;
   analysis_runs: number;
+}
+
+/** The whole die to lay out when the request's dieline is one up. */
+function layoutOf(request: Record<string, unknown> | undefined): UpsLayout | null {
+  if (request?.dieline_shows !== 'one-up' || !request.ups_across || !request.ups_along) return null;
+  return {
+    across: Number(request.ups_across),
+    along: Number(request.ups_along),
+    gutterIn: Number(request.gutter_in ?? 0),
+    pieceGrain: (request.piece_grain as UpsLayout['pieceGrain']) ?? 'either',
+    sheetGrain: (request.grain as UpsLayout['sheetGrain']) ?? null,
+  };
 }
 
 /**
@@ -43,7 +56,7 @@ async function claim(knex: Knex, fileId: number, staleMs: number): Promise<Claim
       analysis_started_at: new Date(),
       analysis_runs: knex.raw('analysis_runs + 1'),
     })
-    .returning(['id', 'request_id', 'file_name', 's3_key', 'layer_map', 'analysis_runs']);
+    .returning(['id', 'request_id', 'file_name', 's3_key', 'layer_map', 'pdf_page', 'analysis_runs']);
   return row as ClaimedFile | undefined;
 }
 
@@ -76,9 +89,11 @@ export async function analyseDielineFile(
   let update: Record<string, unknown>;
   let result: 'done' | 'failed';
   try {
-    const { metrics, preview } = analyseDieline(content, {
+    const { metrics, preview } = await analyseDielineAsync(content, {
       fileName: file.file_name,
       layerMap: file.layer_map ?? {},
+      page: file.pdf_page ?? undefined,
+      layout: layoutOf(request),
       press: press ? { widthIn: Number(press.max_sheet_width_in), lengthIn: Number(press.max_sheet_length_in) } : null,
     });
     update = {

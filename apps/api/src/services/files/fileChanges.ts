@@ -1,5 +1,6 @@
 import type { DielineFileDto } from '@kerfmark/contracts';
 import type { AuthUser } from '../../auth/passport';
+import { HttpError } from '../../lib/httpError';
 import { DielineFile } from '../../models';
 import { recordAudit } from '../auditService';
 import type { ServiceDeps } from '../deps';
@@ -23,15 +24,46 @@ export async function makePrimaryFile(
 
 /** Sets which rule type each layer is, and measures the file again. */
 export async function remapLayers(
-  { knex, analyses }: Pick<ServiceDeps, 'knex' | 'analyses'>,
+  deps: Pick<ServiceDeps, 'knex' | 'analyses'>,
   actor: AuthUser,
   fileId: number,
   layerMap: Record<string, string>,
 ): Promise<DielineFileDto> {
+  return measureAgain(deps, actor, fileId, { layerMap });
+}
+
+/** Picks the page of a PDF to measure (null: the first with stroked lines), and measures it again. */
+export async function choosePdfPage(
+  deps: Pick<ServiceDeps, 'knex' | 'analyses'>,
+  actor: AuthUser,
+  fileId: number,
+  page: number | null,
+): Promise<DielineFileDto> {
+  return measureAgain(deps, actor, fileId, { pdfPage: page }, (file) => {
+    if (file.format !== 'pdf') throw new HttpError(400, 'not_pdf', 'Only a PDF dieline has pages to choose from.');
+    const count = file.metrics?.page?.count;
+    if (page !== null && count && page > count) {
+      throw new HttpError(
+        400,
+        'no_such_page',
+        `The PDF has ${count} page${count === 1 ? '' : 's'}; choose one of them.`,
+      );
+    }
+  });
+}
+
+async function measureAgain(
+  { knex, analyses }: Pick<ServiceDeps, 'knex' | 'analyses'>,
+  actor: AuthUser,
+  fileId: number,
+  change: Partial<Pick<DielineFile, 'layerMap' | 'pdfPage'>>,
+  check?: (file: DielineFile) => void,
+): Promise<DielineFileDto> {
   const { file } = await ownedFile(actor, fileId);
   await assertMayChangeFiles(knex, actor, file.requestId);
+  check?.(file);
   const updated = await file.$query().patchAndFetch({
-    layerMap,
+    ...change,
     analysisStatus: 'pending',
     analysisError: null,
     analysisAttempts: file.analysisAttempts + 1,

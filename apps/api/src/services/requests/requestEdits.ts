@@ -6,6 +6,7 @@ import { badRequest } from '../../lib/httpError';
 import { DieRequest, Organisation, Press } from '../../models';
 import { recordAudit } from '../auditService';
 import type { ServiceDeps } from '../deps';
+import { changesMeasurement, remeasureFiles, withUpsOfLayout } from './requestLayout';
 import { factsFor } from './requestLookup';
 import { tellOfDeadline } from './tellOfDeadline';
 
@@ -40,7 +41,8 @@ async function setInvitations(trx: Knex.Transaction, requestId: number, shopIds:
 
 /** A new draft request of the printer's, with its invitations. Returns its id. */
 export async function createRequest(knex: Knex, actor: AuthUser, input: DieRequestCreate): Promise<number> {
-  const { invitedShopIds = [], ...fields } = input;
+  const { invitedShopIds = [], ...entered } = input;
+  const fields = withUpsOfLayout({}, entered);
   return knex.transaction(async (trx) => {
     await checkReferences(trx, actor, { pressId: fields.pressId, invitedShopIds });
     const request = await DieRequest.query(trx).insertAndFetch({
@@ -88,10 +90,13 @@ export async function updateRequest(deps: ServiceDeps, actor: AuthUser, id: numb
     assertMay(actor, facts, 'edit', now);
     const movesDeadline = deadlineMove(actor, request, facts, patch, now);
     const fromDeadline = request.bidDeadline?.toISOString() ?? null; // patch() below overwrites the model's fields
-    const { invitedShopIds, ...fields } = patch;
+    const { invitedShopIds, ...named } = patch;
+    const fields = withUpsOfLayout(request, named);
     await checkReferences(trx, actor, { pressId: fields.pressId, invitedShopIds });
     if (Object.keys(fields).length) await request.$query(trx).patch(fields as Partial<DieRequest>);
     if (invitedShopIds) await setInvitations(trx, id, invitedShopIds);
+    // The layout, the grain and the press go into the measuring: the dielines are measured again.
+    const remeasure = changesMeasurement(named) ? await remeasureFiles(trx, id) : [];
     await recordAudit(trx, {
       organisationId: actor.organisationId,
       actorUserId: actor.id,
@@ -105,6 +110,11 @@ export async function updateRequest(deps: ServiceDeps, actor: AuthUser, id: numb
     });
     if (movesDeadline && request.status === 'open')
       await tellOfDeadline(trx, deps, request, new Date(patch.bidDeadline!));
-    trx.executionPromise.then(() => deps.reminders.plan(id)).catch(() => undefined);
+    trx.executionPromise
+      .then(() => {
+        deps.reminders.plan(id);
+        for (const f of remeasure) deps.analyses.analyse(f.id, f.attempts);
+      })
+      .catch(() => undefined);
   });
 }
