@@ -39,3 +39,17 @@ export const bytes = (n: number) =>
 /** Caliper is given in points (thousandths of an inch) in North America. */
 export const caliper = (inchValue: number | null | undefined) =>
   inchValue ? `${Math.round(inchValue * 1000 * 10) / 10} pt (${inchesToMm(inchValue).toFixed(2)} mm)` : '—';
+
+/** A gutter as typed: "0 in", "0.125 in". */
+export const gutter = (value: number) => `${value.toLocaleString('en-US', { maximumFractionDigits: 4 })} in`;
+
+/** What the dieline file shows: "Whole die", or "One up, laid out 3 across × 4 along, gutter 0 in". */
+export function dielineLayout(r: {
+  dielineShows: 'whole-die' | 'one-up';
+  upsAcross: number | null;
+  upsAlong: number | null;
+  gutterIn: number | null;
+}): string {
+  if (r.dielineShows !== 'one-up') return 'Whole die';
+  return `One up, laid out ${r.upsAcross ?? '?'} across × ${r.upsAlong ?? '?'} along, gutter ${gutter(r.gutterIn ?? 0)}`;
+}

@@ -1,14 +1,24 @@
 import { describe, it, expect } from 'vitest';
-import { analyseDieline, type DielineMetrics } from '@kerfmark/dieline';
+import { analyseDieline, analyseDielineAsync, type DielineMetrics } from '@kerfmark/dieline';
 import { doorHanger, hangTag, labelSheet, pizzaBox, shelfTalker, tuckEndCarton } from './demoDielines';
 import { demoOrganisations } from './demoPeople';
 import { demoRequests } from './demoRequests';
+import { soapSleevePdf } from './demoPdfDielines';
 
 // Every expected number below is worked out by hand from the shape's geometry (straight runs,
 // arc length rθ, circle circumference 2πr: geometry), not from the generator's code.
 
 const PI = Math.PI;
 const measure = (dxf: string): DielineMetrics => analyseDieline(dxf).metrics;
+
+type DemoRequest = (typeof demoRequests)[number];
+/** The DXF text of a demo request drawn as DXF. */
+function dxfOf(demo: DemoRequest): string {
+  const content = demo.dieline.content();
+  if (typeof content !== 'string') throw new Error(`${demo.title} is not a DXF`);
+  return content;
+}
+const dxfRequests = demoRequests.filter((r) => r.dieline.name.endsWith('.dxf'));
 
 function request(jobReference: string) {
   const found = demoRequests.find((r) => r.jobReference === jobReference);
@@ -65,7 +75,7 @@ function tuckEndBlankLengths(w: number, d: number, h: number) {
 
 describe('tuckEndCarton', () => {
   it('draws the 2.5 × 1.5 × 6 in straight tuck-end carton two up, every fold creased', () => {
-    const m = measure(request('LPC-24117').dieline.content());
+    const m = measure(dxfOf(request('LPC-24117')));
     const blank = tuckEndBlankLengths(2.5, 1.5, 6);
     expect(blank.cut).toBeCloseTo(44.44186, 4); // by hand: 2 × 16.47094 + 6 + 5.5
     expect(m.length.cut).toBeCloseTo(2 * blank.cut, 6);
@@ -83,7 +93,7 @@ describe('tuckEndCarton', () => {
   });
 
   it('draws the tea carton 3 × 2.5 × 5.25 in two up', () => {
-    const m = measure(request('TPF-0871').dieline.content());
+    const m = measure(dxfOf(request('TPF-0871')));
     const blank = tuckEndBlankLengths(3, 2.5, 5.25);
     expect(m.length.cut).toBeCloseTo(2 * blank.cut, 6);
     expect(m.length.crease).toBeCloseTo(2 * (4 * 5.25 + 2 * (2.5 + 3 + 2.5) + 2 * 3), 6); // 86 in
@@ -106,7 +116,7 @@ describe('tuckEndCarton', () => {
 describe('labelSheet', () => {
   it('kiss cuts twelve 3.5 × 1.5 in labels with 1/8 in corners, 2 across × 6 along', () => {
     const demo = request('LPC-24130');
-    const m = measure(demo.dieline.content());
+    const m = measure(dxfOf(demo));
     // One label: 2(3.5 + 1.5) − 8r + 2πr with r = 0.125 (four straight sides, four quarter circles).
     const label = 2 * (3.5 + 1.5) - 8 * 0.125 + 2 * PI * 0.125;
     expect(m.length.kiss).toBeCloseTo(12 * label, 6);
@@ -132,7 +142,7 @@ describe('labelSheet', () => {
 describe('doorHanger', () => {
   it('draws the 4.25 × 12 in hanger: hole, slit and a perforated coupon 3 in up', () => {
     const demo = request('LPC-24152');
-    const m = measure(demo.dieline.content());
+    const m = measure(dxfOf(demo));
     // Outline with two 0.5 in top corners: 2(4.25 + 12) − 4r + πr; hole 2 in across: π × 2; the
     // slit runs 30° down from the hole's centre, at 4.25/2 from the edge: 2.125 / cos 30° − 1.
     const outline = 2 * (4.25 + 12) - 4 * 0.5 + PI * 0.5;
@@ -210,14 +220,14 @@ describe('hangTag', () => {
 // ---- Every demo dieline ----
 
 const allDemoDielines = (): Array<[string, string]> => [
-  ...demoRequests.map((r): [string, string] => [r.title, r.dieline.content()]),
+  ...dxfRequests.map((r): [string, string] => [r.title, dxfOf(r)]),
   ...Object.entries(history).map(([title, draw]): [string, string] => [title, draw()]),
 ];
 
 describe('the demo dielines', () => {
   it('gives every demo request and received die a dieline of its own', () => {
     const drawings = allDemoDielines();
-    expect(drawings).toHaveLength(demoRequests.length + 6);
+    expect(drawings).toHaveLength(dxfRequests.length + 6);
     expect(new Set(drawings.map(([, dxf]) => dxf)).size).toBe(drawings.length);
   });
 
@@ -232,15 +242,15 @@ describe('the demo dielines', () => {
     };
     for (const [jobReference, count] of Object.entries(upsDrawn)) {
       const demo = request(jobReference);
-      expect(count(measure(demo.dieline.content())), demo.title).toBe(demo.fields.ups);
+      expect(count(measure(dxfOf(demo))), demo.title).toBe(demo.fields.ups);
     }
   });
 
   it("fits each demo request's die board on the request's press", () => {
     const presses = demoOrganisations.flatMap((o) => o.presses ?? []);
-    for (const demo of demoRequests) {
+    for (const demo of dxfRequests) {
       const press = presses.find((p) => p.name === demo.press)!;
-      const { metrics } = analyseDieline(demo.dieline.content(), {
+      const { metrics } = analyseDieline(dxfOf(demo), {
         press: { widthIn: press.maxSheetWidthIn, lengthIn: press.maxSheetLengthIn },
       });
       expect(metrics.fitsPress, demo.title).toBe(true);
@@ -336,3 +346,37 @@ function cross(a: P, b: P, c: P, d: P): boolean {
   const side = (p: P, q: P, r: P) => (q[0] - p[0]) * (r[1] - p[1]) - (q[1] - p[1]) * (r[0] - p[0]);
   return side(a, b, c) * side(a, b, d) < -TOL && side(c, d, a) * side(c, d, b) < -TOL;
 }
+
+describe('the one-up PDF demo dieline (written by pdfkit)', () => {
+  // One sleeve: panels 3.5, 1.25, 3.5, 1.25 in after a 0.5 in glue flap tapered by 0.2 in, 2.5 in
+  // tall. Cutting rule: top and bottom 9.5 in each, the far end 2.5 in, the glue flap's end
+  // 2.5 − 2 × 0.2 = 2.1 in and its two tapers √(0.5² + 0.2²) each (geometry). Four creases of 2.5 in.
+  const taper = Math.hypot(0.5, 0.2);
+  const oneUpCut = 9.5 + 9.5 + 2.5 + 2.1 + 2 * taper;
+
+  it('measures one up by its Cut and Crease separations, leaving out the artwork and caption', async () => {
+    const { metrics } = await analyseDielineAsync(await soapSleevePdf({ widthIn: 3.5, depthIn: 1.25, heightIn: 2.5 }));
+    expect(metrics.length.cut).toBeCloseTo(oneUpCut, 6);
+    expect(metrics.length.crease).toBeCloseTo(10, 6);
+    expect(metrics.bbox.width).toBeCloseTo(10, 6);
+    expect(metrics.bbox.height).toBeCloseTo(2.5, 6);
+    expect(metrics.warnings.join(' ')).toMatch(/filled shape/);
+  });
+
+  it('lays the request out 2 across × 5 along with shared cuts, and the whole die fits the platen', async () => {
+    const demo = request('LPC-24168');
+    expect(demo.fields.ups).toBe(10);
+    const { metrics } = await analyseDielineAsync(await demo.dieline.content(), {
+      press: { widthIn: 22, lengthIn: 30 },
+      layout: { across: 2, along: 5, gutterIn: 0, pieceGrain: 'with-height', sheetGrain: 'long' },
+    });
+    // Ten sleeves, less what neighbours share: 4 row boundaries × 2 sleeves × 9.5 in, and the
+    // glue-flap end (2.1 in) lying on the next sleeve's far end in each of the 5 rows.
+    expect(metrics.length.cut).toBeCloseTo(10 * oneUpCut - 4 * 2 * 9.5 - 5 * 2.1, 6);
+    expect(metrics.length.crease).toBeCloseTo(10 * 10, 6);
+    expect(metrics.bbox.width).toBeCloseTo(20, 6);
+    expect(metrics.bbox.height).toBeCloseTo(12.5, 6);
+    expect(metrics.fitsPress).toBe(true);
+    expect(metrics.layout?.rotated).toBe(false);
+  });
+});

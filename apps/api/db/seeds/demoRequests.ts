@@ -1,9 +1,11 @@
 // The demo's die requests, each with its own dieline, measured as an upload would be.
 import { createHash } from 'node:crypto';
 import type { Knex } from 'knex';
-import { analyseDieline } from '@kerfmark/dieline';
+import { analyseDielineAsync, type UpsLayout } from '@kerfmark/dieline';
 import type { Storage } from '@kerfmark/storage';
 import { doorHanger, labelSheet, tuckEndCarton } from './demoDielines';
+import { soapSleevePdf } from './demoPdfDielines';
+import { dielineContentTypes } from '../../src/services/files/uploadDieline';
 
 interface DemoRequest {
   org: string;
@@ -15,7 +17,8 @@ interface DemoRequest {
   deadlineDays: number;
   needByDays: number;
   invited?: string[];
-  dieline: { name: string; content: () => string };
+  /** A DXF drawn as text, or a PDF written as bytes. */
+  dieline: { name: string; content: () => string | Promise<Uint8Array> };
 }
 
 export const demoRequests: DemoRequest[] = [
@@ -123,7 +126,50 @@ export const demoRequests: DemoRequest[] = [
       content: () => tuckEndCarton({ widthIn: 3, depthIn: 2.5, heightIn: 5.25, ups: 2 }),
     },
   },
+  {
+    org: 'Larkspur Press & Carton',
+    jobReference: 'LPC-24168',
+    title: 'Soap sleeve, one-up PDF stepped 2 × 5',
+    status: 'open',
+    press: 'Platen 1 (22 × 30)',
+    fields: {
+      quantity: 1,
+      ups: 10,
+      dielineShows: 'one-up',
+      upsAcross: 2,
+      upsAlong: 5,
+      gutterIn: 0,
+      pieceGrain: 'with-height',
+      pieceWidthIn: 3.5,
+      pieceHeightIn: 2.5,
+      stockName: '16 pt C1S SBS board',
+      caliperIn: 0.016,
+      grain: 'long',
+      runSheets: 8000,
+      ruleTypes: ['cut', 'crease'],
+      deliveryPostcode: '60614',
+      notes: 'The PDF is one sleeve from our artwork file; lay it out 2 across, 5 along, common-line cut.',
+    },
+    deadlineDays: 7,
+    needByDays: 24,
+    dieline: {
+      name: 'soap-sleeve-1up.pdf',
+      content: () => soapSleevePdf({ widthIn: 3.5, depthIn: 1.25, heightIn: 2.5 }),
+    },
+  },
 ];
+
+/** A one-up demo dieline's layout, as the worker reads it from the request. */
+function demoLayout(f: Record<string, unknown>): UpsLayout | null {
+  if (f.dielineShows !== 'one-up') return null;
+  return {
+    across: Number(f.upsAcross),
+    along: Number(f.upsAlong),
+    gutterIn: Number(f.gutterIn ?? 0),
+    pieceGrain: f.pieceGrain as UpsLayout['pieceGrain'],
+    sheetGrain: (f.grain as UpsLayout['sheetGrain']) ?? null,
+  };
+}
 
 export const atDays = (days: number) => new Date(Date.now() + days * 86_400_000);
 
@@ -135,22 +181,25 @@ export async function storeDemoDieline(
     requestId: number;
     uploadedBy: number;
     fileName: string;
-    content: string;
+    content: string | Uint8Array;
+    format?: 'dxf' | 'svg' | 'pdf';
     metrics: unknown;
     preview: unknown;
     uploadedAt?: Date;
   },
 ): Promise<void> {
   const s3Key = `requests/${file.requestId}/demo/${file.fileName}`;
-  await storage.put(s3Key, new TextEncoder().encode(file.content), 'application/dxf');
+  const bytes = typeof file.content === 'string' ? new TextEncoder().encode(file.content) : file.content;
+  const format = file.format ?? 'dxf';
+  await storage.put(s3Key, bytes, dielineContentTypes[format]);
   await knex('dielineFiles').insert({
     requestId: file.requestId,
     uploadedBy: file.uploadedBy,
     fileName: file.fileName,
-    format: 'dxf',
-    contentType: 'application/dxf',
-    byteSize: Buffer.byteLength(file.content),
-    sha256: createHash('sha256').update(file.content).digest('hex'),
+    format,
+    contentType: dielineContentTypes[format],
+    byteSize: bytes.length,
+    sha256: createHash('sha256').update(bytes).digest('hex'),
     s3Key,
     isPrimary: true,
     analysisStatus: 'done',
@@ -168,10 +217,11 @@ export async function seedRequests(knex: Knex, storage: Storage): Promise<void> 
     if (await knex('dieRequests').where({ organisationId: org.id, jobReference: demo.jobReference }).first()) continue;
     const buyer = await knex('users').where({ organisationId: org.id, role: 'buyer' }).first();
     const press = await knex('presses').where({ organisationId: org.id, name: demo.press }).first();
-    const content = demo.dieline.content();
-    const { metrics, preview } = analyseDieline(content, {
+    const content = await demo.dieline.content();
+    const { metrics, preview, format } = await analyseDielineAsync(content, {
       fileName: demo.dieline.name,
       press: { widthIn: Number(press.maxSheetWidthIn), lengthIn: Number(press.maxSheetLengthIn) },
+      layout: demoLayout(demo.fields),
     });
     const [{ id }] = await knex('dieRequests')
       .insert({
@@ -197,6 +247,7 @@ export async function seedRequests(knex: Knex, storage: Storage): Promise<void> 
       uploadedBy: buyer.id,
       fileName: demo.dieline.name,
       content,
+      format,
       metrics,
       preview,
     });

@@ -92,6 +92,8 @@ export const filesApi = {
   makePrimary: (id: number) => api<DielineFileDto>(`/files/${id}/primary`, { method: 'POST' }),
   remap: (id: number, layerMap: Record<string, string>) =>
     api<DielineFileDto>(`/files/${id}/layers`, { method: 'PUT', body: { layerMap } }),
+  choosePage: (id: number, page: number | null) =>
+    api<DielineFileDto>(`/files/${id}/page`, { method: 'PUT', body: { page } }),
   remove: (id: number) => api<void>(`/files/${id}`, { method: 'DELETE' }),
 };
 

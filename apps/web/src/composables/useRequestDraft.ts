@@ -1,4 +1,12 @@
-import type { DieRequestCreate, DieRequestDetail, Grain, RuleType, Visibility } from '@kerfmark/contracts';
+import type {
+  DielineShows,
+  DieRequestCreate,
+  DieRequestDetail,
+  Grain,
+  PieceGrain,
+  RuleType,
+  Visibility,
+} from '@kerfmark/contracts';
 import { basisWeightToGsm, gsmToBasisWeight } from '@kerfmark/stock';
 import dayjs, { type Dayjs } from 'dayjs';
 import { inject, provide, reactive, type InjectionKey } from 'vue';
@@ -9,6 +17,11 @@ export interface RequestForm {
   jobReference: string;
   quantity: number;
   ups: number;
+  dielineShows: DielineShows;
+  upsAcross: number | undefined;
+  upsAlong: number | undefined;
+  gutterIn: number | undefined;
+  pieceGrain: PieceGrain;
   pieceWidthIn: number | undefined;
   pieceHeightIn: number | undefined;
   stockName: string;
@@ -60,6 +73,11 @@ export function emptyRequestForm(): RequestForm {
     jobReference: '',
     quantity: 1,
     ups: 1,
+    dielineShows: 'whole-die',
+    upsAcross: undefined,
+    upsAlong: undefined,
+    gutterIn: 0,
+    pieceGrain: 'either',
     pieceWidthIn: undefined,
     pieceHeightIn: undefined,
     stockName: '',
@@ -97,6 +115,15 @@ export function toRequestInput(form: RequestForm): DieRequestCreate {
     jobReference: blankToNull(form.jobReference),
     quantity: form.quantity,
     ups: form.ups,
+    dielineShows: form.dielineShows,
+    ...(form.dielineShows === 'one-up'
+      ? {
+          upsAcross: form.upsAcross ?? null,
+          upsAlong: form.upsAlong ?? null,
+          gutterIn: form.gutterIn ?? 0,
+          pieceGrain: form.pieceGrain,
+        }
+      : { upsAcross: null, upsAlong: null, gutterIn: null, pieceGrain: null }),
     pieceWidthIn: form.pieceWidthIn ?? null,
     pieceHeightIn: form.pieceHeightIn ?? null,
     stockName: blankToNull(form.stockName),
@@ -132,6 +159,11 @@ export function fromRequest(request: DieRequestDetail): RequestForm {
     jobReference: request.jobReference ?? '',
     quantity: request.quantity,
     ups: request.ups,
+    dielineShows: request.dielineShows,
+    upsAcross: request.upsAcross ?? undefined,
+    upsAlong: request.upsAlong ?? undefined,
+    gutterIn: request.gutterIn ?? 0,
+    pieceGrain: request.pieceGrain ?? 'either',
     pieceWidthIn: request.pieceWidthIn ?? undefined,
     pieceHeightIn: request.pieceHeightIn ?? undefined,
     stockName: request.stockName ?? '',

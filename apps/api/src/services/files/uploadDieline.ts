@@ -10,7 +10,7 @@ import type { ServiceDeps } from '../deps';
 import { toFileDto } from '../../dto/requestViews';
 import { assertMayChangeFiles, storageDown } from './fileAccess';
 
-const CONTENT_TYPES: Record<DielineFormat, string> = {
+export const dielineContentTypes: Record<DielineFormat, string> = {
   dxf: 'application/dxf',
   svg: 'image/svg+xml',
   pdf: 'application/pdf',
@@ -49,7 +49,7 @@ export async function uploadDieline(
   const sha256 = createHash('sha256').update(upload.buffer).digest('hex');
   const s3Key = `requests/${requestId}/${randomUUID()}/${fileName}`;
   try {
-    await storage.put(s3Key, upload.buffer, CONTENT_TYPES[format]);
+    await storage.put(s3Key, upload.buffer, dielineContentTypes[format]);
   } catch (error) {
     logger.warn({ err: error }, 'upload to the file store failed');
     throw storageDown();
@@ -64,7 +64,7 @@ export async function uploadDieline(
         uploadedBy: actor.id,
         fileName,
         format,
-        contentType: CONTENT_TYPES[format],
+        contentType: dielineContentTypes[format],
         byteSize: upload.size,
         sha256,
         s3Key,

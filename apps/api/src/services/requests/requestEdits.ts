@@ -91,12 +91,13 @@ export async function updateRequest(deps: ServiceDeps, actor: AuthUser, id: numb
     const movesDeadline = deadlineMove(actor, request, facts, patch, now);
     const fromDeadline = request.bidDeadline?.toISOString() ?? null; // patch() below overwrites the model's fields
     const { invitedShopIds, ...named } = patch;
+    const remeasuring = changesMeasurement(request, named); // before patch() overwrites the model
     const fields = withUpsOfLayout(request, named);
     await checkReferences(trx, actor, { pressId: fields.pressId, invitedShopIds });
     if (Object.keys(fields).length) await request.$query(trx).patch(fields as Partial<DieRequest>);
     if (invitedShopIds) await setInvitations(trx, id, invitedShopIds);
     // The layout, the grain and the press go into the measuring: the dielines are measured again.
-    const remeasure = changesMeasurement(named) ? await remeasureFiles(trx, id) : [];
+    const remeasure = remeasuring ? await remeasureFiles(trx, id) : [];
     await recordAudit(trx, {
       organisationId: actor.organisationId,
       actorUserId: actor.id,

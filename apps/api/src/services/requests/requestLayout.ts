@@ -24,8 +24,9 @@ export function withUpsOfLayout<T extends Partial<LayoutFields>>(current: Partia
   return { ...patch, ups: merged.upsAcross! * merged.upsAlong! };
 }
 
-export function changesMeasurement(patch: DieRequestUpdate): boolean {
-  return MEASURED_BY.some((k) => k in patch);
+/** Whether the patch changes a field the measuring reads (a form resaving the same values does not). */
+export function changesMeasurement(request: DieRequest, patch: DieRequestUpdate): boolean {
+  return MEASURED_BY.some((k) => k in patch && (patch[k] ?? null) !== (request[k] ?? null));
 }
 
 /** Sets the request's dielines to be measured again; returns each file's id and attempt for the queue. */
