@@ -17,17 +17,34 @@ export async function pickDate(p: Page, testId: string, date: Date, withTime: bo
   if (withTime) await panel.locator('.ant-picker-ok button').click();
 }
 
-/** A print buyer, signed in, posts a request through the four steps with the 8 × 5 in sleeve DXF. */
+/**
+ * A print buyer, signed in, posts a request through the four steps, by default with the 8 × 5 in
+ * sleeve DXF (26.79 in of cutting rule); or with another file, maybe one up laid out in a grid.
+ */
 export async function postRequest(
   p: Page,
   title: string,
-  opts: { svg?: boolean; screenshots?: (name: string) => Promise<void> } = {},
+  opts: {
+    svg?: boolean;
+    screenshots?: (name: string) => Promise<void>;
+    dieline?: { file: string; metricsShow: string };
+    oneUp?: { across: number; along: number; gutterIn: number };
+  } = {},
 ): Promise<number> {
   await p.goto(`${baseUrl}/requests/new`);
   await p.locator('[data-test=req-title]').fill(title);
   await p.locator('[data-test=req-job]').fill('LPC-E2E');
   await p.locator('[data-test=req-stock]').fill('16 pt SBS');
   await p.locator('[data-test=req-caliper] input, input[data-test=req-caliper]').first().fill('16');
+  if (opts.oneUp) {
+    await p.locator('[data-test=dieline-one-up]').click();
+    await p.locator('input[data-test=ups-across]').fill(String(opts.oneUp.across));
+    await p.locator('input[data-test=ups-along]').fill(String(opts.oneUp.along));
+    await p.locator('input[data-test=gutter]').fill(String(opts.oneUp.gutterIn));
+    await expect
+      .poll(() => p.locator('input[data-test=req-ups]').inputValue())
+      .toBe(String(opts.oneUp.across * opts.oneUp.along));
+  }
   await p.locator('[data-test=next]').click();
   await p.locator('[data-test=req-press]').click();
   await p.locator('.ant-select-item-option >> text=Platen 1').click();
@@ -38,7 +55,7 @@ export async function postRequest(
   await p.locator('[data-test=next]').click();
   await p.waitForURL(/\/requests\/\d+\/edit/);
   const input = p.locator('[data-test=dieline-drop] input[type=file]');
-  await input.setInputFiles(path.join(fixtures, 'sleeve-8x5.dxf'));
+  await input.setInputFiles(opts.dieline?.file ?? path.join(fixtures, 'sleeve-8x5.dxf'));
   await expect.poll(() => p.locator('[data-test=file-list]').innerText(), { timeout: 20_000 }).toContain('measured');
   if (opts.svg) {
     await input.setInputFiles(path.join(fixtures, 'tag-100x50mm.svg'));
@@ -49,7 +66,9 @@ export async function postRequest(
       .toBe(2);
     await p.locator('[data-test=file-list] >> text=sleeve-8x5.dxf').click();
   }
-  await expect.poll(() => p.locator('[data-test=metrics]').innerText()).toContain('26.79 in');
+  await expect
+    .poll(() => p.locator('[data-test=metrics]').innerText())
+    .toContain(opts.dieline?.metricsShow ?? '26.79 in');
   await opts.screenshots?.('dieline');
   await p.locator('[data-test=next]').click();
   await expect.poll(() => p.locator('[data-test=request-checks]').innerText()).toContain('fits Platen 1');
