@@ -10,6 +10,10 @@ const benches = [
     name: 'Dieline analysis (20,000-entity DXF) against the DXF parser alone',
     file: 'packages/dieline/bench/analyse.bench.ts',
   },
+  {
+    name: 'PDF dieline analysis (20,000 stroked paths) against pdf.js parsing the same file',
+    file: 'packages/dieline/bench/pdf.bench.ts',
+  },
   { name: 'Price fit in memory (100,000 records, no sampling)', file: 'packages/pricing/bench/fit.bench.ts' },
   { name: 'Price history API over 100,000 records against a bare SQL count', file: 'scripts/benchPriceHistory.ts' },
   { name: 'API under load against bare Express + pg routes, and the web app in Chromium', file: 'scripts/benchApi.ts' },

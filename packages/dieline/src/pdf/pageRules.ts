@@ -57,6 +57,8 @@ export class PageRules {
   private path: Subpath[] = [];
   private current: Pt | null = null;
   private readonly formsOpen = new Set<PDFObject>();
+  /** Colorant names by resource dictionary and colour space name: a page sets the same few spaces often. */
+  private readonly colorants = new Map<PDFDict | undefined, Map<string, string[]>>();
 
   constructor(
     private readonly builder: DrawingBuilder,
@@ -152,7 +154,7 @@ export class PageRules {
       case 'CS':
         this.state = {
           ...this.state,
-          strokeColorants: args[0] instanceof PdfName ? colorantNames(resources, args[0].name) : [],
+          strokeColorants: args[0] instanceof PdfName ? this.colorantsOf(resources, args[0].name) : [],
         };
         break;
       case 'G':
@@ -178,6 +180,14 @@ export class PageRules {
       default:
         break; // text, colours of fills, line style, shading: not rules
     }
+  }
+
+  private colorantsOf(resources: PDFDict | undefined, name: string): string[] {
+    let known = this.colorants.get(resources);
+    if (!known) this.colorants.set(resources, (known = new Map()));
+    let names = known.get(name);
+    if (!names) known.set(name, (names = colorantNames(resources, name)));
+    return names;
   }
 
   private moveTo(p: Pt): void {
