@@ -354,6 +354,15 @@ const cases: RouteCase[] = [
     expect: printers(200),
   },
   {
+    // The draft's file is a DXF: the route is reached, and refuses a page choice for it.
+    name: 'PUT /api/files/:id/page',
+    send: (w) =>
+      request(app)
+        .put(`/api/files/${fx(w).draftFile}/page`)
+        .send({ page: null }),
+    expect: printers(400),
+  },
+  {
     name: 'DELETE /api/files/:id',
     send: (w, actor) => request(app).delete(`/api/files/${fx(w).toDelete[actor]}`),
     expect: printers(204),

@@ -304,6 +304,48 @@ describe('hostile dielines', () => {
     expect(head.headers.get('content-disposition')).toMatch(/^attachment/);
   });
 
+  it('measures a PDF with JavaScript and an open action without running or passing them on', async () => {
+    const w = await createWorld();
+    const draft = await createDraft(w);
+    const evil = pdfFile(
+      [{ content: `/C0 CS 1 SCN 0 0 ${2 * PT} ${PT} re S`, resources: '<< /ColorSpace << /C0 {{cut}} >> >>' }],
+      {
+        objects: {
+          cut: separation('Cut'),
+          js: '<< /S /JavaScript /JS (app.launchURL\\("http://attacker.example/"\\)) >>',
+        },
+        catalog: '/OpenAction {{js}} /AA << /WC {{js}} >>',
+      },
+    );
+    const res = await upload(w, draft.id, 'evil.pdf', Buffer.from(evil));
+    expect(res.status).toBe(201);
+    const file = await analysed(w, res.body.id);
+    expect(file.metrics.length.cut).toBeCloseTo(6, 6); // a 2 × 1 in rectangle
+    const preview = await request(app).get(`/api/files/${res.body.id}/preview`).set(bearer(w.tokens.buyer));
+    expect(JSON.stringify(preview.body)).not.toMatch(/JavaScript|launchURL|attacker/);
+    expect(JSON.stringify(file)).not.toMatch(/JavaScript|launchURL|attacker/);
+    const link = await request(app).get(`/api/files/${res.body.id}/download`).set(bearer(w.tokens.buyer));
+    expect((await fetch(link.body.url)).headers.get('content-disposition')).toMatch(/^attachment/);
+  });
+
+  it('keeps a scanned PDF with the reason it cannot be measured', async () => {
+    const w = await createWorld();
+    const draft = await createDraft(w);
+    const scan = pdfFile([{ content: 'q 612 0 0 792 0 0 cm /I Do Q', resources: '<< /XObject << /I {{img}} >> >>' }], {
+      objects: {
+        img: {
+          dict: '<< /Type /XObject /Subtype /Image /Width 1 /Height 1 /ColorSpace /DeviceGray /BitsPerComponent 8 >>',
+          stream: '\x80',
+        },
+      },
+    });
+    const res = await upload(w, draft.id, 'scan.pdf', Buffer.from(scan));
+    expect(res.status).toBe(201);
+    const file = await analysed(w, res.body.id);
+    expect(file.analysisStatus).toBe('failed');
+    expect(file.analysisError).toMatch(/only an image \(a scan or a flattened export\)/);
+  });
+
   it('refuses a DXF with more entities than the limit, with a clear reason and the upload kept', async () => {
     const w = await createWorld();
     const draft = await createDraft(w);
