@@ -33,6 +33,15 @@ const Inches = (what: string) =>
     .number({ error: `Enter ${what} in inches` })
     .positive(`${what} must be more than 0`)
     .max(120, `${what} is at most 120 in`);
+/** Ups in one direction of a one-up layout. */
+const upsInLine = (way: 'across' | 'along') =>
+  z
+    .number({ error: `Enter the ups ${way}` })
+    .int('A whole number of ups')
+    .min(1, 'At least 1 up')
+    .max(100, 'At most 100 ups')
+    .nullable()
+    .optional();
 const optionalText = (max: number) => z.string().trim().max(max, `At most ${max} characters`).nullable().optional();
 
 /**
@@ -54,20 +63,8 @@ const DieRequestFields = z.object({
     .min(1, 'At least 1 up')
     .max(500, 'At most 500 ups'),
   dielineShows: DielineShows,
-  upsAcross: z
-    .number({ error: 'Enter the ups across' })
-    .int('A whole number of ups')
-    .min(1, 'At least 1 up')
-    .max(100, 'At most 100 ups')
-    .nullable()
-    .optional(),
-  upsAlong: z
-    .number({ error: 'Enter the ups along' })
-    .int('A whole number of ups')
-    .min(1, 'At least 1 up')
-    .max(100, 'At most 100 ups')
-    .nullable()
-    .optional(),
+  upsAcross: upsInLine('across'),
+  upsAlong: upsInLine('along'),
   gutterIn: z
     .number({ error: 'Enter the gutter' })
     .min(0, '0 or more (0 for shared cuts)')

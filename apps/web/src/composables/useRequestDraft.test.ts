@@ -21,4 +21,16 @@ describe('request form conversion', () => {
     expect(toRequestInput(form).invitedShopIds).toEqual([]);
     expect(toRequestInput({ ...form, visibility: 'invited' }).invitedShopIds).toEqual([3, 4]);
   });
+
+  it('sends the layout of a one-up file, and clears it for a whole die', () => {
+    const form = { ...emptyRequestForm(), title: 'Sleeve', upsAcross: 3, upsAlong: 4, gutterIn: 0 };
+    expect(toRequestInput({ ...form, dielineShows: 'one-up' })).toMatchObject({
+      dielineShows: 'one-up',
+      upsAcross: 3,
+      upsAlong: 4,
+      gutterIn: 0,
+      pieceGrain: 'either',
+    });
+    expect(toRequestInput(form)).toMatchObject({ dielineShows: 'whole-die', upsAcross: null, upsAlong: null });
+  });
 });
