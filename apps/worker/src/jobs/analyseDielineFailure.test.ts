@@ -8,9 +8,7 @@ import { analyseDielineFile } from './analyseDieline';
 // the file must still settle as failed, not stay "measuring" for every sweep to trip on.
 vi.mock('@kerfmark/dieline', async (original) => ({
   ...(await original<typeof import('@kerfmark/dieline')>()),
-  analyseDieline: () => {
-    throw new TypeError("Cannot read properties of undefined (reading 'x')");
-  },
+  analyseDielineAsync: () => Promise.reject(new TypeError("Cannot read properties of undefined (reading 'x')")),
 }));
 
 // Against the real PostgreSQL that `npm test` starts.
