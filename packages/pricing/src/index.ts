@@ -11,3 +11,5 @@ export * from './priceFit';
 export * from './fairPriceBand';
 export * from './pricePerInch';
 export * from './priceTrend';
+export * from './rateCard';
+export * from './calibrateCard';
