@@ -22,6 +22,7 @@ import { notificationRoutes } from './routes/notificationRoutes';
 import { libraryRoutes } from './routes/libraryRoutes';
 import { openRequestRoutes } from './routes/openRequestRoutes';
 import { pressRoutes } from './routes/pressRoutes';
+import { rateCardRoutes } from './routes/rateCardRoutes';
 import { priceHistoryRoutes } from './routes/priceHistoryRoutes';
 import { requestRoutes } from './routes/requestRoutes';
 import { userRoutes } from './routes/userRoutes';
@@ -73,6 +74,7 @@ export function createApp(deps: AppDeps): Express {
   api.use('/notifications', notificationRoutes(services, requireAuth));
   api.use('/price-history', priceHistoryRoutes(services, requireAuth));
   api.use(bidRoutes(services, requireAuth));
+  api.use(rateCardRoutes(services, requireAuth));
   api.use(awardRoutes(services, requireAuth));
   api.use(fulfilmentRoutes(services, requireAuth));
   api.use(libraryRoutes(services, requireAuth));

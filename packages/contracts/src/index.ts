@@ -17,3 +17,4 @@ export * from './library';
 export * from './pricedLength';
 export * from './redisOptions';
 export * from './env';
+export * from './rateCards';

@@ -8,6 +8,7 @@ import { bidBody, inDays, rectangleSvg } from '../test/fixtures';
 import { app, createOpenRequest, createPress, createWorld, knex, PASSWORD, unique, type World } from '../test/harness';
 import { addDieline, callAs, createReadyDraft, createRequestAt, type StagedRequest } from '../test/requestStages';
 import { routeList } from '../test/routeList';
+import { aRateCard } from '../test/aRateCard';
 
 type Actor = 'anonymous' | 'buyer' | 'purchasing' | 'printerAdmin' | 'estimator' | 'shopAdmin';
 type ForEach<T> = Record<Actor, T>;
@@ -376,6 +377,24 @@ const cases: RouteCase[] = [
   },
   { name: 'GET /api/die-shops', send: () => request(app).get('/api/die-shops'), expect: printers(200) },
   { name: 'GET /api/estimate-aid', send: () => request(app).get('/api/estimate-aid'), expect: shops(200) },
+  // The rate card: estimating from it, and checking it, say 409 until the shop's admin saves one,
+  // which the PUT case below does (cases run in this order).
+  {
+    name: 'GET /api/requests/:id/estimate',
+    send: (w) => request(app).get(`/api/requests/${fx(w).open}/estimate?leadDays=5`),
+    expect: shops(409),
+  },
+  {
+    name: 'GET /api/rate-card/calibration',
+    send: () => request(app).get('/api/rate-card/calibration'),
+    expect: shops(409),
+  },
+  { name: 'GET /api/rate-card', send: () => request(app).get('/api/rate-card'), expect: shops(200) },
+  {
+    name: 'PUT /api/rate-card',
+    send: () => request(app).put('/api/rate-card').send(aRateCard()),
+    expect: { ...everyone(403), shopAdmin: 200 },
+  },
   {
     name: 'POST /api/requests/:id/bids',
     send: (w, actor) =>

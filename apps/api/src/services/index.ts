@@ -15,6 +15,7 @@ import { createInboxService } from './inboxService';
 import { createPreferenceService } from './preferenceService';
 import { createPriceHistoryService } from './priceHistoryService';
 import { createLibraryService } from './libraryService';
+import { createRateCardService } from './rateCardService';
 
 export function createServices(deps: ServiceDeps, limiter: LoginLimiter) {
   const requests = createRequestService(deps);
@@ -35,6 +36,7 @@ export function createServices(deps: ServiceDeps, limiter: LoginLimiter) {
     users: createUserService(deps),
     invitations: createInvitationService(deps),
     presses: createPressService(deps),
+    rateCards: createRateCardService(deps),
     inbox: createInboxService(),
     preferences: createPreferenceService(),
   };

@@ -15,6 +15,8 @@ import {
   InvitationPreviewQuery,
   LayerMapUpdate,
   PdfPageUpdate,
+  RateCardInput,
+  EstimateQuery,
   LibraryDieUpdate,
   LoginInput,
   OpenRequestsQuery,
@@ -44,6 +46,7 @@ import {
   type World,
 } from './harness';
 import { routeList, routesReadingQuery } from './routeList';
+import { aRateCard } from './aRateCard';
 
 // Property-based bad input (fast-check) at every route that takes input: JSON bodies, query-string
 // filters and path parameters. Whatever arrives, no route answers 500, and every refusal says why.
@@ -190,6 +193,8 @@ const cases: Record<string, Case> = {
     params: id('file'),
     body: { example: () => ({ layerMap: { CUT: 'cut', CREASE: 'crease' } }), schema: LayerMapUpdate },
   },
+  'PUT /api/rate-card': { as: 'shopAdmin', body: { example: () => aRateCard(), schema: RateCardInput } },
+  'GET /api/requests/:id/estimate': { as: 'estimator', params: id('open'), query: EstimateQuery },
   'PUT /api/files/:id/page': {
     as: 'buyer',
     params: id('file'),

@@ -201,7 +201,7 @@ const cases: Record<string, UpdateCase> = {
 
 const bearer = (token: string) => ({ Authorization: `Bearer ${token}` });
 /** Routes whose body replaces one whole value: there is no field left out to keep. */
-const wholeValue = ['PUT /api/files/:id/layers', 'PUT /api/files/:id/page'];
+const wholeValue = ['PUT /api/files/:id/layers', 'PUT /api/files/:id/page', 'PUT /api/rate-card'];
 
 beforeAll(async () => {
   w = await createWorld();
