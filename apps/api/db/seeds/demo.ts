@@ -3,6 +3,7 @@ import type { Knex } from 'knex';
 import bcrypt from 'bcryptjs';
 import type { Storage } from '@kerfmark/storage';
 import { seedHistory } from './demoHistory';
+import { seedRateCards } from './demoRateCards';
 import { DEMO_PASSWORD, demoOrganisations } from './demoPeople';
 import { seedRequests } from './demoRequests';
 
@@ -36,5 +37,6 @@ export async function seedDemo(knex: Knex, opts: { storage?: Storage; bcryptRoun
   if (opts.storage) {
     await seedRequests(knex, opts.storage);
     await seedHistory(knex, opts.storage);
+    await seedRateCards(knex);
   }
 }

@@ -1,5 +1,9 @@
 import type { Complexity } from '@kerfmark/dieline';
 import type {
+  CalibrationDto,
+  EstimateDto,
+  RateCardDto,
+  RateCardInput,
   LibraryDieDto,
   PriceRecordDto,
   DashboardDto,
@@ -95,6 +99,16 @@ export const filesApi = {
   choosePage: (id: number, page: number | null) =>
     api<DielineFileDto>(`/files/${id}/page`, { method: 'PUT', body: { page } }),
   remove: (id: number) => api<void>(`/files/${id}`, { method: 'DELETE' }),
+};
+
+export const rateCardApi = {
+  get: () => api<{ rateCard: RateCardDto | null }>('/rate-card'),
+  save: (input: RateCardInput) => api<RateCardDto>('/rate-card', { method: 'PUT', body: input }),
+  calibration: () => api<CalibrationDto>('/rate-card/calibration'),
+  estimate: (requestId: number, leadDays: number, boardThicknessIn?: number) =>
+    api<EstimateDto>(
+      `/requests/${requestId}/estimate?leadDays=${leadDays}${boardThicknessIn ? `&boardThicknessIn=${boardThicknessIn}` : ''}`,
+    ),
 };
 
 export const bidsApi = {

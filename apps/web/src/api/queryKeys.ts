@@ -6,6 +6,8 @@ import type { MaybeRef } from 'vue';
  * (no arguments) refreshes every list of requests.
  */
 export const queryKeys = {
+  rateCard: () => ['rate-card'],
+  calibration: () => ['rate-card', 'calibration'],
   request: (id?: MaybeRef<number | null>) => (id === undefined ? ['request'] : ['request', id]),
   requests: (query?: MaybeRef<unknown>) => (query === undefined ? ['requests'] : ['requests', query]),
   openRequests: (query: MaybeRef<unknown>) => ['open-requests', query],

@@ -62,6 +62,12 @@ export const appRoutes: RouteRecordRaw[] = [
     component: () => import('../views/NotificationsView.vue'),
     meta: { title: 'Notifications', hidden: true },
   },
+  {
+    path: 'rate-card',
+    name: 'rate-card',
+    component: () => import('../views/RateCardView.vue'),
+    meta: { title: 'Rate card', access: { kinds: ['die_shop'] } },
+  },
   { path: 'team', name: 'team', component: () => import('../views/TeamView.vue'), meta: { title: 'Team' } },
   {
     path: 'presses',
