@@ -22,7 +22,9 @@ import { notificationRoutes } from './routes/notificationRoutes';
 import { libraryRoutes } from './routes/libraryRoutes';
 import { openRequestRoutes } from './routes/openRequestRoutes';
 import { pressRoutes } from './routes/pressRoutes';
+import { organisationRoutes } from './routes/organisationRoutes';
 import { rateCardRoutes } from './routes/rateCardRoutes';
+import { holidayRoutes } from './routes/holidayRoutes';
 import { priceHistoryRoutes } from './routes/priceHistoryRoutes';
 import { requestRoutes } from './routes/requestRoutes';
 import { userRoutes } from './routes/userRoutes';
@@ -69,6 +71,8 @@ export function createApp(deps: AppDeps): Express {
   api.use('/users', userRoutes(services, requireAuth));
   api.use('/invitations', invitationRoutes(services, requireAuth));
   api.use('/presses', pressRoutes(services, requireAuth));
+  api.use('/holidays', holidayRoutes(services, requireAuth));
+  api.use('/organisation', organisationRoutes(services, requireAuth));
   api.use('/requests', requestRoutes(services, requireAuth, config.maxUploadBytes));
   api.use('/files', fileRoutes(services, requireAuth));
   api.use('/notifications', notificationRoutes(services, requireAuth));

@@ -50,7 +50,38 @@ export interface AtRiskItem {
   reason: string;
 }
 
+/** A decided job the shop bid on: won, or gone elsewhere (never whose, never at what price). */
+export interface ShopRecordJob {
+  requestId: number;
+  title: string;
+  awardedAt: string;
+  outcome: 'won' | 'elsewhere';
+  /** The shop's own bid for the die. */
+  myDieCents: number;
+  currency: string;
+  /** Where that bid fell against the buyer's fair-price band; null when the buyer's history gives none. */
+  band: 'below' | 'within' | 'above' | null;
+  /** How far outside the band, as a share of its nearer edge; 0 within it. */
+  offBand: number | null;
+}
+
+/** A die shop's record: its open bids, wins and losses, win rates, and how its dies ship. */
+export interface ShopRecordDto {
+  openBids: number;
+  won: number;
+  lost: number;
+  /** Won ÷ decided among jobs awarded in the last 90 and 365 days; null with none decided. */
+  winRate90: number | null;
+  winRate365: number | null;
+  shipped: number;
+  /** Shipped by the promised date ÷ shipped; null before the first shipment. */
+  onTimeRate: number | null;
+  recent: ShopRecordJob[];
+}
+
 export interface DashboardDto {
   atRisk: AtRiskItem[];
   upcoming: UpcomingItem[];
+  /** For a die shop only. */
+  shopRecord: ShopRecordDto | null;
 }

@@ -1,5 +1,12 @@
 import { describe, expect, it } from 'vitest';
-import { DieRequestUpdate, LibraryDieUpdate, PreferencesUpdate, PressUpdate, UserUpdate } from './index';
+import {
+  DieRequestUpdate,
+  LibraryDieUpdate,
+  OrganisationProfileUpdate,
+  PreferencesUpdate,
+  PressUpdate,
+  UserUpdate,
+} from './index';
 import { z } from 'zod';
 
 // zod 4 docs (.partial()): optional fields that carry a .default() still take the default when the
@@ -11,6 +18,7 @@ describe('update schemas', () => {
     ['LibraryDieUpdate', LibraryDieUpdate, { storageLocation: 'Rack B' }],
     ['UserUpdate', UserUpdate, { role: 'buyer' }],
     ['PreferencesUpdate', PreferencesUpdate, { email: { shipped: false } }],
+    ['OrganisationProfileUpdate', OrganisationProfileUpdate, { paymentTerms: 'Net 30' }],
   ] as const;
 
   it.each(cases)('%s adds no field the update did not name', (_name, schema, body) => {

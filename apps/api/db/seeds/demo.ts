@@ -4,7 +4,8 @@ import bcrypt from 'bcryptjs';
 import type { Storage } from '@kerfmark/storage';
 import { seedHistory } from './demoHistory';
 import { seedRateCards } from './demoRateCards';
-import { DEMO_PASSWORD, demoOrganisations } from './demoPeople';
+import { seedHolidays } from './demoHolidays';
+import { DEMO_PASSWORD, demoOrganisations, profileColumns } from './demoPeople';
 import { seedRequests } from './demoRequests';
 
 export { DEMO_PASSWORD, demoOrganisations };
@@ -20,6 +21,11 @@ export async function seedDemo(knex: Knex, opts: { storage?: Storage; bcryptRoun
         .merge(['kind', 'timeZone', 'postcode'])
         .returning('id');
       const organisationId = (row as { id: number }).id;
+      // The demo's profile until someone has filled one in: a second seed keeps their edits.
+      await trx('organisations')
+        .where({ id: organisationId })
+        .whereNull('legalName')
+        .update(profileColumns(org.profile));
       for (const user of org.users) {
         await trx('users')
           .insert({ ...user, organisationId, passwordHash, status: 'active' })
@@ -34,6 +40,7 @@ export async function seedDemo(knex: Knex, opts: { storage?: Storage; bcryptRoun
       }
     }
   });
+  await seedHolidays(knex);
   if (opts.storage) {
     await seedRequests(knex, opts.storage);
     await seedHistory(knex, opts.storage);

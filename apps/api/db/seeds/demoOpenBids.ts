@@ -16,6 +16,12 @@ export async function seedOpenBids(knex: Knex): Promise<void> {
     const request = await knex('dieRequests').where({ jobReference: demo.jobReference }).first();
     const shop = await knex('organisations').where({ name: demo.shop }).first();
     const estimator = await knex('users').where({ organisationId: shop.id, role: 'estimator' }).first();
+    // The promise skips the shop's holidays, as the bid service's does.
+    const holidays = new Set<string>(
+      (await knex('shopHolidays').where({ shopId: shop.id }).whereNull('removedAt').select('date')).map(
+        (h: { date: string }) => h.date,
+      ),
+    );
     const lines: BidLine[] = [
       { kind: 'die', description: 'Steel-rule die on 5/8 in board', amountCents: demo.dieCents },
       { kind: 'counter', description: 'Phenolic counter', amountCents: 18_000 },
@@ -28,7 +34,7 @@ export async function seedOpenBids(knex: Knex): Promise<void> {
       lines,
       currency: 'USD',
       leadDays: demo.leadDays,
-      promisedShipDate: addWorkingDays(new Date().toISOString().slice(0, 10), demo.leadDays),
+      promisedShipDate: addWorkingDays(new Date().toISOString().slice(0, 10), demo.leadDays, holidays),
       validUntil: atDays(45).toISOString().slice(0, 10),
     });
   }

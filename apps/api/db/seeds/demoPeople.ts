@@ -1,6 +1,7 @@
-import type { OrgKind, Press, PressKind, Role } from '@kerfmark/contracts';
+import type { OrganisationProfileUpdate, OrgKind, Press, PressKind, Role } from '@kerfmark/contracts';
 
-// The demo scenario's organisations, people and presses: invented, for the demo only.
+// The demo scenario's organisations, people and presses: invented, for the demo only. Street
+// names are made up; the postcodes are real areas, so that distances work out.
 
 export const DEMO_PASSWORD = 'kerfmark-demo-2026';
 
@@ -9,6 +10,8 @@ interface DemoOrg {
   kind: OrgKind;
   timeZone: string;
   postcode: string;
+  /** The profile: legal name and office, and a printer's terms or a die shop's capabilities. */
+  profile: OrganisationProfileUpdate;
   users: Array<{ email: string; name: string; role: Role }>;
   presses?: Array<{
     name: string;
@@ -30,6 +33,16 @@ export const demoOrganisations: DemoOrg[] = [
     kind: 'printer',
     timeZone: 'America/Chicago',
     postcode: '60614',
+    profile: {
+      legalName: 'Larkspur Press & Carton Co.',
+      officeAddress: '2150 Thistlecombe Row\nChicago, Illinois',
+      contactEmail: 'purchasing@larkspur.example',
+      paymentTerms: 'Net 30',
+      deliveryPoints: [
+        { name: 'Main plant, dock 2', address: '2150 Thistlecombe Row\nChicago, Illinois', postcode: '60614' },
+        { name: 'Finishing annex', address: '41 Brackenhollow Court\nChicago, Illinois', postcode: '60614' },
+      ],
+    },
     users: [
       { email: 'maya@larkspur.example', name: 'Maya Lindqvist', role: 'buyer' },
       { email: 'daniel@larkspur.example', name: 'Daniel Osei', role: 'purchasing' },
@@ -70,6 +83,15 @@ export const demoOrganisations: DemoOrg[] = [
     kind: 'printer',
     timeZone: 'America/New_York',
     postcode: '23510',
+    profile: {
+      legalName: 'Tidewater Print Finishing, Inc.',
+      officeAddress: '600 Sallowmere Quay\nNorfolk, Virginia',
+      contactEmail: 'accounts@tidewater.example',
+      paymentTerms: 'Net 45 from receipt of the die',
+      deliveryPoints: [
+        { name: 'Receiving, door 4', address: '600 Sallowmere Quay\nNorfolk, Virginia', postcode: '23510' },
+      ],
+    },
     users: [
       { email: 'tomas@tidewater.example', name: 'Tomás Herrera', role: 'buyer' },
       { email: 'june@tidewater.example', name: 'June Park', role: 'purchasing' },
@@ -91,6 +113,19 @@ export const demoOrganisations: DemoOrg[] = [
     kind: 'die_shop',
     timeZone: 'America/Chicago',
     postcode: '60148',
+    // Flat dies of every usual size, both rule heights, laser-cut boards.
+    profile: {
+      legalName: 'Brightline Rule & Die LLC',
+      officeAddress: '310 Fennick Industrial Parkway\nLombard, Illinois',
+      contactEmail: 'quotes@brightline.example',
+      dieKinds: ['flat'],
+      maxBoardWidthIn: 40,
+      maxBoardLengthIn: 60,
+      ruleHeightsIn: [0.937, 0.918],
+      makesCounters: true,
+      fitsEjectionRubber: true,
+      laserCutBoards: true,
+    },
     users: [
       { email: 'grace@brightline.example', name: 'Grace Whitfield', role: 'estimator' },
       { email: 'ken@brightline.example', name: 'Ken Abiodun', role: 'admin' },
@@ -101,6 +136,19 @@ export const demoOrganisations: DemoOrg[] = [
     kind: 'die_shop',
     timeZone: 'America/Indiana/Indianapolis',
     postcode: '46204',
+    // The one shop that also makes rotary dies, on the largest boards.
+    profile: {
+      legalName: 'Okafor Steel Rule Dies, Inc.',
+      officeAddress: '77 Marrowstone Avenue\nIndianapolis, Indiana',
+      contactEmail: 'estimating@okafor.example',
+      dieKinds: ['flat', 'rotary'],
+      maxBoardWidthIn: 48,
+      maxBoardLengthIn: 72,
+      ruleHeightsIn: [0.937],
+      makesCounters: true,
+      fitsEjectionRubber: true,
+      laserCutBoards: true,
+    },
     users: [
       { email: 'chidi@okafor.example', name: 'Chidi Okafor', role: 'estimator' },
       { email: 'ada@okafor.example', name: 'Ada Okafor', role: 'admin' },
@@ -111,9 +159,28 @@ export const demoOrganisations: DemoOrg[] = [
     kind: 'die_shop',
     timeZone: 'America/Chicago',
     postcode: '53202',
+    // A small shop: flat dies on smaller boards, sawn by hand, no counters.
+    profile: {
+      legalName: 'Cedar Bend Die Works Ltd.',
+      officeAddress: '19 Osierbrook Lane\nMilwaukee, Wisconsin',
+      contactEmail: 'shop@cedarbend.example',
+      dieKinds: ['flat'],
+      maxBoardWidthIn: 28,
+      maxBoardLengthIn: 40,
+      ruleHeightsIn: [0.937],
+      makesCounters: false,
+      fitsEjectionRubber: true,
+      laserCutBoards: false,
+    },
     users: [
       { email: 'lena@cedarbend.example', name: 'Lena Marsh', role: 'estimator' },
       { email: 'oscar@cedarbend.example', name: 'Oscar Lind', role: 'admin' },
     ],
   },
 ];
+
+/** A demo organisation's profile as columns of `organisations` (delivery points are JSON). */
+export function profileColumns(profile: OrganisationProfileUpdate): Record<string, unknown> {
+  const { deliveryPoints, ...rest } = profile;
+  return deliveryPoints ? { ...rest, deliveryPoints: JSON.stringify(deliveryPoints) } : rest;
+}

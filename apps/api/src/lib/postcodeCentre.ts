@@ -1,21 +1,26 @@
+import zipcodes from 'zipcodes';
 import type { LatLon } from './distanceMiles';
 
-// Approximate centres of the US ZIP codes the demo scenario uses (from memory, to about 0.05°).
-// Enough to show a die shop how far a die travels; production would use a geocoding service.
-const CENTRES: Record<string, LatLon> = {
-  '60614': { lat: 41.922, lon: -87.651 }, // Chicago, Lincoln Park
-  '60148': { lat: 41.874, lon: -88.016 }, // Lombard, Illinois
-  '46204': { lat: 39.771, lon: -86.157 }, // Indianapolis, downtown
-  '53202': { lat: 43.046, lon: -87.899 }, // Milwaukee, downtown
-  '23510': { lat: 36.853, lon: -76.288 }, // Norfolk, Virginia
-};
+// Postcode centres from the zipcodes package's dataset: US ZIP codes, and Canadian postal codes
+// by their forward sortation area (the first three characters), as published with it. A
+// postcode it does not hold has no centre, so no distance is shown rather than a wrong one.
 
-/** The centre of a postcode we know, or null. */
-export function postcodeCentre(postcode: string | null | undefined): LatLon | null {
-  return postcode ? (CENTRES[postcode.trim().slice(0, 5)] ?? null) : null;
+const US_ZIP = /^(\d{5})(?:-?\d{4})?$/;
+const CANADIAN =
+  /^([A-CEGHJ-NPR-TVXY]\d[A-CEGHJ-NPR-TV-Z])\s?\d[A-CEGHJ-NPR-TV-Z]\d$|^([A-CEGHJ-NPR-TVXY]\d[A-CEGHJ-NPR-TV-Z])$/;
+
+/** The dataset's key for a postcode as people type it, or null when it is neither form. */
+export function postcodeKey(postcode: string | null | undefined): string | null {
+  const p = postcode?.trim().toUpperCase() ?? '';
+  const us = US_ZIP.exec(p);
+  if (us) return us[1]!;
+  const ca = CANADIAN.exec(p);
+  return ca ? (ca[1] ?? ca[2])! : null;
 }
 
-/** Every postcode with a known centre, for working out distances to all of them at once. */
-export function knownPostcodes(): Array<{ postcode: string; centre: LatLon }> {
-  return Object.entries(CENTRES).map(([postcode, centre]) => ({ postcode, centre }));
+/** The centre of a postcode the dataset holds, or null. */
+export function postcodeCentre(postcode: string | null | undefined): LatLon | null {
+  const key = postcodeKey(postcode);
+  const found = key ? zipcodes.lookup(key) : undefined;
+  return found ? { lat: found.latitude, lon: found.longitude } : null;
 }

@@ -1,5 +1,5 @@
 import { Model } from 'objection';
-import type { OrgKind } from '@kerfmark/contracts';
+import type { CuttingRuleHeightIn, DeliveryPoint, DieKind, OrgKind } from '@kerfmark/contracts';
 
 export class Organisation extends Model {
   static override tableName = 'organisations';
@@ -11,4 +11,24 @@ export class Organisation extends Model {
   postcode!: string | null;
   country!: string;
   createdAt!: Date;
+  // The profile (migration 20261204000200): the legal name and address purchase orders print.
+  legalName!: string | null;
+  officeAddress!: string | null;
+  contactEmail!: string | null;
+  // A printer's.
+  paymentTerms!: string | null;
+  deliveryPoints!: DeliveryPoint[];
+  // A die shop's capabilities; null where not stated.
+  dieKinds!: DieKind[];
+  maxBoardWidthIn!: number | null;
+  maxBoardLengthIn!: number | null;
+  /** A numeric[]: pg reads it as numbers (pg-types' float array parser). */
+  ruleHeightsIn!: CuttingRuleHeightIn[];
+  makesCounters!: boolean | null;
+  fitsEjectionRubber!: boolean | null;
+  laserCutBoards!: boolean | null;
+
+  static override get jsonAttributes() {
+    return ['deliveryPoints'];
+  }
 }

@@ -11,3 +11,4 @@ export { Award } from './Award';
 export { Bid } from './Bid';
 export { BidRevision } from './BidRevision';
 export { Notification } from './Notification';
+export { ShopHoliday } from './ShopHoliday';

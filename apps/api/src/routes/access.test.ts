@@ -5,7 +5,17 @@ import type { OrgKind } from '@kerfmark/contracts';
 import { actionRefusal, loadFacts, maySee, type Actor as AccessActor, type RequestAction } from '../access';
 import { DielineFile, Invitation, Notification, type Organisation, type User } from '../models';
 import { bidBody, inDays, rectangleSvg } from '../test/fixtures';
-import { app, createOpenRequest, createPress, createWorld, knex, PASSWORD, unique, type World } from '../test/harness';
+import {
+  app,
+  createOpenRequest,
+  createOrg,
+  createPress,
+  createWorld,
+  knex,
+  PASSWORD,
+  unique,
+  type World,
+} from '../test/harness';
 import { addDieline, callAs, createReadyDraft, createRequestAt, type StagedRequest } from '../test/requestStages';
 import { routeList } from '../test/routeList';
 import { aRateCard } from '../test/aRateCard';
@@ -79,6 +89,9 @@ interface Fixtures {
   /** A stock die the world's shop listed (every organisation sees it), and one of the printer's own. */
   stockDie: number;
   printerDie: number;
+  /** A closure of the world's shop to come, and one of another shop. */
+  holiday: number;
+  otherShopHoliday: number;
   /** A live invitation's link token. */
   previewToken: string;
   /** For each actor, one in its own organisation (anonymous: the printer's), or its own. */
@@ -196,6 +209,49 @@ const cases: RouteCase[] = [
         .patch(`/api/presses/${fx(w).press}`)
         .send({ typicalSpeedSph: 3500 }),
     expect: printers(200, { buyer: 403, purchasing: 403 }),
+  },
+
+  // The organisation's own profile: every member reads it, its admin keeps it.
+  {
+    name: 'GET /api/organisation/profile',
+    send: () => request(app).get('/api/organisation/profile'),
+    expect: everyone(200),
+  },
+  {
+    name: 'PATCH /api/organisation/profile',
+    send: () => request(app).patch('/api/organisation/profile').send({ contactEmail: 'office@test.example' }),
+    expect: admins(200),
+  },
+
+  // The die shop's holidays: its people read the calendar, its admin keeps it.
+  { name: 'GET /api/holidays', send: () => request(app).get('/api/holidays?year=2027'), expect: shops(200) },
+  {
+    name: 'GET /api/holidays/regions',
+    send: () => request(app).get('/api/holidays/regions?country=US'),
+    expect: shops(200),
+  },
+  {
+    name: 'POST /api/holidays',
+    send: () =>
+      request(app)
+        .post('/api/holidays')
+        .send({ date: inDays(45), name: 'Stocktaking day' }),
+    expect: { ...shops(403), shopAdmin: 201 },
+  },
+  {
+    name: 'POST /api/holidays/public',
+    send: () => request(app).post('/api/holidays/public').send({ country: 'US', region: 'IL', year: 2027 }),
+    expect: { ...shops(403), shopAdmin: 200 },
+  },
+  {
+    name: 'DELETE /api/holidays/:id (a holiday of the caller’s shop)',
+    send: (w) => request(app).delete(`/api/holidays/${fx(w).holiday}`),
+    expect: { ...shops(403), shopAdmin: 204 },
+  },
+  {
+    name: 'DELETE /api/holidays/:id (another shop’s holiday)',
+    send: (w) => request(app).delete(`/api/holidays/${fx(w).otherShopHoliday}`),
+    expect: { ...shops(403), shopAdmin: 404 },
   },
 
   { name: 'GET /api/me/dashboard', send: () => request(app).get('/api/me/dashboard'), expect: everyone(200) },
@@ -579,6 +635,14 @@ async function notice(user: User): Promise<number> {
   ).id;
 }
 
+/** A closure of a die shop's, two months ahead. */
+async function shopHoliday(shopId: number): Promise<number> {
+  const [row] = await knex('shopHolidays')
+    .insert({ shopId, date: inDays(60), name: 'Stocktaking day' })
+    .returning('id');
+  return row.id;
+}
+
 async function setUp(w: World): Promise<Fixtures> {
   const { printer, shop, users } = w;
   const open = (await createOpenRequest(w)).id;
@@ -604,6 +668,8 @@ async function setUp(w: World): Promise<Fixtures> {
     bySide((await invite(printer, users.printerAdmin)).id, (await invite(shop, users.shopAdmin)).id);
   return {
     press: (await createPress(printer)).id,
+    holiday: await shopHoliday(shop.id),
+    otherShopHoliday: await shopHoliday((await createOrg('die_shop')).id),
     open,
     openFile,
     question,

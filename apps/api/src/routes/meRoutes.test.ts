@@ -1,7 +1,7 @@
 import request from 'supertest';
 import { describe, expect, it } from 'vitest';
-import { app, createOpenRequest, createWorld } from '../test/harness';
-import { inDays } from '../test/fixtures';
+import { app, createOpenRequest, createShop, createWorld } from '../test/harness';
+import { bidBody, inDays } from '../test/fixtures';
 
 const bearer = (token: string) => ({ Authorization: `Bearer ${token}` });
 
@@ -45,5 +45,51 @@ describe('the buyer’s dashboard', () => {
     const other = await createWorld();
     const theirs = await request(app).get('/api/me/dashboard').set(bearer(other.tokens.buyer));
     expect(theirs.body.atRisk.map((r: { requestId: number }) => r.requestId)).not.toContain(tight.id);
+  });
+});
+
+describe('the die shop’s record', () => {
+  it('counts open bids, wins and losses, and says of a lost job only that it went elsewhere', async () => {
+    const w = await createWorld();
+    const rival = await createShop();
+    const bid = (requestId: number, token: string, dieCents: number) =>
+      request(app).post(`/api/requests/${requestId}/bids`).set(bearer(token)).send(bidBody(dieCents));
+    const award = async (requestId: number, bidId: number) => {
+      await request(app).post(`/api/requests/${requestId}/close-bidding`).set(bearer(w.tokens.purchasing));
+      const res = await request(app)
+        .post(`/api/requests/${requestId}/award`)
+        .set(bearer(w.tokens.purchasing))
+        .send({ bidId, reason: 'Chosen for the lead time.' });
+      expect(res.status, JSON.stringify(res.body)).toBe(200);
+    };
+    const won = await createOpenRequest(w);
+    const lost = await createOpenRequest(w);
+    const pending = await createOpenRequest(w);
+    const mine = await bid(won.id, w.tokens.estimator, 60_000);
+    await bid(lost.id, w.tokens.estimator, 70_000);
+    const theirs = await bid(lost.id, rival.token, 65_000);
+    await bid(pending.id, w.tokens.estimator, 50_000);
+    await award(won.id, mine.body.id);
+    await award(lost.id, theirs.body.id);
+
+    const res = await request(app).get('/api/me/dashboard').set(bearer(w.tokens.estimator));
+    expect(res.status).toBe(200);
+    // Won 1 of 2 decided (both awarded today), one bid still open, nothing shipped yet.
+    expect(res.body.shopRecord).toMatchObject({
+      openBids: 1,
+      won: 1,
+      lost: 1,
+      winRate90: 0.5,
+      winRate365: 0.5,
+      shipped: 0,
+      onTimeRate: null,
+    });
+    const gone = res.body.shopRecord.recent.find((j: { requestId: number }) => j.requestId === lost.id);
+    expect(gone).toMatchObject({ outcome: 'elsewhere', myDieCents: 70_000, band: null });
+    // Nothing of the winner reaches the losing shop: not its name, not its price.
+    const text = JSON.stringify(res.body);
+    expect(text).not.toContain(rival.shop.name);
+    expect(text).not.toContain('65000');
+    expect((await request(app).get('/api/me/dashboard').set(bearer(w.tokens.buyer))).body.shopRecord).toBeNull();
   });
 });

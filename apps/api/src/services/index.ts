@@ -3,6 +3,7 @@ import { createAuthService } from './authService';
 import type { ServiceDeps } from './deps';
 import { createInvitationService } from './invitationService';
 import { createPressService } from './pressService';
+import { createOrganisationService } from './organisationService';
 import { createUserService } from './userService';
 import { createRequestService } from './requestService';
 import { createFileService } from './fileService';
@@ -16,6 +17,7 @@ import { createPreferenceService } from './preferenceService';
 import { createPriceHistoryService } from './priceHistoryService';
 import { createLibraryService } from './libraryService';
 import { createRateCardService } from './rateCardService';
+import { createHolidayService } from './holidayService';
 
 export function createServices(deps: ServiceDeps, limiter: LoginLimiter) {
   const requests = createRequestService(deps);
@@ -30,12 +32,14 @@ export function createServices(deps: ServiceDeps, limiter: LoginLimiter) {
     awards: createAwardService(deps, requests, purchaseDocuments),
     purchaseDocuments,
     fulfilment: createFulfilmentService(deps, { requests, library, priceHistory }),
-    dashboard: createDashboardService(),
+    dashboard: createDashboardService(deps, priceHistory),
     priceHistory,
     auth: createAuthService(deps, limiter),
     users: createUserService(deps),
     invitations: createInvitationService(deps),
     presses: createPressService(deps),
+    holidays: createHolidayService(deps),
+    organisation: createOrganisationService(deps),
     rateCards: createRateCardService(deps),
     inbox: createInboxService(),
     preferences: createPreferenceService(),

@@ -34,18 +34,27 @@ export async function purchaseOrderDocument(
   const file = primaryFile(request.files);
   const metrics = file?.metrics;
   const shop = award.shop as Organisation;
+  const printer = request.organisation!;
   const pdf = await purchaseOrderPdf({
     poNumber: award.poNumber,
     issuedAt: award.awardedAt,
-    timeZone: request.organisation?.timeZone ?? 'UTC',
+    timeZone: printer.timeZone,
     buyer: {
-      organisation: request.organisation?.name ?? '',
+      organisation: printer.legalName ?? printer.name,
+      officeAddress: printer.officeAddress,
+      postcode: printer.postcode,
+      paymentTerms: printer.paymentTerms,
       contact: buyer?.name ?? '',
       email: buyer?.email ?? '',
       deliveryAddress: request.deliveryAddress,
       deliveryPostcode: request.deliveryPostcode,
     },
-    supplier: { organisation: shop.name, postcode: shop.postcode },
+    supplier: {
+      organisation: shop.legalName ?? shop.name,
+      officeAddress: shop.officeAddress,
+      postcode: shop.postcode,
+      email: shop.contactEmail,
+    },
     request: {
       id: request.id,
       title: request.title,

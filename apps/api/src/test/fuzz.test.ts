@@ -20,9 +20,14 @@ import {
   LibraryDieUpdate,
   LoginInput,
   OpenRequestsQuery,
+  OrganisationProfileUpdate,
   PreferencesUpdate,
   PressCreate,
   PressUpdate,
+  HolidayCreate,
+  HolidayRegionsQuery,
+  HolidayYearQuery,
+  PublicHolidaysLoad,
   PriceHistoryQuery,
   QuestionCreate,
   ReceiveInput,
@@ -152,10 +157,35 @@ const cases: Record<string, Case> = {
   'POST /api/invitations/:id/resend': { as: 'printerAdmin', params: id('invitation'), body: none },
   'POST /api/invitations/:id/revoke': { as: 'printerAdmin', params: id('revocable'), body: none },
   'POST /api/presses': { as: 'printerAdmin', body: { example: () => pressExample, schema: PressCreate } },
+  'GET /api/holidays': { as: 'estimator', query: HolidayYearQuery },
+  'GET /api/holidays/regions': { as: 'estimator', query: HolidayRegionsQuery },
+  'POST /api/holidays': {
+    as: 'shopAdmin',
+    body: { example: () => ({ date: inDays(50), name: 'Stocktaking day' }), schema: HolidayCreate },
+  },
+  'POST /api/holidays/public': {
+    as: 'shopAdmin',
+    body: { example: () => ({ country: 'US', region: 'IL', year: 2027 }), schema: PublicHolidaysLoad },
+  },
+  'DELETE /api/holidays/:id': { as: 'shopAdmin', params: id('holiday'), body: none },
   'PATCH /api/presses/:id': {
     as: 'printerAdmin',
     params: id('press'),
     body: { example: () => pressExample, schema: PressUpdate },
+  },
+  'PATCH /api/organisation/profile': {
+    as: 'printerAdmin',
+    body: {
+      example: () => ({
+        legalName: 'Fuzz Folding Cartons LLC',
+        officeAddress: '1 Test Street\nSpringfield',
+        postcode: '60614',
+        contactEmail: 'office@test.example',
+        paymentTerms: 'Net 30',
+        deliveryPoints: [{ name: 'Dock 1', address: '1 Test Street', postcode: '60614' }],
+      }),
+      schema: OrganisationProfileUpdate,
+    },
   },
   'GET /api/requests': { as: 'buyer', query: RequestListQuery },
   'POST /api/requests': { as: 'buyer', body: { example: requestExample, schema: DieRequestCreate } },
@@ -326,6 +356,7 @@ beforeAll(async () => {
   tokens = { ...w.tokens, spare: await signIn(await createUser(w.printer, 'buyer')) };
   f.user = (await createUser(w.printer, 'buyer')).id;
   f.press = (await createPress(w.printer)).id;
+  f.holiday = await inserted('shopHolidays', { shopId: w.shop.id, date: inDays(70), name: 'Stocktaking day' });
   const invite = async () =>
     (await ok('POST /api/users', {}, { email: `invitee-${unique()}@test.example`, name: 'Invitee', role: 'buyer' }))
       .id as number;

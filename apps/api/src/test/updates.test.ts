@@ -138,6 +138,64 @@ const cases: Record<string, UpdateCase> = {
     method: 'patch',
     path: (id) => `/api/users/${id}`,
   },
+  'PATCH /api/organisation/profile': {
+    as: 'printerAdmin',
+    make: async () => {
+      await knex('organisations')
+        .where({ id: w.printer.id })
+        .update({
+          legalName: 'First Cartons LLC',
+          officeAddress: '1 Mill Road',
+          contactEmail: 'first@test.example',
+          paymentTerms: 'Net 30',
+          deliveryPoints: JSON.stringify([{ name: 'Dock 1', address: '1 Mill Road', postcode: '60614' }]),
+        });
+      return w.printer.id;
+    },
+    fields: () => ({
+      legalName: 'Second Cartons LLC',
+      officeAddress: '2 Mill Road\nUnit 4',
+      postcode: '60615',
+      contactEmail: 'second@test.example',
+      paymentTerms: 'Net 45',
+      deliveryPoints: [{ name: 'Dock 2', address: '2 Mill Road', postcode: '60615' }],
+    }),
+    read: async (id) => knex('organisations').where({ id }).first(),
+    method: 'patch',
+    path: () => '/api/organisation/profile',
+  },
+  'PATCH /api/organisation/profile (a die shop)': {
+    as: 'shopAdmin',
+    // Both sides of the largest board are set first: an update may then name either alone.
+    make: async () => {
+      await knex('organisations')
+        .where({ id: w.shop.id })
+        .update({
+          legalName: 'First Dies Inc.',
+          dieKinds: ['flat'],
+          maxBoardWidthIn: 40,
+          maxBoardLengthIn: 60,
+          ruleHeightsIn: [0.937],
+          makesCounters: false,
+          fitsEjectionRubber: false,
+          laserCutBoards: false,
+        });
+      return w.shop.id;
+    },
+    fields: () => ({
+      legalName: 'Second Dies Inc.',
+      dieKinds: ['flat', 'rotary'],
+      maxBoardWidthIn: 48,
+      maxBoardLengthIn: 72,
+      ruleHeightsIn: [0.937, 0.918],
+      makesCounters: true,
+      fitsEjectionRubber: true,
+      laserCutBoards: true,
+    }),
+    read: async (id) => knex('organisations').where({ id }).first(),
+    method: 'patch',
+    path: () => '/api/organisation/profile',
+  },
   'PATCH /api/library/:id': {
     as: 'buyer',
     make: async () =>

@@ -5,6 +5,12 @@ import type {
   RateCardDto,
   RateCardInput,
   LibraryDieDto,
+  HolidayCreate,
+  HolidayDto,
+  HolidayPlacesDto,
+  HolidayYearDto,
+  PublicHolidaysLoad,
+  PublicHolidaysLoadedDto,
   PriceRecordDto,
   DashboardDto,
   NotificationKind,
@@ -27,6 +33,8 @@ import type {
   LoginInput,
   LoginResult,
   Me,
+  OrganisationProfileDto,
+  OrganisationProfileUpdate,
   Press,
   PressCreate,
   PressUpdate,
@@ -54,6 +62,12 @@ export const invitationsApi = {
   revoke: (id: number) => api<Invitation>(`/invitations/${id}/revoke`, { method: 'POST' }),
   preview: (token: string) => api<InvitationPreview>(`/invitations/preview?token=${encodeURIComponent(token)}`),
   accept: (input: InvitationAccept) => api<LoginResult>('/invitations/accept', { method: 'POST', body: input }),
+};
+
+export const organisationApi = {
+  profile: () => api<OrganisationProfileDto>('/organisation/profile'),
+  updateProfile: (patch: OrganisationProfileUpdate) =>
+    api<OrganisationProfileDto>('/organisation/profile', { method: 'PATCH', body: patch }),
 };
 
 export const pressesApi = {
@@ -109,6 +123,16 @@ export const rateCardApi = {
     api<EstimateDto>(
       `/requests/${requestId}/estimate?leadDays=${leadDays}${boardThicknessIn ? `&boardThicknessIn=${boardThicknessIn}` : ''}`,
     ),
+};
+
+export const holidaysApi = {
+  year: (year: number) => api<HolidayYearDto>(`/holidays?year=${year}`),
+  places: (country?: string) =>
+    api<HolidayPlacesDto>(`/holidays/regions${country ? `?country=${encodeURIComponent(country)}` : ''}`),
+  add: (input: HolidayCreate) => api<HolidayDto>('/holidays', { method: 'POST', body: input }),
+  loadPublic: (input: PublicHolidaysLoad) =>
+    api<PublicHolidaysLoadedDto>('/holidays/public', { method: 'POST', body: input }),
+  remove: (id: number) => api<void>(`/holidays/${id}`, { method: 'DELETE' }),
 };
 
 export const bidsApi = {

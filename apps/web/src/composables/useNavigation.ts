@@ -10,7 +10,7 @@ export function useNavigation() {
     const me = auth.me;
     if (!me) return [];
     return appRoutes
-      .filter((route) => !route.meta?.hidden && canAccess(me, route.meta?.access))
+      .filter((route) => !route.meta?.hidden && canAccess(me, route.meta?.access) && canAccess(me, route.meta?.nav))
       .map((route) => ({ name: String(route.name), title: route.meta?.title ?? String(route.name) }));
   });
 }

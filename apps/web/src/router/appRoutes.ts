@@ -9,6 +9,8 @@ declare module 'vue-router' {
     title?: string;
     /** Not listed in the navigation (reached from another page). */
     hidden?: boolean;
+    /** Listed in the navigation only for these, though open to everyone `access` lets in. */
+    nav?: Access;
   }
 }
 
@@ -68,11 +70,24 @@ export const appRoutes: RouteRecordRaw[] = [
     component: () => import('../views/RateCardView.vue'),
     meta: { title: 'Rate card', access: { kinds: ['die_shop'] } },
   },
+  {
+    path: 'holidays',
+    name: 'holidays',
+    component: () => import('../views/HolidaysView.vue'),
+    meta: { title: 'Holidays', access: { kinds: ['die_shop'] } },
+  },
   { path: 'team', name: 'team', component: () => import('../views/TeamView.vue'), meta: { title: 'Team' } },
   {
     path: 'presses',
     name: 'presses',
     component: () => import('../views/PressesView.vue'),
     meta: { title: 'Presses', access: { kinds: ['printer'] } },
+  },
+  {
+    // Every member reads the profile (through the organisation's name in the header); admins edit it.
+    path: 'profile',
+    name: 'profile',
+    component: () => import('../views/ProfileView.vue'),
+    meta: { title: 'Organisation profile', nav: { roles: ['admin'] } },
   },
 ];

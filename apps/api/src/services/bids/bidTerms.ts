@@ -25,8 +25,8 @@ export async function bidTerms(trx: Knex.Transaction, actor: AuthUser, request: 
   }
   const holidays = new Set<string>(
     // knex's pluck() misses columns under the snake-case mappers, so select and map instead.
-    (await trx('shopHolidays').where({ shopId: actor.organisationId }).select('date')).map((h: { date: string }) =>
-      String(h.date),
+    (await trx('shopHolidays').where({ shopId: actor.organisationId }).whereNull('removedAt').select('date')).map(
+      (h: { date: string }) => String(h.date),
     ),
   );
   return {

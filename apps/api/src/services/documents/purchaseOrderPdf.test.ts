@@ -1,3 +1,4 @@
+import { statSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import { dirname, join } from 'node:path';
 import { getDocument } from 'pdfjs-dist/legacy/build/pdf.mjs';
@@ -10,13 +11,21 @@ const base: PurchaseOrderDoc = {
   issuedAt: new Date('2026-12-05T20:30:00Z'),
   timeZone: 'America/Chicago',
   buyer: {
-    organisation: 'Prairie Folding Cartons',
+    organisation: 'Prairie Folding Cartons LLC',
+    officeAddress: '400 Quarry Row\nSuite 12\nSpringfield IL',
+    postcode: '62702',
+    paymentTerms: 'Net 45 from receipt of the die',
     contact: 'Dana Whitfield',
     email: 'dana@prairie.example',
     deliveryAddress: '1200 Mill Road, Springfield IL',
     deliveryPostcode: '62701',
   },
-  supplier: { organisation: 'Northside Rule & Die', postcode: '60607' },
+  supplier: {
+    organisation: 'Northside Rule & Die Inc.',
+    officeAddress: '88 Foundry Lane\nChicago IL',
+    postcode: '60607',
+    email: 'orders@northside.example',
+  },
   request: {
     id: 17,
     title: 'Cereal carton 4-up',
@@ -40,28 +49,41 @@ const base: PurchaseOrderDoc = {
   notes: 'Call before delivery.',
 };
 
-// pdfjs-dist's own metrics for the standard fonts (the PO embeds none), read from disk.
+// pdfjs-dist's own metrics for the standard fonts, read from disk (the PO embeds its fonts).
 const standardFontDataUrl = join(
   dirname(createRequire(import.meta.url).resolve('pdfjs-dist/package.json')),
   'standard_fonts/',
 );
 
-/** The text of every page, read back with pdfjs-dist (a general-purpose PDF library, not the writer). */
-async function readBack(buf: Buffer): Promise<string[]> {
+/** Each piece of text of every page with the name of the font it is set in, read back with pdfjs-dist. */
+async function readPieces(buf: Buffer): Promise<Array<Array<{ text: string; font: string }>>> {
   const pdf = await getDocument({
     data: new Uint8Array(buf),
     useSystemFonts: false,
     disableFontFace: true,
     standardFontDataUrl,
   }).promise;
-  const pages: string[] = [];
+  const pages = [];
   for (let n = 1; n <= pdf.numPages; n++) {
-    const content = await (await pdf.getPage(n)).getTextContent();
-    pages.push(content.items.map((item) => ('str' in item ? item.str : '')).join(' '));
+    const page = await pdf.getPage(n);
+    const content = await page.getTextContent();
+    await page.getOperatorList(); // loads the page's fonts into commonObjs
+    pages.push(
+      content.items.flatMap((item) =>
+        'str' in item ? [{ text: item.str, font: (page.commonObjs.get(item.fontName) as { name: string }).name }] : [],
+      ),
+    );
   }
   await pdf.destroy();
   return pages;
 }
+
+/** The text of every page, read back with pdfjs-dist (a general-purpose PDF library, not the writer). */
+async function readBack(buf: Buffer): Promise<string[]> {
+  return (await readPieces(buf)).map((pieces) => pieces.map((p) => p.text).join(' '));
+}
+
+const fontFile = (path: string) => createRequire(import.meta.url).resolve(`@expo-google-fonts/${path}`);
 
 describe('purchaseOrderPdf', () => {
   it('writes a PDF whose text carries the PO number, the supplier, every line and the total', async () => {
@@ -131,16 +153,79 @@ describe('purchaseOrderPdf', () => {
     await expect(purchaseOrderPdf({ ...base, timeZone: 'Mars/Olympus' })).rejects.toThrow('time zone: "Mars/Olympus"');
   });
 
-  it('prints Western European text and line ends plainly, and refuses what the standard fonts cannot show', async () => {
-    // The standard fonts' WinAnsiEncoding is Windows-1252 (ISO 32000-1, Annex D): "é" and "€" are in it, "ł" is not.
+  it('prints Western European text and line ends plainly', async () => {
     const buf = await purchaseOrderPdf({ ...base, notes: 'Livraison à l’entrepôt, 5 € de frais\r\nQuai\t2' });
     const text = (await readBack(buf)).join(' ');
     expect(text).toContain('Livraison à l’entrepôt, 5 € de frais');
     // A Windows line end and a tab print as a line break and a space, not as stray glyphs (common practice).
     expect(text).toContain('Quai 2');
     expect(text).not.toMatch(/frais\S/);
-    await expect(
-      purchaseOrderPdf({ ...base, supplier: { organisation: 'Zakład Wykrojników', postcode: null } }),
-    ).rejects.toThrow('cannot print "ł" (in the supplier\'s organisation)');
+  });
+
+  it('prints the issuing printer, its office and payment terms, the supplier and the delivery address', async () => {
+    const text = (await readBack(await purchaseOrderPdf(base))).join(' ');
+    // Every line of each multi-line address prints as a line of its own.
+    for (const line of ['Prairie Folding Cartons LLC', '400 Quarry Row', 'Suite 12', 'Springfield IL', '62702'])
+      expect(text).toContain(line);
+    for (const line of ['Northside Rule & Die Inc.', '88 Foundry Lane', 'Chicago IL', '60607'])
+      expect(text).toContain(line);
+    expect(text).toContain('orders@northside.example');
+    expect(text).toContain('1200 Mill Road, Springfield IL');
+    expect(text).toMatch(/Payment terms:\s+Net 45 from receipt of the die/);
+  });
+
+  it('prints names and addresses in any script as text, each in a font that has its glyphs', async () => {
+    const doc: PurchaseOrderDoc = {
+      ...base,
+      buyer: {
+        ...base.buyer,
+        organisation: 'Łódź Kartonaż Sp. z o.o.',
+        officeAddress: 'ul. Wymyślona 12\nŁódź',
+        paymentTerms: 'Przelew 30 dni',
+        deliveryAddress: 'Magazyn 3, ul. Zmyślona 7',
+        deliveryPostcode: '90-002',
+      },
+      supplier: {
+        organisation: '東京抜型製作所',
+        officeAddress: '東京都架空区見本町1-2-3',
+        postcode: '100-0001',
+        email: null,
+      },
+      // Korean, Simplified Chinese, Thai, Cyrillic and Greek, in the notes.
+      notes: '서울 종로구 / 上海纸箱 / กรุงเทพ / Москва / Αθήνα',
+    };
+    const buf = await purchaseOrderPdf(doc);
+    const pieces = (await readPieces(buf)).flat();
+    const fontOf = (text: string) => pieces.find((p) => p.text.includes(text))?.font;
+    // A subset font's name is a six-letter tag, "+", and the font's PostScript name (ISO 32000-1, 9.6.4).
+    expect(fontOf('Łódź Kartonaż Sp. z o.o.')).toMatch(/^[A-Z]{6}\+NotoSans-Regular$/);
+    expect(fontOf('東京抜型製作所')).toMatch(/^[A-Z]{6}\+NotoSansJP-Regular$/);
+    expect(fontOf('東京都架空区見本町1-2-3')).toMatch(/\+NotoSansJP-Regular$/);
+    expect(fontOf('서울 종로구')).toMatch(/\+NotoSansKR-Regular$/);
+    // "纸" (U+7EB8) is a simplified form, not in the Japanese font: the Chinese one prints it.
+    expect(fontOf('纸')).toMatch(/\+NotoSansSC-Regular$/);
+    expect(fontOf('กรุงเทพ')).toMatch(/\+NotoSansThai-Regular$/);
+    const text = pieces.map((p) => p.text).join(' ');
+    expect(text).toMatch(/Payment terms:\s+Przelew 30 dni/);
+    for (const expected of ['ul. Wymyślona 12', 'Magazyn 3, ul. Zmyślona 7', '90-002', '100-0001', 'Москва', 'Αθήνα'])
+      expect(text).toContain(expected);
+    // pdfkit embeds only the glyphs used: the PDF is a small fraction of the Japanese font alone.
+    const japaneseFont = statSync(fontFile('noto-sans-jp/400Regular/NotoSansJP_400Regular.ttf')).size;
+    expect(buf.length).toBeLessThan(japaneseFont / 20);
+    expect(buf.length).toBeLessThan(150_000);
+  });
+
+  it('prints a name typed with combining accents as the composed letters', async () => {
+    // "o" + U+0301 COMBINING ACUTE ACCENT composes to "ó" (Unicode NFC, UAX #15).
+    const buf = await purchaseOrderPdf({ ...base, buyer: { ...base.buyer, organisation: 'Lo\u0301dz\u0301 Karton' } });
+    expect((await readBack(buf)).join(' ')).toContain('Lódź Karton');
+  });
+
+  it('still prints the rest of a text when no font has one of its characters', async () => {
+    // U+1F4E6 PACKAGE is an emoji, in none of the embedded fonts.
+    const buf = await purchaseOrderPdf({ ...base, notes: 'Packed in one crate 📦 as agreed' });
+    const text = (await readBack(buf)).join(' ');
+    expect(text).toContain('Packed in one crate');
+    expect(text).toContain('as agreed');
   });
 });

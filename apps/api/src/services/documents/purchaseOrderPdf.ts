@@ -4,10 +4,11 @@ import { formatMoney } from '@kerfmark/pricing';
 import PDFDocument from 'pdfkit';
 import type { PurchaseOrderDoc } from './types';
 import { checkDocument, plain } from './checkDocument';
+import { fontFaces } from './fontFaces';
+import { fontRuns } from './fontRuns';
+import { useFace } from './useFace';
+import { writeText, type WriteOptions } from './writeText';
 
-// The standard PDF fonts: nothing embedded, nothing fetched. They cover Windows-1252 only.
-const REGULAR = 'Helvetica';
-const BOLD = 'Helvetica-Bold';
 const INK = '#1a1a1a';
 const MUTED = '#666666';
 const RULE = '#bbbbbb';
@@ -19,6 +20,7 @@ type Pdf = PDFKit.PDFDocument;
 /**
  * The purchase order an award issues, as a PDF: who buys, who makes, what, for how much and by
  * when. Deterministic: the same document gives the same bytes (the creation date is issuedAt).
+ * Names and addresses print in any script the embedded Noto Sans fonts cover (see `fontFaces`).
  */
 export async function purchaseOrderPdf(doc: PurchaseOrderDoc): Promise<Buffer> {
   checkDocument(doc);
@@ -40,20 +42,34 @@ export async function purchaseOrderPdf(doc: PurchaseOrderDoc): Promise<Buffer> {
   const width = pdf.page.width - left - pdf.page.margins.right;
 
   // Wordmark and title.
-  pdf.fillColor(INK).font(BOLD).fontSize(22).text('Kerfmark', left, MARGIN);
-  pdf.fontSize(18).text('Purchase order', left, MARGIN + 2, { width, align: 'right' });
-  pdf.font(REGULAR).fontSize(10).moveDown(0.3);
-  pdf.text(`PO number ${doc.poNumber}`, { width, align: 'right' });
-  pdf.text(`Issued ${formatInZone(doc.issuedAt, doc.timeZone)}`, { width, align: 'right' });
+  pdf.fillColor(INK).fontSize(22);
+  writeText(pdf, 'Kerfmark', { weight: 'bold', x: left, y: MARGIN });
+  pdf.fontSize(18);
+  writeText(pdf, 'Purchase order', { weight: 'bold', x: left, y: MARGIN + 2, width, align: 'right' });
+  pdf.fontSize(10).moveDown(0.3);
+  writeText(pdf, `PO number ${doc.poNumber}`, { width, align: 'right' });
+  writeText(pdf, `Issued ${formatInZone(doc.issuedAt, doc.timeZone)}`, { width, align: 'right' });
   pdf.moveDown(1.5);
 
   // Buyer, supplier and delivery side by side.
   const gap = 16;
   const column = (width - 2 * gap) / 3;
   const top = pdf.y;
+  const { buyer, supplier } = doc;
   const bottoms = [
-    block(pdf, left, top, column, 'Buyer', [doc.buyer.organisation, doc.buyer.contact, doc.buyer.email]),
-    block(pdf, left + column + gap, top, column, 'Supplier', [doc.supplier.organisation, doc.supplier.postcode]),
+    block(pdf, left, top, column, 'Buyer', [
+      buyer.organisation,
+      buyer.officeAddress,
+      buyer.postcode,
+      buyer.contact,
+      buyer.email,
+    ]),
+    block(pdf, left + column + gap, top, column, 'Supplier', [
+      supplier.organisation,
+      supplier.officeAddress,
+      supplier.postcode,
+      supplier.email,
+    ]),
     block(
       pdf,
       left + 2 * (column + gap),
@@ -85,13 +101,14 @@ export async function purchaseOrderPdf(doc: PurchaseOrderDoc): Promise<Buffer> {
     );
     field(pdf, 'Complexity', complexityLabels[doc.dieline.complexity]);
   } else {
-    pdf.text('No dieline attached.');
+    writeText(pdf, 'No dieline attached.');
   }
 
   section(pdf, 'Price lines', width);
   priceTable(pdf, doc, money, left, width);
 
   section(pdf, 'Terms', width);
+  if (doc.buyer.paymentTerms) field(pdf, 'Payment terms', doc.buyer.paymentTerms);
   field(pdf, 'Currency', doc.currency);
   field(pdf, 'Lead time', `${doc.leadDays} working ${doc.leadDays === 1 ? 'day' : 'days'}`);
   field(pdf, 'Promised ship date', doc.promisedShipDate);
@@ -99,9 +116,9 @@ export async function purchaseOrderPdf(doc: PurchaseOrderDoc): Promise<Buffer> {
   if (doc.awardReason) field(pdf, 'Award reason', doc.awardReason);
   if (doc.notes) field(pdf, 'Notes', doc.notes);
   pdf.moveDown(0.5);
-  pdf.text(`This purchase order accepts bid revision ${doc.bidRevision} as submitted.`);
+  writeText(pdf, `This purchase order accepts bid revision ${doc.bidRevision} as submitted.`);
   pdf.moveDown(0.5);
-  pdf.font(BOLD).text(SAFETY_LINE).font(REGULAR);
+  writeText(pdf, SAFETY_LINE, { weight: 'bold' });
 
   pageFooters(pdf, doc.poNumber, left, width);
   pdf.end();
@@ -119,9 +136,10 @@ function collect(pdf: Pdf): Promise<Buffer> {
 
 /** A small labelled block of lines at (x, y); returns where it ends. */
 function block(pdf: Pdf, x: number, y: number, width: number, heading: string, lines: Array<string | null>): number {
-  pdf.font(BOLD).fontSize(9).fillColor(MUTED).text(heading.toUpperCase(), x, y, { width });
-  pdf.font(REGULAR).fontSize(10).fillColor(INK);
-  for (const line of lines) if (line) pdf.text(plain(line), x, pdf.y, { width });
+  pdf.fontSize(9).fillColor(MUTED);
+  writeText(pdf, heading.toUpperCase(), { weight: 'bold', x, y, width });
+  pdf.fontSize(10).fillColor(INK);
+  for (const line of lines) if (line) writeText(pdf, plain(line), { x, y: pdf.y, width });
   return pdf.y;
 }
 
@@ -130,18 +148,26 @@ function section(pdf: Pdf, title: string, width: number): void {
   if (pdf.y + 60 > pdf.page.maxY()) pdf.addPage();
   const x = pdf.page.margins.left;
   pdf.moveDown(0.8);
-  pdf.font(BOLD).fontSize(11).fillColor(INK).text(title, x, pdf.y, { width });
+  pdf.fontSize(11).fillColor(INK);
+  writeText(pdf, title, { weight: 'bold', x, y: pdf.y, width });
   pdf
     .moveTo(x, pdf.y + 1)
     .lineTo(x + width, pdf.y + 1)
     .lineWidth(0.5)
     .strokeColor(RULE)
     .stroke();
-  pdf.moveDown(0.4).font(REGULAR).fontSize(10);
+  pdf.moveDown(0.4).fontSize(10);
 }
 
 function field(pdf: Pdf, label: string, value: string): void {
-  pdf.font(BOLD).text(`${label}: `, { continued: true }).font(REGULAR).text(plain(value));
+  writeText(pdf, `${label}: `, { weight: 'bold', continued: true });
+  writeText(pdf, plain(value));
+}
+
+/** The height text takes at a width: the tallest of the heights in each font it prints in. */
+function heightOf(pdf: Pdf, text: string, options: WriteOptions): number {
+  const faces = new Set(fontRuns(text || ' ', fontFaces(options.weight ?? 'regular')).map((run) => run.face));
+  return Math.max(...[...faces].map((face) => useFace(pdf, face).heightOfString(text || ' ', options)));
 }
 
 /** The price lines with amounts right-aligned and the total in bold; repeats its header on a new page. */
@@ -158,29 +184,29 @@ function priceTable(
   const descWidth = width - kindWidth - amountWidth - 20;
   const amountX = left + width - amountWidth;
   const header = () => {
-    pdf.font(BOLD).fontSize(9).fillColor(MUTED);
+    pdf.fontSize(9).fillColor(MUTED);
     const y = pdf.y;
-    pdf.text('Item', left, y, { width: kindWidth });
-    pdf.text('Description', descX, y, { width: descWidth });
-    pdf.text(`Amount (${doc.currency})`, amountX, y, { width: amountWidth, align: 'right' });
+    writeText(pdf, 'Item', { weight: 'bold', x: left, y, width: kindWidth });
+    writeText(pdf, 'Description', { weight: 'bold', x: descX, y, width: descWidth });
+    writeText(pdf, `Amount (${doc.currency})`, { weight: 'bold', x: amountX, y, width: amountWidth, align: 'right' });
     pdf.y = y + 14;
-    pdf.font(REGULAR).fontSize(10).fillColor(INK);
+    pdf.fontSize(10).fillColor(INK);
   };
-  const row = (kind: string, text: string, amount: string) => {
+  const row = (kind: string, text: string, amount: string, weight: WriteOptions['weight'] = 'regular') => {
     const description = plain(text);
     const height =
       Math.max(
-        pdf.heightOfString(description || ' ', { width: descWidth }),
-        pdf.heightOfString(kind, { width: kindWidth }),
+        heightOf(pdf, description, { width: descWidth, weight }),
+        heightOf(pdf, kind, { width: kindWidth, weight }),
       ) + 6;
     if (pdf.y + height > pdf.page.maxY()) {
       pdf.addPage();
       header();
     }
     const y = pdf.y;
-    pdf.text(kind, left, y, { width: kindWidth });
-    if (description) pdf.text(description, descX, y, { width: descWidth });
-    pdf.text(amount, amountX, y, { width: amountWidth, align: 'right' });
+    writeText(pdf, kind, { weight, x: left, y, width: kindWidth });
+    if (description) writeText(pdf, description, { weight, x: descX, y, width: descWidth });
+    writeText(pdf, amount, { weight, x: amountX, y, width: amountWidth, align: 'right' });
     pdf.y = y + height;
   };
 
@@ -203,9 +229,7 @@ function priceTable(
     .strokeColor(RULE)
     .stroke();
   pdf.y += 4;
-  pdf.font(BOLD);
-  row('Total', '', money(doc.totalCents));
-  pdf.font(REGULAR);
+  row('Total', '', money(doc.totalCents), 'bold');
   pdf.x = left;
 }
 
@@ -217,15 +241,14 @@ function pageFooters(pdf: Pdf, poNumber: string, left: number, width: number): v
     const bottom = pdf.page.margins.bottom;
     // Writing below the margin would make pdfkit start a new page; lift the margin meanwhile.
     pdf.page.margins.bottom = 0;
-    pdf
-      .font(REGULAR)
-      .fontSize(8)
-      .fillColor(MUTED)
-      .text(`${poNumber} · page ${i - start + 1} of ${count}`, left, pdf.page.height - bottom + 16, {
-        width,
-        align: 'right',
-        lineBreak: false,
-      });
+    pdf.fontSize(8).fillColor(MUTED);
+    writeText(pdf, `${poNumber} · page ${i - start + 1} of ${count}`, {
+      x: left,
+      y: pdf.page.height - bottom + 16,
+      width,
+      align: 'right',
+      lineBreak: false,
+    });
     pdf.page.margins.bottom = bottom;
   }
 }

@@ -4,14 +4,19 @@ export interface PurchaseOrderDoc {
   poNumber: string;
   issuedAt: Date;
   timeZone: string;
+  /** The printer that issues the order: its legal name (else its name), office and payment terms. */
   buyer: {
     organisation: string;
+    officeAddress: string | null;
+    postcode: string | null;
+    paymentTerms: string | null;
     contact: string;
     email: string;
     deliveryAddress: string | null;
     deliveryPostcode: string | null;
   };
-  supplier: { organisation: string; postcode: string | null };
+  /** The die shop the order goes to. */
+  supplier: { organisation: string; officeAddress: string | null; postcode: string | null; email: string | null };
   request: {
     id: number;
     title: string;

@@ -61,7 +61,7 @@ export async function openRequestsPage(
         miles.flatMap((m) => [m.postcode, m.miles]),
       ),
       'd.postcode',
-      knex.raw('left(trim(r.delivery_postcode), 5)'),
+      'r.deliveryPostcode',
     );
   } else {
     page.crossJoin(knex.raw('(select null::float8 as miles) as d'));

@@ -4,7 +4,7 @@ import type { z } from 'zod';
 import type { AuthUser } from '../../auth/passport';
 import { containsPattern } from '../../lib/containsPattern';
 import { distanceMiles } from '../../lib/distanceMiles';
-import { knownPostcodes, postcodeCentre } from '../../lib/postcodeCentre';
+import { postcodeCentre } from '../../lib/postcodeCentre';
 import { DieRequest, Organisation } from '../../models';
 import { openRequestsPage } from './openRequestsPage';
 import { toSummary } from '../../dto/requestViews';
@@ -41,9 +41,18 @@ export async function openRequestsFor(
   q: z.output<typeof OpenRequestsQuery>,
 ): Promise<Page<DieRequestSummary>> {
   const from = postcodeCentre(actor.orgPostcode);
-  const miles = from
-    ? knownPostcodes().map(({ postcode, centre }) => ({ postcode, miles: distanceMiles(from, centre) }))
-    : [];
+  // Distances to the delivery postcodes open requests use, only those the dataset places.
+  const miles: Array<{ postcode: string; miles: number }> = [];
+  if (from) {
+    const postcodes = await knex('dieRequests')
+      .where({ status: 'open' })
+      .whereNotNull('deliveryPostcode')
+      .distinct('deliveryPostcode');
+    for (const { deliveryPostcode: postcode } of postcodes) {
+      const centre = postcodeCentre(postcode);
+      if (centre) miles.push({ postcode, miles: distanceMiles(from, centre) });
+    }
+  }
   const { rows, total } = await openRequestsPage(knex, actor.organisationId, q, miles);
   return {
     items: rows.map(({ request, ...row }) => ({ ...toSummary(request), ...row })),
