@@ -45,8 +45,8 @@ describe('the die shop’s rate card', () => {
     await expect
       .poll(() => shop.locator('[data-test=bid-form] input[placeholder="Description (optional)"]').first().inputValue())
       .toBe('Cutting rule: 26.8 in × $8.50');
-    // 26.79 in × 8.50 = 227.72 (to the cent, from the measured length).
-    expect(await shop.locator('[data-test=bid-amount-0]').inputValue()).toMatch(/^227\.7\d$/);
+    // 26.786 in (the sleeve's measured cutting rule) × 8.50 = 227.68.
+    expect(await shop.locator('[data-test=bid-amount-0]').inputValue()).toBe('227.68');
     const amounts = shop.locator('[data-test^=bid-amount-]');
     const last = (await amounts.count()) - 1;
     await shop.locator(`[data-test=bid-amount-${last}]`).fill('38.00'); // shipping, which the card does not price

@@ -12,6 +12,7 @@ export {}
 declare module 'vue' {
   export interface GlobalComponents {
     AAlert: typeof import('ant-design-vue/es')['Alert']
+    AAutoComplete: typeof import('ant-design-vue/es')['AutoComplete']
     ABadge: typeof import('ant-design-vue/es')['Badge']
     ABreadcrumb: typeof import('ant-design-vue/es')['Breadcrumb']
     ABreadcrumbItem: typeof import('ant-design-vue/es')['BreadcrumbItem']
@@ -73,7 +74,9 @@ declare module 'vue' {
     BidComparison: typeof import('./components/BidComparison.vue')['default']
     BidForm: typeof import('./components/BidForm.vue')['default']
     BrandMark: typeof import('./components/BrandMark.vue')['default']
+    ClosureForm: typeof import('./components/ClosureForm.vue')['default']
     DeadlinePanels: typeof import('./components/DeadlinePanels.vue')['default']
+    DeliveryPointsFields: typeof import('./components/DeliveryPointsFields.vue')['default']
     DielineFiles: typeof import('./components/DielineFiles.vue')['default']
     DielineLayoutFields: typeof import('./components/request-form/DielineLayoutFields.vue')['default']
     DielineViewer: typeof import('./components/DielineViewer.vue')['default']
@@ -91,6 +94,9 @@ declare module 'vue' {
     PressRunFields: typeof import('./components/PressRunFields.vue')['default']
     PriceCharts: typeof import('./components/PriceCharts.vue')['default']
     PriceImportModal: typeof import('./components/PriceImportModal.vue')['default']
+    ProfileDetails: typeof import('./components/ProfileDetails.vue')['default']
+    ProfileForm: typeof import('./components/ProfileForm.vue')['default']
+    PublicHolidayLoader: typeof import('./components/PublicHolidayLoader.vue')['default']
     QueryState: typeof import('./components/QueryState.vue')['default']
     RequestChecks: typeof import('./components/RequestChecks.vue')['default']
     RequestQuestions: typeof import('./components/RequestQuestions.vue')['default']
@@ -100,5 +106,6 @@ declare module 'vue' {
     SafetyNotice: typeof import('./components/SafetyNotice.vue')['default']
     ScoringAdvicePanel: typeof import('./components/ScoringAdvicePanel.vue')['default']
     ShopBidPanel: typeof import('./components/ShopBidPanel.vue')['default']
+    ShopRecordPanel: typeof import('./components/ShopRecordPanel.vue')['default']
   }
 }
