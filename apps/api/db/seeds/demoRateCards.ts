@@ -1,8 +1,9 @@
 // Each demo die shop's rate card: invented rates, scaled so the card prices the shop's received
 // demo dies about as the shop was paid for them (the card's calibration then reads close to 1).
 import type { RateCardInput } from '@kerfmark/contracts';
-import { calibrateCard, type ReceivedDie } from '@kerfmark/pricing';
+import { calibrateCard } from '@kerfmark/pricing';
 import type { Knex } from 'knex';
+import { receivedDies } from '../../src/services/rateCards/receivedDies';
 
 /** Invented shapes of card: one dear on rule, one dear on features, one in between. */
 const baseCards: Record<string, Omit<RateCardInput, 'currency'>> = {
@@ -80,17 +81,7 @@ export async function seedRateCards(knex: Knex): Promise<void> {
     const shop = await knex('organisations').where({ name }).first();
     if (!shop || (await knex('rateCards').where({ organisationId: shop.id }).first())) continue;
     const admin = await knex('users').where({ organisationId: shop.id, role: 'admin' }).first();
-    const rows = await knex('priceRecords').where({ shopId: shop.id, currency: 'USD', source: 'award' });
-    const received: ReceivedDie[] = rows.map((r) => ({
-      diePrice: Number(r.dieCents),
-      dieline: {
-        length: { cut: Number(r.cutIn), crease: Number(r.creaseIn), perf: Number(r.perfIn), kiss: Number(r.kissIn) },
-        bends: Number(r.bends),
-        joints: Number(r.joints),
-        punches: Number(r.punches),
-        board: { width: Number(r.boardAreaSqIn), height: 1 },
-      },
-    }));
+    const received = await receivedDies(knex, shop.id, 'USD');
     const k = calibrateCard({ currency: 'USD', ...base }, received).medianRatio ?? 1;
     await knex('rateCards').insert({
       organisationId: shop.id,
