@@ -3,7 +3,7 @@ import request from 'supertest';
 import { describe, expect, it } from 'vitest';
 import { AuditEntry, DieRequest } from '../models';
 import { app, createWorld, knex } from '../test/harness';
-import { createRequestAt } from '../test/requestStages';
+import { callAs, createRequestAt } from '../test/requestStages';
 
 const bearer = (token: string) => ({ Authorization: `Bearer ${token}` });
 const profile = (token: string) => request(app).get('/api/organisation/profile').set(bearer(token));
@@ -161,10 +161,15 @@ describe('the purchase order of an award', () => {
         })
       ).status,
     ).toBe(200);
-    const awarded = await createRequestAt(w, 'awarded');
+    // The delivery address is set before the award: the PDF is made and kept as the award is made.
+    const closed = await createRequestAt(w, 'bidding_closed');
     await DieRequest.query()
       .patch({ deliveryAddress: 'Magazyn 3\nul. Zmyślona 7', deliveryPostcode: '90-002' })
-      .findById(awarded.id);
+      .findById(closed.id);
+    const awarded = {
+      awardId: (await callAs(w, 'purchasing', 'post', `/api/requests/${closed.id}/award`, { bidId: closed.bidId }, 200))
+        .award.id as number,
+    };
 
     const pdf = await request(app)
       .get(`/api/purchase-orders/${awarded.awardId}/pdf`)
