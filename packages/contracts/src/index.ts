@@ -20,3 +20,4 @@ export * from './redisOptions';
 export * from './env';
 export * from './rateCards';
 export * from './holidays';
+export * from './dieFit';
