@@ -35,7 +35,7 @@ export interface DieFit {
 export const dieKindOfPress = (kind: PressKind): DieKind => (kind === 'rotary' ? 'rotary' : 'flat');
 
 // The board sizes are kept to the hundredth of an inch; a die measured to within that fits.
-const BOARD_TOLERANCE_IN = 0.005;
+export const BOARD_TOLERANCE_IN = 0.005;
 
 /** Whether a board fits within the shop's largest, either way round. */
 export function boardFits(board: { width: number; height: number }, maxWidth: number, maxLength: number): boolean {

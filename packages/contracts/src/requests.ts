@@ -195,6 +195,11 @@ export const OpenRequestsQuery = z.object({
     .enum(['true', 'false'])
     .transform((v) => v === 'true')
     .default(true),
+  /** Only the dies the shop can make, by its profile's capabilities. */
+  canMake: z
+    .enum(['true', 'false'])
+    .transform((v) => v === 'true')
+    .default(true),
   sort: z
     .enum([
       'bidDeadline',

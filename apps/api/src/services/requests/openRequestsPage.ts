@@ -5,6 +5,7 @@ import { containsPattern } from '../../lib/containsPattern';
 import { DieRequest } from '../../models';
 import { biddableByShop } from '../../access';
 import { readRequestGraph } from './requestGraph';
+import { shopCanMake } from './shopCanMake';
 import { SUMMARY_COLUMNS } from '../../dto/requestViews';
 
 export interface BoardRow {
@@ -40,6 +41,7 @@ export async function openRequestsPage(
     if (q.complexity) query.where('r.measuredComplexity', q.complexity);
     if (q.withinDays) query.where('r.bidDeadline', '<=', new Date(Date.now() + q.withinDays * 86_400_000));
     if (q.ruleTypes?.length) query.whereRaw('r.rule_types @> ?::text[]', [q.ruleTypes]);
+    if (q.canMake) query.where(shopCanMake(knex, shopId, 'r'));
     if (q.hideDeclined) query.whereNotIn('r.id', knex('requestDeclines').where({ shopId }).select('requestId'));
     if (q.q) {
       const like = containsPattern(q.q);
