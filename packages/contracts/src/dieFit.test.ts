@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { boardFits, dieFit, dieKindOfPress, type DieNeeds, type ShopCapabilities } from './dieFit';
+import { boardFits, dieFit, dieKindOfPress, NOTHING_STATED, type DieNeeds, type ShopCapabilities } from './dieFit';
 
 const needs = (over: Partial<DieNeeds> = {}): DieNeeds => ({
   dieKind: 'flat',
@@ -18,14 +18,6 @@ const shop = (over: Partial<ShopCapabilities> = {}): ShopCapabilities => ({
   fitsEjectionRubber: true,
   ...over,
 });
-const unstatedShop: ShopCapabilities = {
-  dieKinds: [],
-  maxBoardWidthIn: null,
-  maxBoardLengthIn: null,
-  ruleHeightsIn: [],
-  makesCounters: null,
-  fitsEjectionRubber: null,
-};
 
 describe('dieFit', () => {
   it('fits a shop that states every need', () => {
@@ -47,7 +39,7 @@ describe('dieFit', () => {
   });
 
   it('never leaves out a shop for what it has not stated, and lists it', () => {
-    const fit = dieFit(needs(), unstatedShop);
+    const fit = dieFit(needs(), NOTHING_STATED);
     expect(fit.fits).toBe(true);
     expect(fit.unstated).toEqual(['flat dies', 'largest die board', 'rule heights', 'counters', 'ejection rubber']);
   });

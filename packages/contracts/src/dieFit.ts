@@ -23,6 +23,16 @@ export interface ShopCapabilities {
   fitsEjectionRubber: boolean | null;
 }
 
+/** A shop that has stated none of its capabilities yet: it fits every die, with each need unstated. */
+export const NOTHING_STATED: ShopCapabilities = {
+  dieKinds: [],
+  maxBoardWidthIn: null,
+  maxBoardLengthIn: null,
+  ruleHeightsIn: [],
+  makesCounters: null,
+  fitsEjectionRubber: null,
+};
+
 export interface DieFit {
   /** False only when the shop has said it cannot do something the die needs. */
   fits: boolean;

@@ -1,4 +1,4 @@
-import { dieFit, dieKindOfPress, type DieKind, type ShopCapabilities } from '@kerfmark/contracts';
+import { dieFit, dieKindOfPress, NOTHING_STATED, type ShopCapabilities } from '@kerfmark/contracts';
 import { describe, expect, it } from 'vitest';
 import { Organisation, Press } from '../../models';
 import { createOrg, createPress, createUser, knex } from '../../test/harness';
@@ -51,14 +51,7 @@ describe('shopCanMake', () => {
       ids.push(id);
     }
     const shops: ShopCapabilities[] = [
-      {
-        dieKinds: [],
-        maxBoardWidthIn: null,
-        maxBoardLengthIn: null,
-        ruleHeightsIn: [],
-        makesCounters: null,
-        fitsEjectionRubber: null,
-      },
+      NOTHING_STATED,
       {
         dieKinds: ['flat'],
         maxBoardWidthIn: 28,
@@ -104,9 +97,9 @@ describe('shopCanMake', () => {
             counterWanted: die.counterWanted,
             ejectionRubberWanted: die.ejectionRubberWanted,
           },
+          // The board is kept to the hundredth of an inch: 20.004 in is stored as 20.00 in.
           {
             ...capabilities,
-            dieKinds: stored!.dieKinds as DieKind[],
             maxBoardWidthIn: stored!.maxBoardWidthIn === null ? null : Number(stored!.maxBoardWidthIn),
           },
         );
