@@ -21,3 +21,4 @@ export * from './env';
 export * from './rateCards';
 export * from './holidays';
 export * from './dieFit';
+export * from './shopChoices';

@@ -1,4 +1,4 @@
-import { OpenRequestsQuery } from '@kerfmark/contracts';
+import { DieShopsQuery, OpenRequestsQuery } from '@kerfmark/contracts';
 import { Router, type RequestHandler } from 'express';
 import { parse } from '../lib/parse';
 import { allow } from '../middleware/allow';
@@ -11,8 +11,8 @@ export function openRequestRoutes(services: Services, requireAuth: RequestHandle
     res.json(await services.requests.openRequests(req.user!, parse(OpenRequestsQuery, req.query)));
   });
 
-  router.get('/die-shops', requireAuth, allow({ kind: 'printer' }), async (_req, res) => {
-    res.json(await services.requests.dieShops());
+  router.get('/die-shops', requireAuth, allow({ kind: 'printer' }), async (req, res) => {
+    res.json(await services.requests.dieShops(req.user!, parse(DieShopsQuery, req.query)));
   });
 
   return router;

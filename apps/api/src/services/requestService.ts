@@ -1,12 +1,13 @@
 import type { z } from 'zod';
 import type { DieRequestCreate, DieRequestDetail, DieRequestUpdate } from '@kerfmark/contracts';
-import type { OpenRequestsQuery, RequestListQuery } from '@kerfmark/contracts';
+import type { DieShopsQuery, OpenRequestsQuery, RequestListQuery } from '@kerfmark/contracts';
 import type { AuthUser } from '../auth/passport';
 import type { ServiceDeps } from './deps';
 import { requestDetail } from './requests/requestDetail';
 import { createRequest, updateRequest } from './requests/requestEdits';
 import { cancelRequest, publishRequest } from './requests/requestLifecycle';
-import { dieShops, listOwnRequests, openRequestsFor } from './requests/requestLists';
+import { listOwnRequests, openRequestsFor } from './requests/requestLists';
+import { shopChoices } from './requests/shopChoices';
 import { factsFor, findOwned, findVisible, visibleQuery } from './requests/requestLookup';
 import { answerQuestion, askQuestion } from './requests/requestQuestions';
 
@@ -21,7 +22,8 @@ export function createRequestService(deps: ServiceDeps) {
     factsFor,
     detail,
     list: (actor: AuthUser, q: z.output<typeof RequestListQuery>) => listOwnRequests(actor, q),
-    dieShops,
+    /** The die shops a printer may invite, each with how it fits the die so far. */
+    dieShops: (actor: AuthUser, q: z.output<typeof DieShopsQuery>) => shopChoices(knex, actor, q),
     /** The open requests a die shop may bid on: filtered, sorted and paged by the database. */
     openRequests: (actor: AuthUser, q: z.output<typeof OpenRequestsQuery>) => openRequestsFor(knex, actor, q),
     create: async (actor: AuthUser, input: DieRequestCreate) => detail(actor, await createRequest(knex, actor, input)),

@@ -1,6 +1,7 @@
 import type { DielineMetrics, ShopRecordDto, ShopRecordJob } from '@kerfmark/contracts';
 import type { Knex } from 'knex';
 import type { AuthUser } from '../../auth/passport';
+import { shipCounts } from './shipCounts';
 
 type BandFor = (
   organisationId: number,
@@ -38,10 +39,7 @@ export async function shopRecord(knex: Knex, actor: AuthUser, bandFor: BandFor):
   const [ship] = await knex('awards as a')
     .join('dieRequests as r', 'r.id', 'a.requestId')
     .where('a.shopId', shopId)
-    .select(
-      knex.raw('count(r.shipped_at)::int as shipped'),
-      knex.raw('(count(*) filter (where r.shipped_at::date <= a.promised_ship_date))::int as on_time'),
-    );
+    .select(shipCounts(knex));
   const since = (days: number) => decided.filter((d) => Date.now() - new Date(d.awardedAt).getTime() <= days * DAY);
   const winRate = (days: number) => rate(since(days).filter((d) => d.won).length, since(days).length);
   const recent: ShopRecordJob[] = [];

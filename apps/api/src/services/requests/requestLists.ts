@@ -5,7 +5,7 @@ import type { AuthUser } from '../../auth/passport';
 import { containsPattern } from '../../lib/containsPattern';
 import { distanceMiles } from '../../lib/distanceMiles';
 import { postcodeCentre } from '../../lib/postcodeCentre';
-import { DieRequest, Organisation } from '../../models';
+import { DieRequest } from '../../models';
 import { openRequestsPage } from './openRequestsPage';
 import { toSummary } from '../../dto/requestViews';
 
@@ -60,10 +60,4 @@ export async function openRequestsFor(
     page: q.page,
     pageSize: q.pageSize,
   };
-}
-
-/** Every die shop on Kerfmark, by name: the printer's choice of shops to invite. */
-export async function dieShops(): Promise<Array<{ id: number; name: string; postcode: string | null }>> {
-  const shops = await Organisation.query().where({ kind: 'die_shop' }).select('id', 'name', 'postcode').orderBy('name');
-  return shops.map((s) => ({ id: s.id, name: s.name, postcode: s.postcode }));
 }
