@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import type { DieFit, ShopCapabilities } from './dieFit';
+import type { DieFit, DieNeeds, ShopCapabilities } from './dieFit';
 import { recordId } from './ids';
 
 const flag = z
@@ -32,4 +32,10 @@ export interface DieShopChoice {
   /** Dies this printer has awarded the shop. */
   jobsWithUs: number;
   fit: DieFit;
+}
+
+/** The shops to invite, and what of the die they were checked against. */
+export interface DieShopChoices {
+  needs: DieNeeds;
+  shops: DieShopChoice[];
 }

@@ -1,5 +1,6 @@
 import type { Complexity } from '@kerfmark/dieline';
 import type {
+  DieShopChoices,
   CalibrationDto,
   EstimateDto,
   RateCardDto,
@@ -100,7 +101,7 @@ export const requestsApi = {
   answer: (id: number, questionId: number, answer: string) =>
     api<RequestQuestionDto>(`/requests/${id}/questions/${questionId}/answer`, { method: 'POST', body: { answer } }),
   openRequests: (query: Query) => api<Page<DieRequestSummary>>(`/open-requests?${searchParams(query)}`),
-  dieShops: () => api<Array<{ id: number; name: string; postcode: string | null }>>('/die-shops'),
+  dieShops: (query: Query) => api<DieShopChoices>(`/die-shops?${searchParams(query)}`),
 };
 
 export const filesApi = {

@@ -30,7 +30,7 @@ export const queryKeys = {
   organisationProfile: () => ['organisation-profile'],
   holidays: (year?: MaybeRef<number>) => (year === undefined ? ['holidays'] : ['holidays', year]),
   holidayPlaces: (country: MaybeRef<string | undefined>) => ['holiday-places', country],
-  dieShops: () => ['die-shops'],
+  dieShops: (query: MaybeRef<unknown>) => ['die-shops', query],
   users: () => ['users'],
   invitations: () => ['invitations'],
   notifications: () => ['notifications'],

@@ -11,7 +11,7 @@ const create = vi.fn();
 vi.mock('../api/endpoints', () => ({
   pressesApi: { list: vi.fn(async () => []) },
   requestsApi: {
-    dieShops: vi.fn(async () => []),
+    dieShops: vi.fn(async () => ({ needs: null, shops: [] })),
     get: vi.fn(),
     create: (...args: unknown[]) => create(...args),
     update: vi.fn(),

@@ -1,4 +1,4 @@
-import type { DieShopChoice } from '@kerfmark/contracts';
+import type { DieShopChoices } from '@kerfmark/contracts';
 import request from 'supertest';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { Organisation, Press } from '../../models';
@@ -14,9 +14,9 @@ let far: Organisation;
 async function choices(token: string, query: Record<string, string | number>) {
   const res = await request(app).get('/api/die-shops').query(query).set(bearer(token));
   expect(res.status, JSON.stringify(res.body)).toBe(200);
-  const list = res.body as DieShopChoice[];
-  const byId = (id: number) => list.find((s) => s.id === id)!;
-  return { list, mine: byId(w.shop.id), rival: byId(rival.shop.id), far: byId(far.id) };
+  const { needs, shops } = res.body as DieShopChoices;
+  const byId = (id: number) => shops.find((s) => s.id === id)!;
+  return { needs, mine: byId(w.shop.id), rival: byId(rival.shop.id), far: byId(far.id) };
 }
 
 beforeAll(async () => {
@@ -53,7 +53,14 @@ beforeAll(async () => {
 
 describe('GET /api/die-shops', () => {
   it('says which shops can make a rotary die with a counter, and what each has not said', async () => {
-    const { mine, rival: theirs } = await choices(w.tokens.buyer, { pressId: rotary.id, counterWanted: 'true' });
+    const { needs, mine, rival: theirs } = await choices(w.tokens.buyer, { pressId: rotary.id, counterWanted: 'true' });
+    expect(needs).toEqual({
+      dieKind: 'rotary',
+      board: null,
+      cuttingRuleHeightIn: 0.918,
+      counterWanted: true,
+      ejectionRubberWanted: false,
+    });
     expect(mine.fit).toEqual({
       fits: false,
       misses: ['makes no rotary dies', 'makes no counters'],
@@ -66,7 +73,8 @@ describe('GET /api/die-shops', () => {
   it('puts the saved request’s measured board against each shop’s largest board', async () => {
     const saved = await createOpenRequest(w);
     await knex('dieRequests').where({ id: saved.id }).update({ measuredBoardWidthIn: 30, measuredBoardHeightIn: 50 });
-    const { mine, rival: theirs } = await choices(w.tokens.buyer, { requestId: saved.id });
+    const { needs, mine, rival: theirs } = await choices(w.tokens.buyer, { requestId: saved.id });
+    expect(needs.board).toEqual({ width: 30, height: 50 });
     expect(mine.fit.fits).toBe(true);
     expect(theirs.fit).toEqual({
       fits: false,

@@ -1,4 +1,4 @@
-import { dieFit, dieKindOfPress, type DieNeeds, type DieShopChoice, type DieShopsQuery } from '@kerfmark/contracts';
+import { dieFit, dieKindOfPress, type DieNeeds, type DieShopChoices, type DieShopsQuery } from '@kerfmark/contracts';
 import type { Knex } from 'knex';
 import type { z } from 'zod';
 import type { AuthUser } from '../../auth/passport';
@@ -35,13 +35,14 @@ async function needsOf(knex: Knex, actor: AuthUser, q: z.output<typeof DieShopsQ
 /**
  * Every die shop on Kerfmark, for a printer choosing whom to invite: each with its stated
  * capabilities and whether they fit this die, its distance from the delivery postcode, its
- * on-time rate over all its shipped dies, and the dies this printer has awarded it.
+ * on-time rate over all its shipped dies, and the dies this printer has awarded it; with the
+ * needs they were checked against, so the buyer can see what is not known yet.
  */
 export async function shopChoices(
   knex: Knex,
   actor: AuthUser,
   q: z.output<typeof DieShopsQuery>,
-): Promise<DieShopChoice[]> {
+): Promise<DieShopChoices> {
   const needs = await needsOf(knex, actor, q);
   const records = knex('awards as a')
     .join('dieRequests as r', 'r.id', 'a.requestId')
@@ -69,7 +70,7 @@ export async function shopChoices(
       'k.jobsWithUs',
     );
   const to = postcodeCentre(q.deliveryPostcode);
-  return shops.map((s) => {
+  const choices = shops.map((s) => {
     const capabilities = {
       dieKinds: s.dieKinds,
       maxBoardWidthIn: s.maxBoardWidthIn,
@@ -85,7 +86,7 @@ export async function shopChoices(
       id: s.id,
       name: s.name,
       postcode: s.postcode,
-      miles: from && to ? distanceMiles(from, to) : null,
+      miles: from && to ? Math.round(distanceMiles(from, to)) : null,
       capabilities,
       onTimeRate: shipped > 0 ? (s.onTime ?? 0) / shipped : null,
       shipped,
@@ -93,4 +94,5 @@ export async function shopChoices(
       fit: dieFit(needs, capabilities),
     };
   });
+  return { needs, shops: choices };
 }
