@@ -29,6 +29,10 @@ export async function postRequest(
     screenshots?: (name: string) => Promise<void>;
     dieline?: { file: string; metricsShow: string };
     oneUp?: { across: number; along: number; gutterIn: number };
+    /** Steps taken on a step before going on, such as choosing shops to invite. */
+    onJobStep?: (p: Page) => Promise<void>;
+    onPressStep?: (p: Page) => Promise<void>;
+    onDielineStep?: (p: Page) => Promise<void>;
   } = {},
 ): Promise<number> {
   await p.goto(`${baseUrl}/requests/new`);
@@ -45,6 +49,7 @@ export async function postRequest(
       .poll(() => p.locator('input[data-test=req-ups]').inputValue())
       .toBe(String(opts.oneUp.across * opts.oneUp.along));
   }
+  await opts.onJobStep?.(p);
   await p.locator('[data-test=next]').click();
   await p.locator('[data-test=req-press]').click();
   await p.locator('.ant-select-item-option >> text=Platen 1').click();
@@ -52,6 +57,7 @@ export async function postRequest(
   await pickDate(p, 'req-deadline', new Date(Date.now() + 5 * 86_400_000), true);
   await pickDate(p, 'req-needby', new Date(Date.now() + 30 * 86_400_000), false);
   await p.locator('[data-test=req-postcode]').fill('60614');
+  await opts.onPressStep?.(p);
   await p.locator('[data-test=next]').click();
   await p.waitForURL(/\/requests\/\d+\/edit/);
   const input = p.locator('[data-test=dieline-drop] input[type=file]');
@@ -70,6 +76,7 @@ export async function postRequest(
     .poll(() => p.locator('[data-test=metrics]').innerText())
     .toContain(opts.dieline?.metricsShow ?? '26.79 in');
   await opts.screenshots?.('dieline');
+  await opts.onDielineStep?.(p);
   await p.locator('[data-test=next]').click();
   await expect.poll(() => p.locator('[data-test=request-checks]').innerText()).toContain('fits Platen 1');
   await opts.screenshots?.('review');

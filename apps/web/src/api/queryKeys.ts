@@ -30,7 +30,7 @@ export const queryKeys = {
   organisationProfile: () => ['organisation-profile'],
   holidays: (year?: MaybeRef<number>) => (year === undefined ? ['holidays'] : ['holidays', year]),
   holidayPlaces: (country: MaybeRef<string | undefined>) => ['holiday-places', country],
-  dieShops: (query: MaybeRef<unknown>) => ['die-shops', query],
+  dieShops: (query?: MaybeRef<unknown>) => (query === undefined ? ['die-shops'] : ['die-shops', query]),
   users: () => ['users'],
   invitations: () => ['invitations'],
   notifications: () => ['notifications'],
