@@ -8,7 +8,7 @@ export const fixtures = path.resolve(path.dirname(fileURLToPath(import.meta.url)
 
 /** Picks a day in an ant-design date picker the way a person does: open it, page to the month, click. */
 export async function pickDate(p: Page, testId: string, date: Date, withTime: boolean) {
-  await p.locator(`[data-test=${testId}] input`).click();
+  await p.locator(`[data-test=${testId}] input, input[data-test=${testId}]`).first().click();
   await p.waitForTimeout(300); // let a picker that just closed finish its animation
   const panel = p.locator('.ant-picker-dropdown:not(.ant-picker-dropdown-hidden)').last();
   const cell = panel.locator(`td.ant-picker-cell-in-view[title="${date.toISOString().slice(0, 10)}"]`);
