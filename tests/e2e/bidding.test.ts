@@ -3,7 +3,7 @@ import { createRequire } from 'node:module';
 import { dirname, join } from 'node:path';
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { baseUrl, launch, screenshot, signIn } from './browser';
+import { baseUrl, launch, pageAs, screenshot } from './browser';
 import { postRequest } from './flows';
 
 let browser: Browser;
@@ -14,13 +14,7 @@ afterAll(async () => {
   await browser?.close();
 });
 
-async function as(email: string): Promise<Page> {
-  const context = await browser.newContext({ viewport: { width: 1366, height: 900 }, acceptDownloads: true });
-  const p = await context.newPage();
-  await signIn(p, email);
-  await p.waitForURL(`${baseUrl}/`);
-  return p;
-}
+const as = (email: string, width?: number) => pageAs(browser, email, width);
 
 /** Fills the bid form's amounts (die, ejection rubber, shipping, in that order) and sends it. */
 async function bid(p: Page, amounts: string[], leadDays: number) {

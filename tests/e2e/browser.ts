@@ -40,6 +40,15 @@ export async function signIn(page: Page, email: string, password = DEMO_PASSWORD
   await page.locator('[data-test=sign-in]').click();
 }
 
+/** A page of its own (a fresh browser context) signed in as the user, on the home page, at a width. */
+export async function pageAs(browser: Browser, email: string, width = 1366): Promise<Page> {
+  const context = await browser.newContext({ viewport: { width, height: 900 }, acceptDownloads: true });
+  const p = await context.newPage();
+  await signIn(p, email);
+  await p.waitForURL(`${baseUrl}/`);
+  return p;
+}
+
 /** The newest e-mail to an address at the mail catcher. */
 export async function latestEmail(to: string, timeoutMs = 15_000): Promise<{ subject: string; text: string }> {
   const until = Date.now() + timeoutMs;

@@ -1,6 +1,6 @@
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { baseUrl, launch, screenshot, signIn } from './browser';
+import { baseUrl, launch, pageAs, screenshot } from './browser';
 import { pickDate, postRequest } from './flows';
 
 let browser: Browser;
@@ -11,13 +11,7 @@ afterAll(async () => {
   await browser?.close();
 });
 
-async function as(email: string, width = 1366): Promise<Page> {
-  const context = await browser.newContext({ viewport: { width, height: 900 } });
-  const p = await context.newPage();
-  await signIn(p, email);
-  await p.waitForURL(`${baseUrl}/`);
-  return p;
-}
+const as = (email: string, width?: number) => pageAs(browser, email, width);
 
 /** Picks an option of a searchable ant-design select by typing its label. */
 async function choose(p: Page, testId: string, label: string) {

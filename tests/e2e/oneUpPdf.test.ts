@@ -2,9 +2,9 @@ import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { pdfFile, PT, separation } from '@kerfmark/dieline/testing';
-import type { Browser, Page } from 'playwright-core';
+import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { baseUrl, launch, screenshot, signIn } from './browser';
+import { baseUrl, launch, pageAs, screenshot } from './browser';
 import { postRequest } from './flows';
 
 let browser: Browser;
@@ -15,13 +15,7 @@ afterAll(async () => {
   await browser?.close();
 });
 
-async function as(email: string, width = 1366): Promise<Page> {
-  const context = await browser.newContext({ viewport: { width, height: 900 } });
-  const p = await context.newPage();
-  await signIn(p, email);
-  await p.waitForURL(`${baseUrl}/`);
-  return p;
-}
+const as = (email: string, width?: number) => pageAs(browser, email, width);
 
 // One up as an artwork program exports it: a 4 × 3 in carton blank outline on the "Cut"
 // separation and a 4 in crease across it on "Crease" (72 pt = 1 in), plus a filled panel of

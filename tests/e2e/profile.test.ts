@@ -1,6 +1,6 @@
-import type { Browser, Page } from 'playwright-core';
+import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { baseUrl, launch, screenshot, signIn } from './browser';
+import { baseUrl, launch, pageAs, screenshot } from './browser';
 
 let browser: Browser;
 beforeAll(async () => {
@@ -10,13 +10,7 @@ afterAll(async () => {
   await browser?.close();
 });
 
-async function as(email: string, width = 1366): Promise<Page> {
-  const context = await browser.newContext({ viewport: { width, height: 900 } });
-  const p = await context.newPage();
-  await signIn(p, email);
-  await p.waitForURL(`${baseUrl}/`);
-  return p;
-}
+const as = (email: string, width?: number) => pageAs(browser, email, width);
 
 describe('the organisation profile', () => {
   it('lets the printer’s admin change the payment terms and keeps them', async () => {

@@ -1,6 +1,6 @@
-import type { Browser, Page } from 'playwright-core';
+import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { baseUrl, launch, screenshot, signIn } from './browser';
+import { baseUrl, launch, pageAs, screenshot } from './browser';
 import { postRequest } from './flows';
 
 let browser: Browser;
@@ -11,13 +11,7 @@ afterAll(async () => {
   await browser?.close();
 });
 
-async function as(email: string): Promise<Page> {
-  const context = await browser.newContext({ viewport: { width: 1366, height: 900 } });
-  const p = await context.newPage();
-  await signIn(p, email);
-  await p.waitForURL(`${baseUrl}/`);
-  return p;
-}
+const as = (email: string, width?: number) => pageAs(browser, email, width);
 
 describe('the die shop’s rate card', () => {
   const title = `Sleeve priced from the card ${Date.now() % 100000}`;

@@ -20,6 +20,7 @@ import {
   LibraryDieUpdate,
   LoginInput,
   OpenRequestsQuery,
+  DieShopsQuery,
   OrganisationProfileUpdate,
   PreferencesUpdate,
   PressCreate,
@@ -291,6 +292,7 @@ const cases: Record<string, Case> = {
   },
   'GET /api/requests/:id/library-matches': { as: 'buyer', params: id('open') },
   'GET /api/open-requests': { as: 'estimator', query: OpenRequestsQuery },
+  'GET /api/die-shops': { as: 'buyer', query: DieShopsQuery },
 };
 
 /** Write routes not fuzzed with JSON, and why. */

@@ -89,6 +89,17 @@ describe('InvitedShopsPicker', () => {
     expect(w.text()).toContain('Cannot make this die: makes no rotary dies');
   });
 
+  it('finds a shop by name, and keeps a ticked shop in sight', async () => {
+    const w = await mountPicker();
+    await w.findAll('[data-test=shop-choice] input')[0]!.setValue(true); // Near Rule Co
+    await w.find('input[data-test=find-shop], [data-test=find-shop] input').setValue('far');
+    await settle();
+    expect(names(w)).toEqual(['Near Rule Co', 'Far Rule Co']);
+    await w.find('input[data-test=find-shop], [data-test=find-shop] input').setValue('flat');
+    await settle();
+    expect(names(w)).toEqual(['Near Rule Co']);
+  });
+
   it('invites the shops ticked', async () => {
     const w = await mountPicker();
     await w.findAll('[data-test=shop-choice] input')[1]!.setValue(true);
