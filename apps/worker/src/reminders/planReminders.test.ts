@@ -22,12 +22,47 @@ const base = (over: Partial<ReminderState['request']> = {}, rest: Partial<Remind
 const kinds = (state: ReminderState) => planReminders(state).map((r) => r.kind);
 const at = (state: ReminderState, kind: string) => planReminders(state).find((r) => r.kind === kind)!;
 
+/** The wall clock an instant shows in a zone, read by ICU through Intl: a check independent of Luxon. */
+const wallClock = (instant: Date, timeZone: string) =>
+  new Intl.DateTimeFormat('sv-SE', { timeZone, dateStyle: 'short', timeStyle: 'short' }).format(instant);
+
 describe('zonedTime', () => {
   // IANA tz database: Chicago is UTC−6 in December and UTC−5 in July.
   it('turns a wall-clock time in a zone into an instant', () => {
     expect(zonedTime('2026-12-18', 9, 'America/Chicago').toISOString()).toBe('2026-12-18T15:00:00.000Z');
     expect(zonedTime('2026-07-18', 9, 'America/Chicago').toISOString()).toBe('2026-07-18T14:00:00.000Z');
     expect(zonedTime('2026-12-18', 9, 'UTC').toISOString()).toBe('2026-12-18T09:00:00.000Z');
+  });
+
+  // The days the clocks change in 2026. US zones: the second Sunday of March and the first Sunday
+  // of November (Energy Policy Act of 2005). Europe/London: the last Sundays of March and October
+  // (EU Directive 2000/84/EC). Australia/Lord_Howe: the first Sundays of April and October, a
+  // half-hour change between UTC+10:30 and UTC+11 (IANA tz database, australasia file).
+  const changeDays: Array<[zone: string, date: string, nineAm: string]> = [
+    ['America/Los_Angeles', '2026-03-08', '2026-03-08T16:00:00.000Z'], // PDT, UTC−7
+    ['America/Los_Angeles', '2026-11-01', '2026-11-01T17:00:00.000Z'], // PST, UTC−8
+    ['America/Anchorage', '2026-03-08', '2026-03-08T17:00:00.000Z'], // AKDT, UTC−8
+    ['America/Anchorage', '2026-11-01', '2026-11-01T18:00:00.000Z'], // AKST, UTC−9
+    ['Europe/London', '2026-03-29', '2026-03-29T08:00:00.000Z'], // BST, UTC+1
+    ['Europe/London', '2026-10-25', '2026-10-25T09:00:00.000Z'], // GMT, UTC+0
+    ['Australia/Lord_Howe', '2026-04-05', '2026-04-04T22:30:00.000Z'], // UTC+10:30 from 02:00
+    ['Australia/Lord_Howe', '2026-10-04', '2026-10-03T22:00:00.000Z'], // UTC+11 from 02:00
+  ];
+  it.each(changeDays)('gives 09:00 in %s on %s, the day the clocks change', (zone, date, nineAm) => {
+    const instant = zonedTime(date, 9, zone);
+    expect(instant.toISOString()).toBe(nineAm);
+    expect(wallClock(instant, zone)).toBe(`${date} 09:00`);
+  });
+
+  it('counts days on the calendar, so a week before a change is still 09:00', () => {
+    // Need-by Tuesday 10 March 2026 in Los Angeles: a week before is in PST, two days before is the change day.
+    expect(zonedTime('2026-03-10', 9, 'America/Los_Angeles', -7).toISOString()).toBe('2026-03-03T17:00:00.000Z');
+    expect(zonedTime('2026-03-10', 9, 'America/Los_Angeles', -2).toISOString()).toBe('2026-03-08T16:00:00.000Z');
+    expect(wallClock(zonedTime('2026-10-27', 9, 'Europe/London', -2), 'Europe/London')).toBe('2026-10-25 09:00');
+  });
+
+  it('refuses a zone it does not know rather than guess', () => {
+    expect(() => zonedTime('2026-03-08', 9, 'Mars/Olympus_Mons')).toThrow(/Mars\/Olympus_Mons/);
   });
 });
 
@@ -78,11 +113,37 @@ describe('reminder rules', () => {
       shopTimeZone: 'America/Indiana/Indianapolis',
     };
     const state = base({ status: 'awarded' }, { award });
-    expect(kinds(state)).toEqual(['need_by_7d', 'need_by_2d', 'late_shipment']);
-    expect(at(state, 'need_by_7d').fireAt.toISOString()).toBe('2026-12-24T15:00:00.000Z');
-    expect(at(state, 'need_by_2d').fireAt.toISOString()).toBe('2026-12-29T15:00:00.000Z');
-    // The day after the promised ship date, 09:00 in Indianapolis (UTC−5 in December).
-    expect(at(state, 'late_shipment').fireAt.toISOString()).toBe('2026-12-22T14:00:00.000Z');
+    const planned = planReminders(state).map((r) => [r.kind, r.audience, r.fireAt.toISOString()]);
+    expect(planned).toEqual([
+      // 09:00 in Chicago (UTC−6 in December) for the buyer…
+      ['need_by_7d', 'printer', '2026-12-24T15:00:00.000Z'],
+      ['need_by_2d', 'printer', '2026-12-29T15:00:00.000Z'],
+      ['late_shipment', 'printer', '2026-12-22T15:00:00.000Z'],
+      // …and in Indianapolis (UTC−5) for the shop; the late flag the day after the promised ship date.
+      ['need_by_7d', 'shop', '2026-12-24T14:00:00.000Z'],
+      ['need_by_2d', 'shop', '2026-12-29T14:00:00.000Z'],
+      ['late_shipment', 'shop', '2026-12-22T14:00:00.000Z'],
+    ]);
+  });
+
+  it('reaches a buyer in Berlin and a shop in Chicago each at 09:00 their time, across the change of clocks', () => {
+    // Europe/Berlin changes on 29 March 2026, America/Chicago on 8 March: a week before a need-by
+    // date of 2 April falls either side of the changes.
+    const award = {
+      awardedAt: new Date('2026-03-01T12:00:00Z'),
+      promisedShipDate: '2026-03-30',
+      shopTimeZone: 'America/Chicago',
+    };
+    const state = base(
+      { status: 'awarded', timeZone: 'Europe/Berlin', needByDate: '2026-04-02', bidDeadline: null },
+      { award },
+    );
+    for (const r of planReminders(state)) {
+      const zone = r.audience === 'shop' ? 'America/Chicago' : 'Europe/Berlin';
+      expect(wallClock(r.fireAt, zone), `${r.kind} for the ${r.audience}`).toMatch(/ 09:00$/);
+    }
+    expect(at(state, 'need_by_7d').fireAt.toISOString()).toBe('2026-03-26T08:00:00.000Z'); // CET, UTC+1
+    expect(at(state, 'need_by_2d').fireAt.toISOString()).toBe('2026-03-31T07:00:00.000Z'); // CEST, UTC+2
   });
 
   it('stops every reminder once the die has shipped, and for cancelled or received requests', () => {

@@ -28,10 +28,17 @@ export interface ReminderState {
   bestBidValidUntil: string | null;
 }
 
+/**
+ * Whom a reminder is for, where the two sides each get it at their own local hour: the printer's
+ * people, the awarded shop's, or everyone the rule names (reminders set by an instant, not a date).
+ */
+export type ReminderAudience = 'all' | 'printer' | 'shop';
+
 export interface PlannedReminder {
-  /** Names the rule, the request and the moment: a new deadline makes new keys. */
+  /** Names the rule, the side, the request and the moment: a new deadline makes new keys. */
   key: string;
   kind: ReminderKind;
+  audience: ReminderAudience;
   requestId: number;
   fireAt: Date;
   /** Past this the reminder is pointless and is not sent late. */
@@ -39,7 +46,6 @@ export interface PlannedReminder {
 }
 
 const HOUR = 3_600_000;
-const DAY = 24 * HOUR;
 const MORNING = 9; // reminders about dates go out at 09:00 in the reader's zone
 
 /**
@@ -49,14 +55,30 @@ const MORNING = 9; // reminders about dates go out at 09:00 in the reader's zone
  * - the awarded shop and the buyer: 7 and 2 days before the need-by date while the die is not shipped;
  * - both: a late flag the day after the promised ship date passes unshipped;
  * - purchasing: 2 days before the best bid's validity ends while nothing is awarded.
+ * Those set by a date go out at 09:00 on that day in each side's own zone, counted in calendar
+ * days (so a week before is 09:00 a week before, across a change of the clocks).
  * A reminder that would fall before its rule applied (the request published, the die awarded) is left out.
  */
 export function planReminders(state: ReminderState): PlannedReminder[] {
   const { request, award } = state;
   const out: PlannedReminder[] = [];
-  const add = (kind: ReminderKind, fireAt: Date, expiresAt: Date | null, notBefore: Date | null) => {
+  const add = (
+    kind: ReminderKind,
+    fireAt: Date,
+    expiresAt: Date | null,
+    notBefore: Date | null,
+    audience: ReminderAudience = 'all',
+  ) => {
     if (notBefore && fireAt.getTime() < notBefore.getTime()) return;
-    out.push({ key: `${kind}-${request.id}-${fireAt.getTime()}`, kind, requestId: request.id, fireAt, expiresAt });
+    const side = audience === 'all' ? '' : `${audience}-`;
+    out.push({
+      key: `${kind}-${side}${request.id}-${fireAt.getTime()}`,
+      kind,
+      audience,
+      requestId: request.id,
+      fireAt,
+      expiresAt,
+    });
   };
 
   if (request.status === 'open' && request.bidDeadline) {
@@ -78,22 +100,23 @@ export function planReminders(state: ReminderState): PlannedReminder[] {
     if (due) add('bids_ready', due, null, null);
     if (state.bestBidValidUntil && due) {
       const lapses = zonedTime(state.bestBidValidUntil, 23, request.timeZone);
-      add(
-        'validity_ending',
-        new Date(zonedTime(state.bestBidValidUntil, MORNING, request.timeZone).getTime() - 2 * DAY),
-        lapses,
-        due,
-      );
+      const twoDaysBefore = zonedTime(state.bestBidValidUntil, MORNING, request.timeZone, -2);
+      add('validity_ending', twoDaysBefore, lapses, due);
     }
   }
   if (award && (request.status === 'awarded' || request.status === 'in_production') && !request.shippedAt) {
-    if (request.needByDate) {
-      const needBy = zonedTime(request.needByDate, MORNING, request.timeZone);
-      add('need_by_7d', new Date(needBy.getTime() - 7 * DAY), needBy, award.awardedAt);
-      add('need_by_2d', new Date(needBy.getTime() - 2 * DAY), needBy, award.awardedAt);
+    const sides = [
+      ['printer', request.timeZone],
+      ['shop', award.shopTimeZone],
+    ] as const;
+    for (const [side, zone] of sides) {
+      if (request.needByDate) {
+        const needBy = zonedTime(request.needByDate, MORNING, zone);
+        add('need_by_7d', zonedTime(request.needByDate, MORNING, zone, -7), needBy, award.awardedAt, side);
+        add('need_by_2d', zonedTime(request.needByDate, MORNING, zone, -2), needBy, award.awardedAt, side);
+      }
+      add('late_shipment', zonedTime(award.promisedShipDate, MORNING, zone, 1), null, award.awardedAt, side);
     }
-    const dayAfter = new Date(Date.parse(`${award.promisedShipDate}T00:00:00Z`) + DAY).toISOString().slice(0, 10);
-    add('late_shipment', zonedTime(dayAfter, MORNING, award.shopTimeZone), null, award.awardedAt);
   }
   return out;
 }

@@ -71,8 +71,9 @@ async function openRequest(deadline: Date, opts: { preferences?: Record<string, 
   return { id: request.id as number, printer, buyer, purchasing, shop, estimator };
 }
 
-const keyOf = async (requestId: number, kind: string) =>
-  planReminders((await loadReminderState(knex, requestId))!).find((r) => r.kind === kind)!.key;
+const keyOf = async (requestId: number, kind: string, audience = 'all') =>
+  planReminders((await loadReminderState(knex, requestId))!).find((r) => r.kind === kind && r.audience === audience)!
+    .key;
 const outboxTo = (email: string) => knex('email_outbox').where({ to_address: email });
 
 describe('reminders against PostgreSQL and Redis', () => {
@@ -143,15 +144,25 @@ describe('reminders against PostgreSQL and Redis', () => {
       po_number: `PO-T-${randomUUID().slice(0, 8)}`,
     });
     await knex('die_requests').where({ id: r.id }).update({ status: 'awarded' });
-    const week = await keyOf(r.id, 'need_by_7d');
-    // Need-by 1 Mar 2027, 09:00 Chicago = 15:00 UTC; seven days before: 22 Feb 15:00 UTC.
-    expect((await sendReminder(knex, { ...APP, now: new Date('2027-02-22T15:00:00Z') }, r.id, week)).result).toBe(
+    const title = (await knex('die_requests').where({ id: r.id }).first('title')).title;
+    const needed = (m: { subject: string }) => m.subject === `Needed in 7 days: ${title}`;
+    // Need-by 1 Mar 2027; seven days before, at 09:00 on each side: the buyer's Chicago (UTC−6) is
+    // 22 Feb 15:00 UTC, the shop's Indianapolis (UTC−5) 22 Feb 14:00 UTC.
+    const forShop = await keyOf(r.id, 'need_by_7d', 'shop');
+    expect((await sendReminder(knex, { ...APP, now: new Date('2027-02-22T14:00:00Z') }, r.id, forShop)).result).toBe(
       'sent',
     );
-    expect((await outboxTo(r.estimator.email)).map((m) => m.subject)).toContain(
-      `Needed in 7 days: ${(await knex('die_requests').where({ id: r.id }).first('title')).title}`,
+    expect((await outboxTo(r.estimator.email)).filter(needed)).toHaveLength(1);
+    expect((await outboxTo(r.buyer.email)).filter(needed)).toHaveLength(0);
+    const forBuyer = await keyOf(r.id, 'need_by_7d', 'printer');
+    expect((await sendReminder(knex, { ...APP, now: new Date('2027-02-22T14:00:00Z') }, r.id, forBuyer)).result).toBe(
+      'not-due',
     );
-    expect((await outboxTo(r.buyer.email)).filter((m) => /^Needed in 7 days/.test(m.subject))).toHaveLength(1);
+    expect((await sendReminder(knex, { ...APP, now: new Date('2027-02-22T15:00:00Z') }, r.id, forBuyer)).result).toBe(
+      'sent',
+    );
+    expect((await outboxTo(r.buyer.email)).filter(needed)).toHaveLength(1);
+    expect((await outboxTo(r.estimator.email)).filter(needed)).toHaveLength(1);
   });
 
   it('checks the request again before sending: a shop that bid, or a cancelled request, gets nothing', async () => {
@@ -239,7 +250,7 @@ describe('reminders against PostgreSQL and Redis', () => {
       po_number: `PO-T-${randomUUID().slice(0, 8)}`,
     });
     await knex('die_requests').where({ id: r.id }).update({ status: 'in_production' });
-    const key = await keyOf(r.id, 'late_shipment');
+    const key = await keyOf(r.id, 'late_shipment', 'shop');
     // The day after 10 Nov, 09:00 in the shop's zone (Indianapolis, UTC−5): 11 Nov 14:00 UTC.
     expect((await sendReminder(knex, { ...APP, now: new Date('2026-11-11T13:59:00Z') }, r.id, key)).result).toBe(
       'not-due',
@@ -252,6 +263,12 @@ describe('reminders against PostgreSQL and Redis', () => {
     expect(await knex('reminders_sent').where({ key })).toHaveLength(1);
     expect((await knex('die_requests').where({ id: r.id }).first()).late_flagged_at).toBeTruthy();
     expect((await outboxTo(r.estimator.email)).filter((m) => /^Late:/.test(m.subject))).toHaveLength(1);
+    // The printer's side hears of it at 09:00 in Chicago (UTC−6): 11 Nov 15:00 UTC.
+    const forPrinter = await keyOf(r.id, 'late_shipment', 'printer');
+    expect(['sent', 'already-sent']).toContain(
+      (await sendReminder(knex, { ...APP, now: new Date('2026-11-11T15:00:00Z') }, r.id, forPrinter)).result,
+    );
     expect((await outboxTo(r.purchasing.email)).filter((m) => /^Late:/.test(m.subject))).toHaveLength(1);
+    expect((await outboxTo(r.estimator.email)).filter((m) => /^Late:/.test(m.subject))).toHaveLength(1);
   });
 });

@@ -100,6 +100,9 @@ async function deliver(
     request.need_by_date instanceof Date ? request.need_by_date.toISOString().slice(0, 10) : request.need_by_date;
   const award = await trx('awards').where({ request_id: request.id }).first('shop_id', 'promised_ship_date');
   const buyer = request.created_by ? [request.created_by] : undefined;
+  // The date reminders reach each side at its own 09:00, as a reminder each.
+  const toShop = reminder.audience !== 'printer';
+  const toPrinter = reminder.audience !== 'shop';
 
   switch (reminder.kind) {
     case 'bid_deadline_48h':
@@ -146,8 +149,8 @@ async function deliver(
     case 'need_by_2d': {
       const days = reminder.kind === 'need_by_7d' ? 7 : 2;
       const body = `The die for "${request.title}" is needed by ${needBy}, ${days} days from now, and has not shipped yet.`;
-      if (award) await tell(award.shop_id, { title: `Needed in ${days} days: ${request.title}`, body });
-      if (buyer)
+      if (award && toShop) await tell(award.shop_id, { title: `Needed in ${days} days: ${request.title}`, body });
+      if (buyer && toPrinter)
         await tell(
           request.organisation_id,
           { title: `Needed in ${days} days: ${request.title}`, body },
@@ -166,12 +169,13 @@ async function deliver(
           ? award.promised_ship_date.toISOString().slice(0, 10)
           : award?.promised_ship_date;
       const body = `The die for "${request.title}" was promised to ship by ${shipDate} and has not shipped.`;
-      if (award)
+      if (award && toShop)
         await tell(award.shop_id, {
           title: `Late: ${request.title}`,
           body: `${body} Mark it shipped, or tell the buyer the new date.`,
         });
-      await tell(request.organisation_id, { title: `Late: ${request.title}`, body }, ['buyer', 'purchasing']);
+      if (toPrinter)
+        await tell(request.organisation_id, { title: `Late: ${request.title}`, body }, ['buyer', 'purchasing']);
       break;
     }
     case 'validity_ending':

@@ -1,22 +1,15 @@
+import { DateTime } from 'luxon';
+
 /**
- * The instant at which a wall-clock time happens on a date in a time zone, e.g. 09:00 on
- * 2026-12-18 in America/Chicago → 2026-12-18T15:00:00Z. Uses the zone's offset on that day.
+ * The instant at which a wall-clock hour happens on a calendar date in a time zone, `days`
+ * calendar days from that date: 09:00 on 2026-12-18 in America/Chicago → 15:00Z. Luxon reads
+ * the zone's offset at that wall-clock time, so the hour holds on the days clocks change; and
+ * days are counted on the calendar, never as 24-hour steps across a change.
  */
-export function zonedTime(date: string, hour: number, timeZone: string): Date {
-  const guess = Date.parse(`${date}T${String(hour).padStart(2, '0')}:00:00Z`);
-  const parts = Object.fromEntries(
-    new Intl.DateTimeFormat('en-US', {
-      timeZone,
-      hourCycle: 'h23',
-      year: 'numeric',
-      month: '2-digit',
-      day: '2-digit',
-      hour: '2-digit',
-      minute: '2-digit',
-    })
-      .formatToParts(new Date(guess))
-      .map((p) => [p.type, p.value]),
-  );
-  const shown = Date.parse(`${parts.year}-${parts.month}-${parts.day}T${parts.hour}:${parts.minute}:00Z`);
-  return new Date(guess - (shown - guess));
+export function zonedTime(date: string, hour: number, timeZone: string, days = 0): Date {
+  const local = DateTime.fromISO(date, { zone: timeZone })
+    .plus({ days })
+    .set({ hour, minute: 0, second: 0, millisecond: 0 });
+  if (!local.isValid) throw new Error(`No ${hour}:00 on ${date} in ${timeZone}: ${local.invalidExplanation}`);
+  return local.toJSDate();
 }
