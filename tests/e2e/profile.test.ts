@@ -34,7 +34,13 @@ describe('the organisation profile', () => {
 
   it('shows a buyer the profile read-only, reached from the organisation’s name', async () => {
     const buyer = await as('maya@larkspur.example', 390);
-    expect(await buyer.locator('[data-test=nav]').innerText()).not.toContain('Organisation profile');
+    // At a phone's width the navigation is a drawer behind the menu button.
+    expect(await buyer.locator('[data-test=nav]').count()).toBe(0);
+    await buyer.locator('[data-test=menu-button]').click();
+    const nav = buyer.locator('.ant-drawer [data-test=nav]');
+    await expect.poll(() => nav.innerText()).toContain('Die requests');
+    expect(await nav.innerText()).not.toContain('Organisation profile');
+    await buyer.keyboard.press('Escape');
     await buyer.locator('[data-test=org-name]').click();
     await buyer.waitForURL(`${baseUrl}/profile`);
     await expect.poll(() => buyer.locator('[data-test=profile-read-only]').isVisible()).toBe(true);
