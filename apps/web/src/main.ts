@@ -9,6 +9,7 @@ import { createApp } from 'vue';
 import App from './App.vue';
 import { ApiRequestError } from './api/client';
 import { router } from './router';
+import { watchAria } from './ariaRepairs';
 
 const queryClient = new QueryClient({
   defaultOptions: {
@@ -21,3 +22,4 @@ const queryClient = new QueryClient({
 });
 
 createApp(App).use(createPinia()).use(router).use(VueQueryPlugin, { queryClient }).mount('#app');
+watchAria();

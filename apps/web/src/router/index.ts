@@ -2,29 +2,14 @@ import { createRouter, createWebHistory, type RouteRecordRaw } from 'vue-router'
 import { useAuthStore } from '../stores/auth';
 import { canAccess } from './access';
 import { appRoutes } from './appRoutes';
+import { publicRoutes } from './publicRoutes';
 
-export { appRoutes };
+export { appRoutes, publicRoutes };
 
+// Vue Router ranks paths by how specific they are, so the catch-all among the public routes never hides these.
 const routes: RouteRecordRaw[] = [
-  {
-    path: '/sign-in',
-    name: 'sign-in',
-    component: () => import('../views/SignInView.vue'),
-    meta: { public: true, title: 'Sign in' },
-  },
-  {
-    path: '/accept-invitation',
-    name: 'accept-invitation',
-    component: () => import('../views/AcceptInvitationView.vue'),
-    meta: { public: true, title: 'Accept invitation' },
-  },
+  ...publicRoutes,
   { path: '/', component: () => import('../layouts/AppLayout.vue'), children: appRoutes },
-  {
-    path: '/:rest(.*)*',
-    name: 'not-found',
-    component: () => import('../views/NotFoundView.vue'),
-    meta: { public: true, title: 'Not found' },
-  },
 ];
 
 export const router = createRouter({ history: createWebHistory(), routes });

@@ -1,0 +1,55 @@
+/**
+ * Repairs to the ARIA that ant-design-vue 4 renders and cannot be configured away:
+ * - its Select's combobox input leaves out `aria-expanded` while closed, and points
+ *   `aria-owns`, `aria-controls` and `aria-activedescendant` at a list that exists only while
+ *   open. The references are kept while their target exists and put back when it appears;
+ * - an `aria-label` given to a Select lands on its wrapper, not on the combobox that needs it;
+ * - icons inside its table sorter are `role="presentation"` yet keep an `aria-label`.
+ * A MutationObserver applies them to whatever the components render, whenever they render it.
+ */
+const REFERENCES = ['aria-owns', 'aria-controls', 'aria-activedescendant'] as const;
+const kept = new WeakMap<Element, Partial<Record<(typeof REFERENCES)[number], string>>>();
+
+function repairCombobox(input: Element) {
+  const wanted = kept.get(input) ?? {};
+  for (const attribute of REFERENCES) {
+    const current = input.getAttribute(attribute);
+    if (current) wanted[attribute] = current; // the component's own latest value
+    const target = wanted[attribute];
+    if (!target) continue;
+    if (document.getElementById(target)) {
+      if (current !== target) input.setAttribute(attribute, target);
+    } else if (current !== null) input.removeAttribute(attribute);
+  }
+  kept.set(input, wanted);
+  if (!input.hasAttribute('aria-expanded')) input.setAttribute('aria-expanded', 'false');
+  const label = input.closest('.ant-select[aria-label]')?.getAttribute('aria-label');
+  if (label && input.getAttribute('aria-label') !== label) input.setAttribute('aria-label', label);
+}
+
+export function repairAria(root: ParentNode = document) {
+  root.querySelectorAll('input[role="combobox"]').forEach(repairCombobox);
+  root.querySelectorAll('[role="presentation"][aria-label]').forEach((el) => el.removeAttribute('aria-label'));
+}
+
+/** Keeps the repairs applied as the app renders. */
+export function watchAria(root: HTMLElement = document.body): MutationObserver {
+  let queued = false;
+  const observer = new MutationObserver(() => {
+    if (queued) return;
+    queued = true;
+    queueMicrotask(() => {
+      queued = false;
+      repairAria(root);
+      observer.takeRecords(); // the repairs' own changes need no second pass
+    });
+  });
+  observer.observe(root, {
+    subtree: true,
+    childList: true,
+    attributes: true,
+    attributeFilter: ['aria-owns', 'aria-controls', 'aria-activedescendant', 'aria-expanded', 'aria-label', 'role'],
+  });
+  repairAria(root);
+  return observer;
+}
