@@ -21,6 +21,11 @@ describe('price history in the browser', () => {
     await p.locator('[data-test=nav] >> text=Price history').click();
     await expect.poll(() => p.locator('[data-test=fit]').innerText()).toMatch(/model, R²/);
     await expect.poll(() => p.locator('[data-test=price-scatter] canvas').count()).toBeGreaterThan(0);
+    // Each chart says in words what it draws, and gives its figures as a table.
+    expect(await p.locator('[data-test=price-scatter-summary]').innerText()).toMatch(
+      /^\d+ received dies with [\d.]+ in to [\d.]+ in of rule, priced \$[\d,.]+ to \$[\d,.]+\./,
+    );
+    expect(await p.locator('[data-test=price-scatter] details table tbody tr').count()).toBeGreaterThan(1);
     await expect.poll(() => p.locator('[data-test=price-table]').innerText()).toContain('Brightline Rule & Die');
     await p.waitForTimeout(800); // let the charts finish drawing
     await screenshot(p, '40-price-history');
