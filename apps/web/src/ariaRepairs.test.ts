@@ -1,5 +1,6 @@
 import { afterEach, describe, expect, it } from 'vitest';
-import { repairAria, watchAria } from './ariaRepairs';
+import { repairAria } from './ariaRepairs';
+import { watchDom } from './watchDom';
 
 // The markup ant-design-vue 4's Select renders while closed (seen in its Selector/Input).
 const closedSelect = `<div class="ant-select" aria-label="Status"><input role="combobox" id="s" aria-owns="s_list"
@@ -38,7 +39,7 @@ describe('repairAria', () => {
   });
 
   it('keeps repairing what renders later', async () => {
-    const observer = watchAria();
+    const observer = watchDom([repairAria]);
     document.body.insertAdjacentHTML('beforeend', closedSelect);
     await new Promise((resolve) => setTimeout(resolve, 0));
     expect(document.getElementById('s')!.getAttribute('aria-expanded')).toBe('false');

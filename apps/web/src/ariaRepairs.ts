@@ -5,7 +5,7 @@
  *   open. The references are kept while their target exists and put back when it appears;
  * - an `aria-label` given to a Select lands on its wrapper, not on the combobox that needs it;
  * - icons inside its table sorter are `role="presentation"` yet keep an `aria-label`.
- * A MutationObserver applies them to whatever the components render, whenever they render it.
+ * `watchDom` applies them to whatever the components render, whenever they render it.
  */
 const REFERENCES = ['aria-owns', 'aria-controls', 'aria-activedescendant'] as const;
 const kept = new WeakMap<Element, Partial<Record<(typeof REFERENCES)[number], string>>>();
@@ -30,26 +30,4 @@ function repairCombobox(input: Element) {
 export function repairAria(root: ParentNode = document) {
   root.querySelectorAll('input[role="combobox"]').forEach(repairCombobox);
   root.querySelectorAll('[role="presentation"][aria-label]').forEach((el) => el.removeAttribute('aria-label'));
-}
-
-/** Keeps the repairs applied as the app renders. */
-export function watchAria(root: HTMLElement = document.body): MutationObserver {
-  let queued = false;
-  const observer = new MutationObserver(() => {
-    if (queued) return;
-    queued = true;
-    queueMicrotask(() => {
-      queued = false;
-      repairAria(root);
-      observer.takeRecords(); // the repairs' own changes need no second pass
-    });
-  });
-  observer.observe(root, {
-    subtree: true,
-    childList: true,
-    attributes: true,
-    attributeFilter: ['aria-owns', 'aria-controls', 'aria-activedescendant', 'aria-expanded', 'aria-label', 'role'],
-  });
-  repairAria(root);
-  return observer;
 }

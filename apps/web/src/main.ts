@@ -9,7 +9,9 @@ import { createApp } from 'vue';
 import App from './App.vue';
 import { ApiRequestError } from './api/client';
 import { router } from './router';
-import { watchAria } from './ariaRepairs';
+import { repairAria } from './ariaRepairs';
+import { labelTableCells } from './tableLabels';
+import { watchDom } from './watchDom';
 
 const queryClient = new QueryClient({
   defaultOptions: {
@@ -22,4 +24,4 @@ const queryClient = new QueryClient({
 });
 
 createApp(App).use(createPinia()).use(router).use(VueQueryPlugin, { queryClient }).mount('#app');
-watchAria();
+watchDom([repairAria, labelTableCells]);
