@@ -22,3 +22,4 @@ export * from './rateCards';
 export * from './holidays';
 export * from './dieFit';
 export * from './shopChoices';
+export * from './wallClock';

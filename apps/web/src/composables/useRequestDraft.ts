@@ -7,6 +7,7 @@ import type {
   RuleType,
   Visibility,
 } from '@kerfmark/contracts';
+import { instantOfWallClock, wallClockIn } from '@kerfmark/contracts';
 import { basisWeightToGsm, gsmToBasisWeight } from '@kerfmark/stock';
 import dayjs, { type Dayjs } from 'dayjs';
 import { inject, provide, reactive, type InjectionKey } from 'vue';
@@ -109,7 +110,7 @@ export function emptyRequestForm(): RequestForm {
 const blankToNull = (value: string) => (value.trim() === '' ? null : value.trim());
 
 /** 1 pt of caliper = 0.001 in (the North American board convention). */
-export function toRequestInput(form: RequestForm): DieRequestCreate {
+export function toRequestInput(form: RequestForm, timeZone: string): DieRequestCreate {
   return {
     title: form.title,
     jobReference: blankToNull(form.jobReference),
@@ -144,7 +145,10 @@ export function toRequestInput(form: RequestForm): DieRequestCreate {
     runSheets: form.runSheets ?? null,
     plannedLeadDays: form.plannedLeadDays,
     needByDate: form.needByDate ? form.needByDate.format('YYYY-MM-DD') : null,
-    bidDeadline: form.bidDeadline ? form.bidDeadline.toISOString() : null,
+    // The picker holds the organisation's wall clock, whatever the browser's own zone.
+    bidDeadline: form.bidDeadline
+      ? instantOfWallClock(form.bidDeadline.format('YYYY-MM-DDTHH:mm:ss'), timeZone).toISOString()
+      : null,
     deliveryAddress: blankToNull(form.deliveryAddress),
     deliveryPostcode: blankToNull(form.deliveryPostcode),
     visibility: form.visibility,
@@ -153,7 +157,7 @@ export function toRequestInput(form: RequestForm): DieRequestCreate {
   };
 }
 
-export function fromRequest(request: DieRequestDetail): RequestForm {
+export function fromRequest(request: DieRequestDetail, timeZone: string): RequestForm {
   return {
     title: request.title,
     jobReference: request.jobReference ?? '',
@@ -182,7 +186,7 @@ export function fromRequest(request: DieRequestDetail): RequestForm {
     runSheets: request.runSheets ?? undefined,
     plannedLeadDays: request.plannedLeadDays,
     needByDate: request.needByDate ? dayjs(request.needByDate) : undefined,
-    bidDeadline: request.bidDeadline ? dayjs(request.bidDeadline) : undefined,
+    bidDeadline: request.bidDeadline ? dayjs(wallClockIn(request.bidDeadline, timeZone)) : undefined,
     deliveryAddress: request.deliveryAddress ?? '',
     deliveryPostcode: request.deliveryPostcode ?? '',
     visibility: request.visibility,
