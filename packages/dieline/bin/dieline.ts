@@ -17,11 +17,15 @@ import {
 } from '../src/index';
 
 const USAGE =
-  'usage: dieline FILE [--json] [--margin IN] [--map LAYER=TYPE]... [--units in|mm|cm|m|ft|px] [--press WxL] [--page N]';
+  'usage: dieline FILE [--json] [--units in|mm] [--margin IN] [--map LAYER=TYPE]... [--drawing-units in|mm|cm|m|ft|px] [--press WxL] [--page N]';
+const MM_PER_IN = 25.4;
+
+/** The units the table is printed in; the JSON is in inches whatever this says. */
+type ShownUnits = 'in' | 'mm';
 
 class UsageError extends Error {}
 
-function options(argv: string[]): { file: string; json: boolean; opts: AnalyseOptions } {
+function options(argv: string[]): { file: string; json: boolean; shown: ShownUnits; opts: AnalyseOptions } {
   const { values, positionals } = parseArgs({
     args: argv,
     allowPositionals: true,
@@ -30,6 +34,7 @@ function options(argv: string[]): { file: string; json: boolean; opts: AnalyseOp
       margin: { type: 'string' },
       map: { type: 'string', multiple: true },
       units: { type: 'string' },
+      'drawing-units': { type: 'string' },
       press: { type: 'string' },
       page: { type: 'string' },
       help: { type: 'boolean', short: 'h', default: false },
@@ -58,10 +63,16 @@ function options(argv: string[]): { file: string; json: boolean; opts: AnalyseOp
     }
     opts.layerMap = map as LayerMap;
   }
-  if (values.units !== undefined) {
-    if (!(UNIT_NAMES as readonly string[]).includes(values.units))
-      throw new UsageError(`--units must be one of ${UNIT_NAMES.join(', ')}`);
-    opts.units = values.units as UnitName;
+  const shown = values.units ?? 'in';
+  if (shown !== 'in' && shown !== 'mm')
+    throw new UsageError(
+      `--units is how the table shows lengths, in or mm; the file's own units are --drawing-units ${UNIT_NAMES.join('|')}`,
+    );
+  const drawing = values['drawing-units'];
+  if (drawing !== undefined) {
+    if (!(UNIT_NAMES as readonly string[]).includes(drawing))
+      throw new UsageError(`--drawing-units must be one of ${UNIT_NAMES.join(', ')}`);
+    opts.units = drawing as UnitName;
   }
   if (values.press !== undefined) {
     const m = /^\s*(\d+(?:\.\d+)?)\s*[xX×]\s*(\d+(?:\.\d+)?)\s*$/.exec(values.press);
@@ -73,12 +84,21 @@ function options(argv: string[]): { file: string; json: boolean; opts: AnalyseOp
       throw new UsageError(`--page "${values.page}" is not a page number (1, 2, …)`);
     opts.page = Number(values.page);
   }
-  return { file: positionals[0]!, json: values.json ?? false, opts };
+  return { file: positionals[0]!, json: values.json ?? false, shown, opts };
 }
 
-function table(a: DielineAnalysis, file: string): string {
+function table(a: DielineAnalysis, file: string, shown: ShownUnits): string {
   const m = a.metrics;
   const f = (v: number, digits = 3) => v.toFixed(digits);
+  // The chosen unit first, the other beside it.
+  const both = (inches: number, inDigits: number, mmDigits: number) =>
+    shown === 'mm'
+      ? `${f(inches * MM_PER_IN, mmDigits)} mm   ${f(inches, inDigits)} in`
+      : `${f(inches, inDigits)} in   ${f(inches * MM_PER_IN, mmDigits)} mm`;
+  const size = (box: { width: number; height: number }) =>
+    shown === 'mm'
+      ? `${f(box.width * MM_PER_IN, 1)} × ${f(box.height * MM_PER_IN, 1)} mm`
+      : `${f(box.width)} × ${f(box.height)} in`;
   const rows: Array<[string, string]> = [
     ['file', file],
     [
@@ -87,16 +107,16 @@ function table(a: DielineAnalysis, file: string): string {
     ],
     ...(['cut', 'crease', 'perf', 'kiss', 'other', 'total'] as const).map((k): [string, string] => [
       `length ${k}`,
-      `${f(m.length[k])} in   ${f(m.lengthMm[k], 1)} mm`,
+      both(m.length[k], 3, 1),
     ]),
     ['curves', String(m.curves)],
-    ['smallest radius', m.minRadius === null ? '-' : `${f(m.minRadius, 4)} in   ${f(m.minRadius * 25.4, 2)} mm`],
+    ['smallest radius', m.minRadius === null ? '-' : both(m.minRadius, 4, 2)],
     ['bends', String(m.bends)],
     ['joints', String(m.joints)],
     ['closed contours', String(m.closedContours)],
     ['punches', String(m.punches)],
-    ['rules box', `${f(m.bbox.width)} × ${f(m.bbox.height)} in`],
-    ['board', `${f(m.board.width)} × ${f(m.board.height)} in`],
+    ['rules box', size(m.bbox)],
+    ['board', size(m.board)],
     ['fits press', m.fitsPress === null ? '- (no press given)' : m.fitsPress ? 'yes' : 'no'],
     ['complexity', m.complexity],
     ...(m.page ? [['page', `${m.page.number} of ${m.page.count}`] as [string, string]] : []),
@@ -109,6 +129,21 @@ function table(a: DielineAnalysis, file: string): string {
   if (m.warnings.length > 0) lines.push('', 'warnings:', ...m.warnings.map((x) => `  - ${x}`));
   lines.push('', `complexity rule: ${COMPLEXITY_RULE}`);
   return `${lines.join('\n')}\n`;
+}
+
+/** The metrics in inches as the contract has them, with the rules box and the board in millimetres beside them. */
+function withMillimetres(m: DielineAnalysis['metrics']) {
+  const mm = (box: { width: number; height: number }) => ({
+    width: box.width * MM_PER_IN,
+    height: box.height * MM_PER_IN,
+  });
+  const out: Record<string, unknown> = {};
+  for (const [key, value] of Object.entries(m)) {
+    out[key] = value;
+    if (key === 'bbox') out.bboxMm = mm(m.bbox);
+    if (key === 'board') out.boardMm = mm(m.board);
+  }
+  return out;
 }
 
 async function main(): Promise<number> {
@@ -124,7 +159,9 @@ async function main(): Promise<number> {
       );
     }
     const result = await analyseDielineAsync(new Uint8Array(readFileSync(file)), parsed.opts);
-    process.stdout.write(parsed.json ? `${JSON.stringify(result.metrics)}\n` : table(result, file));
+    process.stdout.write(
+      parsed.json ? `${JSON.stringify(withMillimetres(result.metrics))}\n` : table(result, file, parsed.shown),
+    );
     return 0;
   } catch (err) {
     const oneLine = (s: string) => s.replace(/\s+/g, ' ').trim();

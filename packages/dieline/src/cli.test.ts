@@ -37,7 +37,9 @@ describe('dieline command', () => {
       'closedContours',
       'punches',
       'bbox',
+      'bboxMm',
       'board',
+      'boardMm',
       'complexity',
       'warnings',
       'fitsPress',
@@ -45,6 +47,8 @@ describe('dieline command', () => {
     ]);
     expect(m.lengthMm.perf).toBeCloseTo(50, 9);
     expect(m.board.width).toBeCloseTo(100 / 25.4 + 1, 12); // 0.5 in margin each side
+    expect(m.boardMm.width).toBeCloseTo(100 + 25.4, 9); // 1 in = 25.4 mm exactly
+    expect(m.bboxMm.width).toBeCloseTo(100, 9);
     expect(m.fitsPress).toBe(true);
   }, 30_000);
 
@@ -53,6 +57,15 @@ describe('dieline command', () => {
     expect(r.status).toBe(0);
     expect(r.stdout).toMatch(/length cut\s+13\.003 in\s+330\.3 mm/);
     expect(r.stdout).toMatch(/complexity rule: A die is complex/);
+  }, 30_000);
+
+  it('prints the table in millimetres with --units mm, inches beside them', () => {
+    const r = run(fixture('label-a4.svg'), '--units', 'mm');
+    expect(r.status).toBe(0);
+    // 13.003 in × 25.4 = 330.3 mm.
+    expect(r.stdout).toMatch(/length cut\s+330\.3 mm\s+13\.003 in/);
+    expect(r.stdout).toMatch(/board\s+[\d.]+ × [\d.]+ mm/);
+    expect(run(fixture('label-a4.svg'), '--units', 'cm').status).toBe(2);
   }, 30_000);
 
   it('exits non-zero with one line on stderr for a file it cannot read', () => {
