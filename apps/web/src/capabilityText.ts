@@ -1,5 +1,5 @@
 import { dieKindLabels, type ShopCapabilities } from '@kerfmark/contracts';
-import { millimetres, size } from './format';
+import { otherSize, size } from './format';
 
 const yesNo = (value: boolean | null) => (value === null ? 'Not stated' : value ? 'Yes' : 'No');
 
@@ -10,7 +10,7 @@ export function capabilityText(c: ShopCapabilities & { laserCutBoards: boolean |
     [
       'Largest die board',
       c.maxBoardWidthIn && c.maxBoardLengthIn
-        ? `${size(c.maxBoardWidthIn, c.maxBoardLengthIn)} (${millimetres(c.maxBoardWidthIn).replace(' mm', '')} × ${millimetres(c.maxBoardLengthIn)})`
+        ? `${size(c.maxBoardWidthIn, c.maxBoardLengthIn)} (${otherSize(c.maxBoardWidthIn, c.maxBoardLengthIn, 0)})`
         : 'Not stated',
     ],
     ['Cutting rule heights', c.ruleHeightsIn.map((h) => `${h} in`).join(', ') || 'Not stated'],

@@ -1,5 +1,15 @@
-import { formatCalendarDate, formatInZone, requestStatusLabels, type RequestStatus } from '@kerfmark/contracts';
+import {
+  formatCalendarDate,
+  formatInZone,
+  requestStatusLabels,
+  type LengthUnits,
+  type RequestStatus,
+} from '@kerfmark/contracts';
 import { inchesToMm } from '@kerfmark/dieline';
+import { ref } from 'vue';
+
+/** The signed-in user's length units (the auth store sets it from /me); lengths arrive in inches. */
+export const lengthUnits = ref<LengthUnits>('in');
 
 /** Small display helpers shared by the views. Lengths arrive in inches. */
 export const inches = (value: number | null | undefined, digits = 2) =>
@@ -12,8 +22,30 @@ export const millimetres = (inchValue: number | null | undefined, digits = 0) =>
     ? '—'
     : `${inchesToMm(inchValue).toLocaleString('en-US', { maximumFractionDigits: digits, minimumFractionDigits: digits })} mm`;
 
-export const size = (w: number | null | undefined, h: number | null | undefined) =>
-  w && h ? `${inches(w).replace(' in', '')} × ${inches(h)}` : '—';
+/**
+ * A length in the user's units: inches to `digits` places, or millimetres to one place fewer
+ * (0.01 in is about a quarter of a millimetre).
+ */
+export const length = (inchValue: number | null | undefined, digits = 2) =>
+  lengthUnits.value === 'mm' ? millimetres(inchValue, Math.max(0, digits - 1)) : inches(inchValue, digits);
+
+/** The same length in the other unit, for beside it: "(680 mm)" or "(26.77 in)". */
+export const otherLength = (inchValue: number | null | undefined, digits = 2) =>
+  lengthUnits.value === 'mm' ? inches(inchValue, digits) : millimetres(inchValue, Math.max(0, digits - 1));
+
+/** A width × height in the user's units: "22.00 × 30.00 in" or "559 × 762 mm". */
+export const size = (w: number | null | undefined, h: number | null | undefined, digits = 2) => {
+  if (!w || !h) return '—';
+  const unit = lengthUnits.value === 'mm' ? ' mm' : ' in';
+  return `${length(w, digits).replace(unit, '')} × ${length(h, digits)}`;
+};
+
+/** The same size in the other unit. */
+export const otherSize = (w: number | null | undefined, h: number | null | undefined, digits = 2) => {
+  if (!w || !h) return '—';
+  const unit = lengthUnits.value === 'mm' ? ' in' : ' mm';
+  return `${otherLength(w, digits).replace(unit, '')} × ${otherLength(h, digits)}`;
+};
 
 /** A calendar date (YYYY-MM-DD) for people: "Fri, Dec 18, 2026". */
 export const calendarDate = (date: string | null | undefined) => (date ? formatCalendarDate(date) : '—');
@@ -41,7 +73,10 @@ export const caliper = (inchValue: number | null | undefined) =>
   inchValue ? `${Math.round(inchValue * 1000 * 10) / 10} pt (${inchesToMm(inchValue).toFixed(2)} mm)` : '—';
 
 /** A gutter as typed: "0 in", "0.125 in". */
-export const gutter = (value: number) => `${value.toLocaleString('en-US', { maximumFractionDigits: 4 })} in`;
+export const gutter = (value: number) =>
+  lengthUnits.value === 'mm'
+    ? `${inchesToMm(value).toLocaleString('en-US', { maximumFractionDigits: 2 })} mm`
+    : `${value.toLocaleString('en-US', { maximumFractionDigits: 4 })} in`;
 
 /** What the dieline file shows: "Whole die", or "One up, laid out 3 across × 4 along, gutter 0 in". */
 export function dielineLayout(r: {

@@ -34,11 +34,17 @@ export const Organisation = z.object({
 });
 export type Organisation = z.infer<typeof Organisation>;
 
+/** How lengths are shown: inches, or millimetres (1 in = 25.4 mm exactly). */
+export const LengthUnits = z.enum(['in', 'mm'], { error: 'Choose in or mm' });
+export type LengthUnits = z.infer<typeof LengthUnits>;
+
 export const Me = z.object({
   id: z.number().int(),
   email: z.string(),
   name: z.string(),
   role: Role,
   organisation: Organisation,
+  /** The user's own choice, else the organisation's default. */
+  lengthUnits: LengthUnits,
 });
 export type Me = z.infer<typeof Me>;

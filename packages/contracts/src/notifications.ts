@@ -1,3 +1,4 @@
+import { LengthUnits } from './auth';
 import { z } from 'zod';
 
 /** Every kind of notice Kerfmark sends; each user chooses which of them also come by e-mail. */
@@ -23,11 +24,18 @@ export const notificationKinds = Object.keys(notificationKindLabels) as Notifica
 
 export const PreferencesUpdate = z.object({
   // Only the kinds that change; a zod 4 record over an enum would demand every key.
-  email: z.partialRecord(z.enum(notificationKinds as [NotificationKind, ...NotificationKind[]]), z.boolean()),
+  email: z
+    .partialRecord(z.enum(notificationKinds as [NotificationKind, ...NotificationKind[]]), z.boolean())
+    .default({}),
+  /** Inches or millimetres; null goes back to the organisation's default; absent leaves it. */
+  lengthUnits: LengthUnits.nullable().optional(),
 });
 
 export interface PreferencesDto {
   email: Record<NotificationKind, boolean>;
+  /** The user's own choice, or null for the organisation's. */
+  lengthUnits: LengthUnits | null;
+  organisationLengthUnits: LengthUnits;
 }
 
 export interface UpcomingItem {

@@ -1,5 +1,5 @@
 import { Model } from 'objection';
-import type { CuttingRuleHeightIn, DeliveryPoint, DieKind, OrgKind } from '@kerfmark/contracts';
+import type { CuttingRuleHeightIn, DeliveryPoint, DieKind, LengthUnits, OrgKind } from '@kerfmark/contracts';
 
 export class Organisation extends Model {
   static override tableName = 'organisations';
@@ -11,6 +11,8 @@ export class Organisation extends Model {
   postcode!: string | null;
   country!: string;
   createdAt!: Date;
+  /** Inches or millimetres by default for its people (migration 20261204000600). */
+  lengthUnits!: LengthUnits;
   // The profile (migration 20261204000200): the legal name and address purchase orders print.
   legalName!: string | null;
   officeAddress!: string | null;

@@ -1,5 +1,5 @@
 import { Model } from 'objection';
-import type { Role, UserStatus } from '@kerfmark/contracts';
+import type { Role, UserStatus, LengthUnits } from '@kerfmark/contracts';
 import { Organisation } from './Organisation';
 
 export class User extends Model {
@@ -15,6 +15,8 @@ export class User extends Model {
   createdAt!: Date;
   lastSignInAt!: Date | null;
   preferences!: Record<string, boolean>;
+  /** Inches or millimetres, or null for the organisation's default (migration 20261204000600). */
+  lengthUnits!: LengthUnits | null;
   organisation?: Organisation;
 
   static override get jsonAttributes() {

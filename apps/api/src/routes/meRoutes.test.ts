@@ -1,6 +1,6 @@
 import request from 'supertest';
 import { describe, expect, it } from 'vitest';
-import { app, createOpenRequest, createShop, createWorld } from '../test/harness';
+import { app, createOpenRequest, createShop, createWorld, knex } from '../test/harness';
 import { bidBody, inDays } from '../test/fixtures';
 
 const bearer = (token: string) => ({ Authorization: `Bearer ${token}` });
@@ -21,6 +21,34 @@ describe('notification preferences', () => {
       .set(bearer(w.tokens.estimator))
       .send({ email: { no_such_kind: false } });
     expect(bad.status).toBe(400);
+  });
+});
+
+describe('length units', () => {
+  it('shows lengths in the organisation’s units until the user chooses otherwise, and back', async () => {
+    const w = await createWorld();
+    const me = async () => (await request(app).get('/api/me').set(bearer(w.tokens.buyer))).body;
+    expect((await me()).lengthUnits).toBe('in'); // a US organisation
+    const chosen = await request(app)
+      .put('/api/me/preferences')
+      .set(bearer(w.tokens.buyer))
+      .send({ lengthUnits: 'mm' });
+    expect(chosen.status).toBe(200);
+    expect(chosen.body).toMatchObject({ lengthUnits: 'mm', organisationLengthUnits: 'in' });
+    expect(Object.values(chosen.body.email).every(Boolean)).toBe(true); // the e-mail choices untouched
+    expect((await me()).lengthUnits).toBe('mm');
+    // Another user of the same organisation keeps the default.
+    expect((await request(app).get('/api/me').set(bearer(w.tokens.purchasing))).body.lengthUnits).toBe('in');
+    await request(app).put('/api/me/preferences').set(bearer(w.tokens.buyer)).send({ lengthUnits: null });
+    expect((await me()).lengthUnits).toBe('in');
+    const bad = await request(app).put('/api/me/preferences').set(bearer(w.tokens.buyer)).send({ lengthUnits: 'cm' });
+    expect(bad.status).toBe(400);
+  });
+
+  it('follows an organisation whose default is millimetres (those outside the US, from the migration)', async () => {
+    const w = await createWorld();
+    await knex('organisations').where({ id: w.printer.id }).update({ country: 'DE', lengthUnits: 'mm' });
+    expect((await request(app).get('/api/me').set(bearer(w.tokens.buyer))).body.lengthUnits).toBe('mm');
   });
 });
 

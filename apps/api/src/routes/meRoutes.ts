@@ -21,8 +21,7 @@ export function meRoutes(services: Services, requireAuth: RequestHandler): Route
   });
 
   router.put('/preferences', async (req, res) => {
-    const { email } = parse(PreferencesUpdate, req.body);
-    res.json(await services.preferences.update(req.user!, email));
+    res.json(await services.preferences.update(req.user!, parse(PreferencesUpdate, req.body)));
   });
 
   return router;

@@ -44,6 +44,7 @@ export function createAuthService({ config, knex }: ServiceDeps, limiter: LoginL
 
     async me(user: AuthUser): Promise<Me> {
       const organisation = await Organisation.query().findById(user.organisationId).throwIfNotFound();
+      const own = await User.query().findById(user.id).select('lengthUnits');
       return {
         id: user.id,
         email: user.email,
@@ -55,6 +56,7 @@ export function createAuthService({ config, knex }: ServiceDeps, limiter: LoginL
           kind: organisation.kind,
           timeZone: organisation.timeZone,
         },
+        lengthUnits: own?.lengthUnits ?? organisation.lengthUnits,
       };
     },
   };

@@ -1,28 +1,37 @@
-import { notificationKinds, type NotificationKind, type PreferencesDto } from '@kerfmark/contracts';
+import { notificationKinds, type LengthUnits, type NotificationKind, type PreferencesDto } from '@kerfmark/contracts';
 import type { AuthUser } from '../auth/passport';
-import { User } from '../models';
+import { Organisation, User } from '../models';
 
 /** Which notices also come by e-mail: every kind is on until the user turns it off. */
-export function preferencesOf(stored: Record<string, boolean> | null | undefined): PreferencesDto {
+export function emailPreferencesOf(stored: Record<string, boolean> | null | undefined): PreferencesDto['email'] {
+  return Object.fromEntries(notificationKinds.map((k) => [k, stored?.[k] !== false])) as PreferencesDto['email'];
+}
+
+async function preferencesDto(actor: AuthUser): Promise<PreferencesDto> {
+  const user = await User.query().findById(actor.id).select('preferences', 'lengthUnits').throwIfNotFound();
+  const organisation = await Organisation.query()
+    .findById(actor.organisationId)
+    .select('lengthUnits')
+    .throwIfNotFound();
   return {
-    email: Object.fromEntries(notificationKinds.map((k) => [k, stored?.[k] !== false])) as PreferencesDto['email'],
+    email: emailPreferencesOf(user.preferences),
+    lengthUnits: user.lengthUnits,
+    organisationLengthUnits: organisation.lengthUnits,
   };
 }
 
-export async function readPreferences(actor: AuthUser): Promise<PreferencesDto> {
-  const user = await User.query().findById(actor.id).select('preferences');
-  return preferencesOf(user?.preferences);
-}
+export const readPreferences = preferencesDto;
 
-/** Changes only the kinds named; the others keep their setting. */
+/** Changes only what is named: the e-mail kinds given, and the length units when given. */
 export async function updatePreferences(
   actor: AuthUser,
-  email: Partial<Record<NotificationKind, boolean>>,
+  change: { email: Partial<Record<NotificationKind, boolean>>; lengthUnits?: LengthUnits | null },
 ): Promise<PreferencesDto> {
   const user = await User.query().findById(actor.id).select('preferences');
-  const preferences = { ...(user?.preferences ?? {}), ...email };
-  await User.query().patch({ preferences }).findById(actor.id);
-  return preferencesOf(preferences);
+  const patch: Partial<User> = { preferences: { ...(user?.preferences ?? {}), ...change.email } };
+  if (change.lengthUnits !== undefined) patch.lengthUnits = change.lengthUnits;
+  await User.query().patch(patch).findById(actor.id);
+  return preferencesDto(actor);
 }
 
 /** The user's own settings. */

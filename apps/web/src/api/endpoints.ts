@@ -1,6 +1,7 @@
 import type { Complexity } from '@kerfmark/dieline';
 import type {
   DieShopChoices,
+  LengthUnits,
   CalibrationDto,
   EstimateDto,
   RateCardDto,
@@ -171,6 +172,9 @@ export const meApi = {
   preferences: () => api<PreferencesDto>('/me/preferences'),
   savePreferences: (email: Partial<Record<NotificationKind, boolean>>) =>
     api<PreferencesDto>('/me/preferences', { method: 'PUT', body: { email } }),
+  /** Inches or millimetres for this user; null for the organisation's default. */
+  saveLengthUnits: (lengthUnits: LengthUnits | null) =>
+    api<PreferencesDto>('/me/preferences', { method: 'PUT', body: { lengthUnits } }),
 };
 
 export interface PriceFitView {

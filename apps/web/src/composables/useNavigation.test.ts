@@ -10,6 +10,7 @@ const me = (kind: Me['organisation']['kind'], role: Me['role']): Me => ({
   name: 'A',
   role,
   organisation: { id: 1, name: 'Org', kind, timeZone: 'UTC' },
+  lengthUnits: 'in',
 });
 
 const listed = (who: Me) => {

@@ -8,6 +8,7 @@ const me = (kind: Me['organisation']['kind'], role: Me['role']): Me => ({
   name: 'A',
   role,
   organisation: { id: 1, name: 'Org', kind, timeZone: 'UTC' },
+  lengthUnits: 'in',
 });
 
 describe('canAccess', () => {

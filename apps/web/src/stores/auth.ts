@@ -1,6 +1,7 @@
-import type { LoginInput, LoginResult, Me } from '@kerfmark/contracts';
+import type { LengthUnits, LoginInput, LoginResult, Me } from '@kerfmark/contracts';
 import { defineStore } from 'pinia';
-import { computed, ref } from 'vue';
+import { computed, ref, watch } from 'vue';
+import { lengthUnits } from '../format';
 import { configureClient } from '../api/client';
 import { authApi } from '../api/endpoints';
 
@@ -30,6 +31,16 @@ export const useAuthStore = defineStore('auth', () => {
   const isAdmin = computed(() => me.value?.role === 'admin');
   /** The organisation's time zone: every date and deadline is shown in it. */
   const timeZone = computed(() => me.value?.organisation.timeZone ?? 'UTC');
+  // Every length the app shows follows the user's units (format.ts).
+  watch(
+    () => me.value?.lengthUnits,
+    (units) => (lengthUnits.value = units ?? 'in'),
+    { immediate: true },
+  );
+  /** After the user changes the units in the preferences. */
+  function setLengthUnits(units: LengthUnits) {
+    if (me.value) me.value = { ...me.value, lengthUnits: units };
+  }
 
   function keep(result: LoginResult) {
     session.value = { token: result.token, expiresAt: result.expiresAt };
@@ -76,5 +87,18 @@ export const useAuthStore = defineStore('auth', () => {
     }
   }
 
-  return { session, me, signedIn, isPrinter, isAdmin, timeZone, expiredNotice, signIn, adopt, loadMe, signOut };
+  return {
+    session,
+    me,
+    signedIn,
+    isPrinter,
+    isAdmin,
+    timeZone,
+    expiredNotice,
+    signIn,
+    adopt,
+    loadMe,
+    signOut,
+    setLengthUnits,
+  };
 });

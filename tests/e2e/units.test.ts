@@ -1,0 +1,36 @@
+import type { Browser } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { baseUrl, launch, pageAs } from './browser';
+
+let browser: Browser;
+beforeAll(async () => {
+  browser = await launch();
+});
+afterAll(async () => {
+  await browser?.close();
+});
+
+describe('inches or millimetres', () => {
+  it('shows a user every length in the units they choose, and keeps the choice', async () => {
+    const p = await pageAs(browser, 'lena@cedarbend.example', 390);
+    const choose = async (units: 'in' | 'mm') => {
+      await p.locator('[data-test=user-menu]').click();
+      await p.locator(`[data-test=units-${units}]`).click();
+      await expect.poll(() => p.locator('.ant-message').innerText()).toContain('Lengths are now shown in');
+    };
+    await p.goto(`${baseUrl}/open-requests?canMake=false`);
+    await choose('mm');
+    const board = p.locator('main .ant-table-tbody');
+    await expect.poll(() => board.innerText()).toMatch(/[\d,]+ mm/);
+    expect(await board.innerText()).not.toMatch(/\d in\b/);
+    await p.locator('main .ant-table-tbody tr').first().click();
+    await p.waitForURL(/\/requests\/\d+$/);
+    const metrics = p.locator('[data-test=metrics]');
+    // The metrics table leads with millimetres and gives inches beside them (1 in = 25.4 mm exactly).
+    await expect.poll(() => metrics.innerText()).toMatch(/Total\s+[\d,.]+ mm\s+[\d.]+/);
+    await p.reload();
+    await expect.poll(() => metrics.innerText()).toMatch(/Die board\s+[\d.]+ × [\d.]+ mm/);
+    await choose('in');
+    await expect.poll(() => metrics.innerText()).toMatch(/Die board\s+[\d.]+ × [\d.]+ in/);
+  });
+});
