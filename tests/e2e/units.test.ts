@@ -10,7 +10,7 @@ afterAll(async () => {
   await browser?.close();
 });
 
-describe('inches or millimetres', () => {
+describe('inches or millimetres, and the locale', () => {
   it('shows a user every length in the units they choose, and keeps the choice', async () => {
     const p = await pageAs(browser, 'lena@cedarbend.example', 390);
     const choose = async (units: 'in' | 'mm') => {
@@ -32,5 +32,21 @@ describe('inches or millimetres', () => {
     await expect.poll(() => metrics.innerText()).toMatch(/Die board\s+[\d.]+ × [\d.]+ mm/);
     await choose('in');
     await expect.poll(() => metrics.innerText()).toMatch(/Die board\s+[\d.]+ × [\d.]+ in/);
+  });
+
+  it('writes dates day first for a user who chooses British English', async () => {
+    const p = await pageAs(browser, 'oscar@cedarbend.example');
+    await p.goto(`${baseUrl}/open-requests?canMake=false`);
+    const board = p.locator('main .ant-table-tbody');
+    // US English puts the month first: "Dec 6, 2026, 13:29 CST".
+    await expect.poll(() => board.innerText()).toMatch(/[A-Z][a-z]{2} \d{1,2}, \d{4}, \d\d:\d\d/);
+    await p.locator('[data-test=user-menu]').click();
+    await p.locator('[data-test=locale-en-GB]').click();
+    await expect.poll(() => p.locator('.ant-message').innerText()).toContain('British English');
+    // British English puts the day first: "6 Dec 2026, 13:29".
+    await expect.poll(() => board.innerText()).toMatch(/\d{1,2} [A-Z][a-z]{2} \d{4}, \d\d:\d\d/);
+    await p.locator('[data-test=user-menu]').click();
+    await p.locator('[data-test=locale-en-US]').click();
+    await expect.poll(() => board.innerText()).toMatch(/[A-Z][a-z]{2} \d{1,2}, \d{4}, \d\d:\d\d/);
   });
 });

@@ -38,6 +38,13 @@ describe('repairAria', () => {
     expect(document.querySelector('span')!.hasAttribute('aria-label')).toBe(false);
   });
 
+  it('makes a menu’s divider a separator', () => {
+    document.body.innerHTML =
+      '<ul role="menu"><li role="menuitem">A</li><li class="ant-dropdown-menu-item-divider"></li></ul>';
+    repairAria();
+    expect(document.querySelector('li.ant-dropdown-menu-item-divider')!.getAttribute('role')).toBe('separator');
+  });
+
   it('keeps repairing what renders later', async () => {
     const observer = watchDom([repairAria]);
     document.body.insertAdjacentHTML('beforeend', closedSelect);

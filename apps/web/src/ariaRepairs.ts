@@ -4,6 +4,7 @@
  *   `aria-owns`, `aria-controls` and `aria-activedescendant` at a list that exists only while
  *   open. The references are kept while their target exists and put back when it appears;
  * - an `aria-label` given to a Select lands on its wrapper, not on the combobox that needs it;
+ * - a menu's divider is a list item with no role inside a `role="menu"` list: it is a separator;
  * - icons inside its table sorter are `role="presentation"` yet keep an `aria-label`.
  * `watchDom` applies them to whatever the components render, whenever they render it.
  */
@@ -30,4 +31,7 @@ function repairCombobox(input: Element) {
 export function repairAria(root: ParentNode = document) {
   root.querySelectorAll('input[role="combobox"]').forEach(repairCombobox);
   root.querySelectorAll('[role="presentation"][aria-label]').forEach((el) => el.removeAttribute('aria-label'));
+  root
+    .querySelectorAll('[role="menu"] > li[class*="menu-item-divider"]:not([role])')
+    .forEach((el) => el.setAttribute('role', 'separator'));
 }

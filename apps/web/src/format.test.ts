@@ -1,8 +1,19 @@
 import { afterEach, describe, expect, it } from 'vitest';
-import { gutter, length, lengthUnits, otherLength, otherSize, size } from './format';
+import {
+  calendarDate,
+  displayLocale,
+  gutter,
+  instant,
+  length,
+  lengthUnits,
+  otherLength,
+  otherSize,
+  size,
+} from './format';
 
 afterEach(() => {
   lengthUnits.value = 'in';
+  displayLocale.value = 'en-US';
 });
 
 describe('lengths in the user’s units', () => {
@@ -21,5 +32,16 @@ describe('lengths in the user’s units', () => {
     expect(size(22, 30)).toBe('558.8 × 762.0 mm');
     expect(otherSize(22, 30)).toBe('22.00 × 30.00 in');
     expect(gutter(0.125)).toBe('3.18 mm');
+  });
+});
+
+describe('dates and numbers in the user’s locale', () => {
+  // CLDR's English patterns, through Intl: month first in the US, day first in Britain.
+  it('writes dates the US way by default and the British way when chosen', () => {
+    expect(calendarDate('2026-12-18')).toBe('Fri, Dec 18, 2026');
+    expect(instant('2026-12-18T15:00:00Z', 'America/Chicago')).toBe('Dec 18, 2026, 09:00 CST');
+    displayLocale.value = 'en-GB';
+    expect(calendarDate('2026-12-18')).toBe('Fri, 18 Dec 2026');
+    expect(instant('2026-12-18T15:00:00Z', 'Europe/London')).toBe('18 Dec 2026, 15:00 GMT');
   });
 });

@@ -2,6 +2,7 @@ import {
   formatCalendarDate,
   formatInZone,
   requestStatusLabels,
+  type DisplayLocale,
   type LengthUnits,
   type RequestStatus,
 } from '@kerfmark/contracts';
@@ -10,17 +11,19 @@ import { ref } from 'vue';
 
 /** The signed-in user's length units (the auth store sets it from /me); lengths arrive in inches. */
 export const lengthUnits = ref<LengthUnits>('in');
+/** The signed-in user's locale for dates and numbers (the auth store sets it from /me). */
+export const displayLocale = ref<DisplayLocale>('en-US');
 
 /** Small display helpers shared by the views. Lengths arrive in inches. */
 export const inches = (value: number | null | undefined, digits = 2) =>
   value === null || value === undefined
     ? '—'
-    : `${value.toLocaleString('en-US', { maximumFractionDigits: digits, minimumFractionDigits: digits })} in`;
+    : `${value.toLocaleString(displayLocale.value, { maximumFractionDigits: digits, minimumFractionDigits: digits })} in`;
 
 export const millimetres = (inchValue: number | null | undefined, digits = 0) =>
   inchValue === null || inchValue === undefined
     ? '—'
-    : `${inchesToMm(inchValue).toLocaleString('en-US', { maximumFractionDigits: digits, minimumFractionDigits: digits })} mm`;
+    : `${inchesToMm(inchValue).toLocaleString(displayLocale.value, { maximumFractionDigits: digits, minimumFractionDigits: digits })} mm`;
 
 /**
  * A length in the user's units: inches to `digits` places, or millimetres to one place fewer
@@ -48,10 +51,11 @@ export const otherSize = (w: number | null | undefined, h: number | null | undef
 };
 
 /** A calendar date (YYYY-MM-DD) for people: "Fri, Dec 18, 2026". */
-export const calendarDate = (date: string | null | undefined) => (date ? formatCalendarDate(date) : '—');
+export const calendarDate = (date: string | null | undefined) =>
+  date ? formatCalendarDate(date, displayLocale.value) : '—';
 
 export const instant = (iso: string | null | undefined, timeZone: string) =>
-  iso ? formatInZone(new Date(iso), timeZone) : '—';
+  iso ? formatInZone(new Date(iso), timeZone, displayLocale.value) : '—';
 
 export const statusColor: Record<RequestStatus, string> = {
   draft: 'default',
@@ -75,8 +79,8 @@ export const caliper = (inchValue: number | null | undefined) =>
 /** A gutter as typed: "0 in", "0.125 in". */
 export const gutter = (value: number) =>
   lengthUnits.value === 'mm'
-    ? `${inchesToMm(value).toLocaleString('en-US', { maximumFractionDigits: 2 })} mm`
-    : `${value.toLocaleString('en-US', { maximumFractionDigits: 4 })} in`;
+    ? `${inchesToMm(value).toLocaleString(displayLocale.value, { maximumFractionDigits: 2 })} mm`
+    : `${value.toLocaleString(displayLocale.value, { maximumFractionDigits: 4 })} in`;
 
 /** What the dieline file shows: "Whole die", or "One up, laid out 3 across × 4 along, gutter 0 in". */
 export function dielineLayout(r: {

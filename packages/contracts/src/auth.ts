@@ -38,6 +38,10 @@ export type Organisation = z.infer<typeof Organisation>;
 export const LengthUnits = z.enum(['in', 'mm'], { error: 'Choose in or mm' });
 export type LengthUnits = z.infer<typeof LengthUnits>;
 
+/** How dates and numbers are written: US English (Dec 5, 2026) or British English (5 Dec 2026). */
+export const DisplayLocale = z.enum(['en-US', 'en-GB'], { error: 'Choose en-US or en-GB' });
+export type DisplayLocale = z.infer<typeof DisplayLocale>;
+
 export const Me = z.object({
   id: z.number().int(),
   email: z.string(),
@@ -46,5 +50,7 @@ export const Me = z.object({
   organisation: Organisation,
   /** The user's own choice, else the organisation's default. */
   lengthUnits: LengthUnits,
+  /** The user's own choice, else the organisation's default. */
+  locale: DisplayLocale,
 });
 export type Me = z.infer<typeof Me>;

@@ -1,4 +1,4 @@
-import { LengthUnits } from './auth';
+import { DisplayLocale, LengthUnits } from './auth';
 import { z } from 'zod';
 
 /** Every kind of notice Kerfmark sends; each user chooses which of them also come by e-mail. */
@@ -26,9 +26,11 @@ export const PreferencesUpdate = z.object({
   // Only the kinds that change; a zod 4 record over an enum would demand every key.
   email: z
     .partialRecord(z.enum(notificationKinds as [NotificationKind, ...NotificationKind[]]), z.boolean())
-    .default({}),
+    .optional(),
   /** Inches or millimetres; null goes back to the organisation's default; absent leaves it. */
   lengthUnits: LengthUnits.nullable().optional(),
+  /** en-US or en-GB; null goes back to the organisation's default; absent leaves it. */
+  locale: DisplayLocale.nullable().optional(),
 });
 
 export interface PreferencesDto {
@@ -36,6 +38,8 @@ export interface PreferencesDto {
   /** The user's own choice, or null for the organisation's. */
   lengthUnits: LengthUnits | null;
   organisationLengthUnits: LengthUnits;
+  locale: DisplayLocale | null;
+  organisationLocale: DisplayLocale;
 }
 
 export interface UpcomingItem {

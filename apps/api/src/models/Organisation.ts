@@ -1,5 +1,12 @@
 import { Model } from 'objection';
-import type { CuttingRuleHeightIn, DeliveryPoint, DieKind, LengthUnits, OrgKind } from '@kerfmark/contracts';
+import type {
+  CuttingRuleHeightIn,
+  DeliveryPoint,
+  DieKind,
+  DisplayLocale,
+  LengthUnits,
+  OrgKind,
+} from '@kerfmark/contracts';
 
 export class Organisation extends Model {
   static override tableName = 'organisations';
@@ -13,6 +20,8 @@ export class Organisation extends Model {
   createdAt!: Date;
   /** Inches or millimetres by default for its people (migration 20261204000600). */
   lengthUnits!: LengthUnits;
+  /** en-US or en-GB by default for its people (migration 20261204000700). */
+  locale!: DisplayLocale;
   // The profile (migration 20261204000200): the legal name and address purchase orders print.
   legalName!: string | null;
   officeAddress!: string | null;

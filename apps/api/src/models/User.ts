@@ -1,5 +1,5 @@
 import { Model } from 'objection';
-import type { Role, UserStatus, LengthUnits } from '@kerfmark/contracts';
+import type { DisplayLocale, LengthUnits, Role, UserStatus } from '@kerfmark/contracts';
 import { Organisation } from './Organisation';
 
 export class User extends Model {
@@ -17,6 +17,8 @@ export class User extends Model {
   preferences!: Record<string, boolean>;
   /** Inches or millimetres, or null for the organisation's default (migration 20261204000600). */
   lengthUnits!: LengthUnits | null;
+  /** en-US or en-GB, or null for the organisation's default (migration 20261204000700). */
+  locale!: DisplayLocale | null;
   organisation?: Organisation;
 
   static override get jsonAttributes() {

@@ -45,6 +45,17 @@ describe('length units', () => {
     expect(bad.status).toBe(400);
   });
 
+  it('keeps a locale of the user’s own beside the organisation’s', async () => {
+    const w = await createWorld();
+    const me = async () => (await request(app).get('/api/me').set(bearer(w.tokens.buyer))).body;
+    expect((await me()).locale).toBe('en-US');
+    const chosen = await request(app).put('/api/me/preferences').set(bearer(w.tokens.buyer)).send({ locale: 'en-GB' });
+    expect(chosen.body).toMatchObject({ locale: 'en-GB', organisationLocale: 'en-US', lengthUnits: null });
+    expect((await me()).locale).toBe('en-GB');
+    const bad = await request(app).put('/api/me/preferences').set(bearer(w.tokens.buyer)).send({ locale: 'fr-FR' });
+    expect(bad.status).toBe(400);
+  });
+
   it('follows an organisation whose default is millimetres (those outside the US, from the migration)', async () => {
     const w = await createWorld();
     await knex('organisations').where({ id: w.printer.id }).update({ country: 'DE', lengthUnits: 'mm' });

@@ -44,7 +44,7 @@ export function createAuthService({ config, knex }: ServiceDeps, limiter: LoginL
 
     async me(user: AuthUser): Promise<Me> {
       const organisation = await Organisation.query().findById(user.organisationId).throwIfNotFound();
-      const own = await User.query().findById(user.id).select('lengthUnits');
+      const own = await User.query().findById(user.id).select('lengthUnits', 'locale');
       return {
         id: user.id,
         email: user.email,
@@ -57,6 +57,7 @@ export function createAuthService({ config, knex }: ServiceDeps, limiter: LoginL
           timeZone: organisation.timeZone,
         },
         lengthUnits: own?.lengthUnits ?? organisation.lengthUnits,
+        locale: own?.locale ?? organisation.locale,
       };
     },
   };

@@ -1,4 +1,10 @@
-import { notificationKinds, type LengthUnits, type NotificationKind, type PreferencesDto } from '@kerfmark/contracts';
+import {
+  notificationKinds,
+  type DisplayLocale,
+  type LengthUnits,
+  type NotificationKind,
+  type PreferencesDto,
+} from '@kerfmark/contracts';
 import type { AuthUser } from '../auth/passport';
 import { Organisation, User } from '../models';
 
@@ -8,28 +14,35 @@ export function emailPreferencesOf(stored: Record<string, boolean> | null | unde
 }
 
 async function preferencesDto(actor: AuthUser): Promise<PreferencesDto> {
-  const user = await User.query().findById(actor.id).select('preferences', 'lengthUnits').throwIfNotFound();
+  const user = await User.query().findById(actor.id).select('preferences', 'lengthUnits', 'locale').throwIfNotFound();
   const organisation = await Organisation.query()
     .findById(actor.organisationId)
-    .select('lengthUnits')
+    .select('lengthUnits', 'locale')
     .throwIfNotFound();
   return {
     email: emailPreferencesOf(user.preferences),
     lengthUnits: user.lengthUnits,
     organisationLengthUnits: organisation.lengthUnits,
+    locale: user.locale,
+    organisationLocale: organisation.locale,
   };
 }
 
 export const readPreferences = preferencesDto;
 
-/** Changes only what is named: the e-mail kinds given, and the length units when given. */
+/** Changes only what is named: the e-mail kinds given, the length units and the locale when given. */
 export async function updatePreferences(
   actor: AuthUser,
-  change: { email: Partial<Record<NotificationKind, boolean>>; lengthUnits?: LengthUnits | null },
+  change: {
+    email?: Partial<Record<NotificationKind, boolean>>;
+    lengthUnits?: LengthUnits | null;
+    locale?: DisplayLocale | null;
+  },
 ): Promise<PreferencesDto> {
   const user = await User.query().findById(actor.id).select('preferences');
-  const patch: Partial<User> = { preferences: { ...(user?.preferences ?? {}), ...change.email } };
+  const patch: Partial<User> = { preferences: { ...(user?.preferences ?? {}), ...(change.email ?? {}) } };
   if (change.lengthUnits !== undefined) patch.lengthUnits = change.lengthUnits;
+  if (change.locale !== undefined) patch.locale = change.locale;
   await User.query().patch(patch).findById(actor.id);
   return preferencesDto(actor);
 }

@@ -2,6 +2,7 @@ import type { Complexity } from '@kerfmark/dieline';
 import type {
   DieShopChoices,
   LengthUnits,
+  DisplayLocale,
   CalibrationDto,
   EstimateDto,
   RateCardDto,
@@ -172,9 +173,9 @@ export const meApi = {
   preferences: () => api<PreferencesDto>('/me/preferences'),
   savePreferences: (email: Partial<Record<NotificationKind, boolean>>) =>
     api<PreferencesDto>('/me/preferences', { method: 'PUT', body: { email } }),
-  /** Inches or millimetres for this user; null for the organisation's default. */
-  saveLengthUnits: (lengthUnits: LengthUnits | null) =>
-    api<PreferencesDto>('/me/preferences', { method: 'PUT', body: { lengthUnits } }),
+  /** Inches or millimetres, or the locale, for this user; null for the organisation's default. */
+  saveDisplay: (change: { lengthUnits?: LengthUnits | null; locale?: DisplayLocale | null }) =>
+    api<PreferencesDto>('/me/preferences', { method: 'PUT', body: change }),
 };
 
 export interface PriceFitView {

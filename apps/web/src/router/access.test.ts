@@ -9,6 +9,7 @@ const me = (kind: Me['organisation']['kind'], role: Me['role']): Me => ({
   role,
   organisation: { id: 1, name: 'Org', kind, timeZone: 'UTC' },
   lengthUnits: 'in',
+  locale: 'en-US',
 });
 
 describe('canAccess', () => {

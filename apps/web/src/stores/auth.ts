@@ -1,7 +1,7 @@
-import type { LengthUnits, LoginInput, LoginResult, Me } from '@kerfmark/contracts';
+import type { DisplayLocale, LengthUnits, LoginInput, LoginResult, Me } from '@kerfmark/contracts';
 import { defineStore } from 'pinia';
 import { computed, ref, watch } from 'vue';
-import { lengthUnits } from '../format';
+import { displayLocale, lengthUnits } from '../format';
 import { configureClient } from '../api/client';
 import { authApi } from '../api/endpoints';
 
@@ -32,14 +32,18 @@ export const useAuthStore = defineStore('auth', () => {
   /** The organisation's time zone: every date and deadline is shown in it. */
   const timeZone = computed(() => me.value?.organisation.timeZone ?? 'UTC');
   // Every length the app shows follows the user's units (format.ts).
+  // …and every date and number its locale.
   watch(
-    () => me.value?.lengthUnits,
-    (units) => (lengthUnits.value = units ?? 'in'),
+    () => [me.value?.lengthUnits, me.value?.locale] as const,
+    ([units, locale]) => {
+      lengthUnits.value = units ?? 'in';
+      displayLocale.value = locale ?? 'en-US';
+    },
     { immediate: true },
   );
-  /** After the user changes the units in the preferences. */
-  function setLengthUnits(units: LengthUnits) {
-    if (me.value) me.value = { ...me.value, lengthUnits: units };
+  /** After the user changes the units or the locale in the preferences. */
+  function setDisplay(change: { lengthUnits?: LengthUnits; locale?: DisplayLocale }) {
+    if (me.value) me.value = { ...me.value, ...change };
   }
 
   function keep(result: LoginResult) {
@@ -99,6 +103,6 @@ export const useAuthStore = defineStore('auth', () => {
     adopt,
     loadMe,
     signOut,
-    setLengthUnits,
+    setDisplay,
   };
 });
