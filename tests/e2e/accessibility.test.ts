@@ -1,12 +1,12 @@
 import { readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import type { Me } from '@kerfmark/contracts';
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { describe, expect, it } from 'vitest';
 import { canAccess } from '../../apps/web/src/router/access';
 import { appRoutes } from '../../apps/web/src/router/appRoutes';
 import { publicRoutes } from '../../apps/web/src/router/publicRoutes';
-import { baseUrl, launch, pageAs } from './browser';
+import { baseUrl, browserForFile, pageAs } from './browser';
 
 // axe-core, Deque's accessibility engine, run in the page with the WCAG 2.0 and 2.1 A and AA rules.
 const axeSource = readFileSync(createRequire(import.meta.url).resolve('axe-core/axe.min.js'), 'utf8');
@@ -47,24 +47,23 @@ async function settled(p: Page) {
   await p.waitForTimeout(300); // transitions
 }
 
+/** What an API route answers the signed-in user, with the page's own session. */
+async function apiGet<T>(p: Page, path: string): Promise<T> {
+  return p.evaluate(async (url) => {
+    const { token } = JSON.parse(localStorage.getItem('kerfmark.session') ?? '{}') as { token?: string };
+    return (await fetch(url, { headers: { Authorization: `Bearer ${token}` } })).json();
+  }, path);
+}
+
 /** The id of the first item an API list gives the signed-in user. */
 async function firstId(p: Page, path: string): Promise<number> {
-  const id = await p.evaluate(async (url) => {
-    const { token } = JSON.parse(localStorage.getItem('kerfmark.session') ?? '{}') as { token?: string };
-    const res = await fetch(url, { headers: { Authorization: `Bearer ${token}` } });
-    const body = (await res.json()) as { items?: Array<{ id: number }> } | Array<{ id: number }>;
-    return (Array.isArray(body) ? body : (body.items ?? []))[0]?.id ?? null;
-  }, path);
+  const body = await apiGet<{ items?: Array<{ id: number }> } | Array<{ id: number }>>(p, path);
+  const id = (Array.isArray(body) ? body : (body.items ?? []))[0]?.id;
   if (!id) throw new Error(`${path} gave no item to visit`);
   return id;
 }
 
-async function meOf(p: Page): Promise<Me> {
-  return p.evaluate(async () => {
-    const { token } = JSON.parse(localStorage.getItem('kerfmark.session') ?? '{}') as { token?: string };
-    return (await fetch('/api/me', { headers: { Authorization: `Bearer ${token}` } })).json();
-  });
-}
+const meOf = (p: Page) => apiGet<Me>(p, '/api/me');
 
 /**
  * How to reach each route as a signed-in user, and the dialogs it opens; every route of the app
@@ -109,13 +108,7 @@ const people = [
   'ken@brightline.example',
 ];
 
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launch();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = browserForFile();
 
 const report = (where: string, found: Finding[]) =>
   found.map((f) => `${where}: ${f.id} (${f.impact}) ${f.help} — ${f.targets.slice(0, 4).join(' | ')}`);
@@ -130,7 +123,7 @@ describe('accessibility: WCAG 2.1 AA by axe-core', () => {
 
   for (const width of WIDTHS) {
     it(`finds no serious or critical violation on the public pages at ${width} px`, async () => {
-      const context = await browser.newContext({ viewport: { width, height: 900 } });
+      const context = await browser().newContext({ viewport: { width, height: 900 } });
       const p = await context.newPage();
       const found: string[] = [];
       for (const [name, path] of Object.entries(publicVisits)) {
@@ -144,7 +137,7 @@ describe('accessibility: WCAG 2.1 AA by axe-core', () => {
 
     for (const email of people) {
       it(`finds no serious or critical violation on any page ${email} opens at ${width} px`, async () => {
-        const p = await pageAs(browser, email, width);
+        const p = await pageAs(browser(), email, width);
         const me = await meOf(p);
         const found: string[] = [];
         for (const route of appRoutes) {

@@ -1,20 +1,14 @@
 import { readFile } from 'node:fs/promises';
 import { createRequire } from 'node:module';
 import { dirname, join } from 'node:path';
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { baseUrl, launch, pageAs, screenshot } from './browser';
+import type { Page } from 'playwright-core';
+import { describe, expect, it } from 'vitest';
+import { baseUrl, browserForFile, pageAs, screenshot } from './browser';
 import { postRequest } from './flows';
 
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launch();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = browserForFile();
 
-const as = (email: string, width?: number) => pageAs(browser, email, width);
+const as = (email: string, width?: number) => pageAs(browser(), email, width);
 
 /** Fills the bid form's amounts (die, ejection rubber, shipping, in that order) and sends it. */
 async function bid(p: Page, amounts: string[], leadDays: number) {

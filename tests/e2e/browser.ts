@@ -2,6 +2,7 @@ import { mkdirSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { chromium, type Browser, type Page } from 'playwright-core';
+import { afterAll, beforeAll } from 'vitest';
 
 export const baseUrl = process.env.APP_URL ?? 'http://127.0.0.1:4200';
 export const mailUrl = process.env.MAIL_CATCHER_URL ?? 'http://127.0.0.1:4280';
@@ -26,6 +27,21 @@ export async function launch(): Promise<Browser> {
       '--disable-sync',
     ],
   });
+}
+
+/** One Chromium for a test file: launched before its tests and closed after them; call it inside a test. */
+export function browserForFile(): () => Browser {
+  let browser: Browser | undefined;
+  beforeAll(async () => {
+    browser = await launch();
+  });
+  afterAll(async () => {
+    await browser?.close();
+  });
+  return () => {
+    if (!browser) throw new Error('Chromium is not running: call the browser inside a test');
+    return browser;
+  };
 }
 
 export async function screenshot(page: Page, name: string): Promise<void> {

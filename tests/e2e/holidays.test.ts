@@ -1,17 +1,11 @@
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { baseUrl, launch, pageAs, screenshot } from './browser';
+import type { Page } from 'playwright-core';
+import { describe, expect, it } from 'vitest';
+import { baseUrl, browserForFile, pageAs, screenshot } from './browser';
 import { pickDate, postRequest } from './flows';
 
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launch();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = browserForFile();
 
-const as = (email: string, width?: number) => pageAs(browser, email, width);
+const as = (email: string, width?: number) => pageAs(browser(), email, width);
 
 /** Picks an option of a searchable ant-design select by typing its label. */
 async function choose(p: Page, testId: string, label: string) {

@@ -1,18 +1,11 @@
-import type { Browser } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { baseUrl, launch, screenshot, signIn } from './browser';
+import { describe, expect, it } from 'vitest';
+import { baseUrl, browserForFile, screenshot, signIn } from './browser';
 
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launch();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = browserForFile();
 
 describe('before ordering, in the browser', () => {
   it('shows the die library with a die near the end of its life, and logs a run', async () => {
-    const p = await (await browser.newContext({ viewport: { width: 1366, height: 900 } })).newPage();
+    const p = await (await browser().newContext({ viewport: { width: 1366, height: 900 } })).newPage();
     await signIn(p, 'maya@larkspur.example');
     await p.waitForURL(`${baseUrl}/`);
     await p.locator('[data-test=nav] >> text=Die library').click();
@@ -27,7 +20,7 @@ describe('before ordering, in the browser', () => {
   });
 
   it('advises scoring for heavy stock folded across the grain, with the usual creasing', async () => {
-    const p = await (await browser.newContext({ viewport: { width: 1366, height: 900 } })).newPage();
+    const p = await (await browser().newContext({ viewport: { width: 1366, height: 900 } })).newPage();
     await signIn(p, 'maya@larkspur.example');
     await p.waitForURL(`${baseUrl}/`);
     await p.goto(`${baseUrl}/requests/new`);

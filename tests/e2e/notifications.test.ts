@@ -1,18 +1,11 @@
-import type { Browser } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { baseUrl, launch, screenshot, signIn } from './browser';
+import { describe, expect, it } from 'vitest';
+import { baseUrl, browserForFile, screenshot, signIn } from './browser';
 
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launch();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = browserForFile();
 
 describe('deadlines and notifications in the browser', () => {
   it('shows the buyer what is at risk and what is coming up', async () => {
-    const p = await (await browser.newContext({ viewport: { width: 1366, height: 900 } })).newPage();
+    const p = await (await browser().newContext({ viewport: { width: 1366, height: 900 } })).newPage();
     await signIn(p, 'maya@larkspur.example');
     await p.waitForURL(`${baseUrl}/`);
     // The demo label sheet is needed in 6 days: 5 working days of lead time and the run do not fit.
@@ -22,7 +15,7 @@ describe('deadlines and notifications in the browser', () => {
   });
 
   it('lets a user choose which notices also come by e-mail', async () => {
-    const p = await (await browser.newContext({ viewport: { width: 1366, height: 900 } })).newPage();
+    const p = await (await browser().newContext({ viewport: { width: 1366, height: 900 } })).newPage();
     await signIn(p, 'lena@cedarbend.example');
     await p.waitForURL(`${baseUrl}/`);
     await p.goto(`${baseUrl}/notifications`);

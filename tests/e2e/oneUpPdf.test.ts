@@ -2,20 +2,13 @@ import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { pdfFile, PT, separation } from '@kerfmark/dieline/testing';
-import type { Browser } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { baseUrl, launch, pageAs, screenshot } from './browser';
+import { describe, expect, it } from 'vitest';
+import { baseUrl, browserForFile, pageAs, screenshot } from './browser';
 import { postRequest } from './flows';
 
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launch();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = browserForFile();
 
-const as = (email: string, width?: number) => pageAs(browser, email, width);
+const as = (email: string, width?: number) => pageAs(browser(), email, width);
 
 // One up as an artwork program exports it: a 4 × 3 in carton blank outline on the "Cut"
 // separation and a 4 in crease across it on "Crease" (72 pt = 1 in), plus a filled panel of

@@ -1,21 +1,14 @@
 import { writeFileSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
-import type { Browser } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { baseUrl, launch, screenshot, signIn } from './browser';
+import { describe, expect, it } from 'vitest';
+import { baseUrl, browserForFile, screenshot, signIn } from './browser';
 
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launch();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = browserForFile();
 
 describe('price history in the browser', () => {
   it('shows purchasing the fit, the charts and the records, and imports a CSV', async () => {
-    const p = await (await browser.newContext({ viewport: { width: 1440, height: 900 } })).newPage();
+    const p = await (await browser().newContext({ viewport: { width: 1440, height: 900 } })).newPage();
     await signIn(p, 'daniel@larkspur.example');
     await p.waitForURL(`${baseUrl}/`);
     await p.locator('[data-test=nav] >> text=Price history').click();

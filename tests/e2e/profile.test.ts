@@ -1,16 +1,9 @@
-import type { Browser } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { baseUrl, launch, pageAs, screenshot } from './browser';
+import { describe, expect, it } from 'vitest';
+import { baseUrl, browserForFile, pageAs, screenshot } from './browser';
 
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launch();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = browserForFile();
 
-const as = (email: string, width?: number) => pageAs(browser, email, width);
+const as = (email: string, width?: number) => pageAs(browser(), email, width);
 
 describe('the organisation profile', () => {
   it('lets the printer’s admin change the payment terms and keeps them', async () => {

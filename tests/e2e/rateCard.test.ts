@@ -1,17 +1,10 @@
-import type { Browser } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { baseUrl, launch, pageAs, screenshot } from './browser';
+import { describe, expect, it } from 'vitest';
+import { baseUrl, browserForFile, pageAs, screenshot } from './browser';
 import { postRequest } from './flows';
 
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launch();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = browserForFile();
 
-const as = (email: string, width?: number) => pageAs(browser, email, width);
+const as = (email: string, width?: number) => pageAs(browser(), email, width);
 
 describe('the die shop’s rate card', () => {
   const title = `Sleeve priced from the card ${Date.now() % 100000}`;

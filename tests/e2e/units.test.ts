@@ -1,18 +1,11 @@
-import type { Browser } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { baseUrl, launch, pageAs } from './browser';
+import { describe, expect, it } from 'vitest';
+import { baseUrl, browserForFile, pageAs } from './browser';
 
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launch();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = browserForFile();
 
 describe('inches or millimetres, and the locale', () => {
   it('shows a user every length in the units they choose, and keeps the choice', async () => {
-    const p = await pageAs(browser, 'lena@cedarbend.example', 390);
+    const p = await pageAs(browser(), 'lena@cedarbend.example', 390);
     const choose = async (units: 'in' | 'mm') => {
       await p.locator('[data-test=user-menu]').click();
       await p.locator(`[data-test=units-${units}]`).click();
@@ -35,7 +28,7 @@ describe('inches or millimetres, and the locale', () => {
   });
 
   it('writes dates day first for a user who chooses British English', async () => {
-    const p = await pageAs(browser, 'oscar@cedarbend.example');
+    const p = await pageAs(browser(), 'oscar@cedarbend.example');
     await p.goto(`${baseUrl}/open-requests?canMake=false`);
     const board = p.locator('main .ant-table-tbody');
     // US English puts the month first: "Dec 6, 2026, 13:29 CST".
