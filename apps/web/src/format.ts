@@ -25,30 +25,28 @@ export const millimetres = (inchValue: number | null | undefined, digits = 0) =>
     ? '—'
     : `${inchesToMm(inchValue).toLocaleString(displayLocale.value, { maximumFractionDigits: digits, minimumFractionDigits: digits })} mm`;
 
-/**
- * A length in the user's units: inches to `digits` places, or millimetres to one place fewer
- * (0.01 in is about a quarter of a millimetre).
- */
+/** A length in the given units: inches to `digits` places, millimetres to one fewer (0.01 in ≈ 0.25 mm). */
+const inUnits = (units: LengthUnits, inchValue: number | null | undefined, digits: number) =>
+  units === 'mm' ? millimetres(inchValue, Math.max(0, digits - 1)) : inches(inchValue, digits);
+const otherUnits = (): LengthUnits => (lengthUnits.value === 'mm' ? 'in' : 'mm');
+const sizeIn = (units: LengthUnits, w: number | null | undefined, h: number | null | undefined, digits: number) =>
+  w && h ? `${inUnits(units, w, digits).replace(` ${units}`, '')} × ${inUnits(units, h, digits)}` : '—';
+
+/** A length in the user's units: "26.79 in" or "680.4 mm". */
 export const length = (inchValue: number | null | undefined, digits = 2) =>
-  lengthUnits.value === 'mm' ? millimetres(inchValue, Math.max(0, digits - 1)) : inches(inchValue, digits);
+  inUnits(lengthUnits.value, inchValue, digits);
 
-/** The same length in the other unit, for beside it: "(680 mm)" or "(26.77 in)". */
+/** The same length in the other unit, for beside it: "680.4 mm" or "26.79 in". */
 export const otherLength = (inchValue: number | null | undefined, digits = 2) =>
-  lengthUnits.value === 'mm' ? inches(inchValue, digits) : millimetres(inchValue, Math.max(0, digits - 1));
+  inUnits(otherUnits(), inchValue, digits);
 
-/** A width × height in the user's units: "22.00 × 30.00 in" or "559 × 762 mm". */
-export const size = (w: number | null | undefined, h: number | null | undefined, digits = 2) => {
-  if (!w || !h) return '—';
-  const unit = lengthUnits.value === 'mm' ? ' mm' : ' in';
-  return `${length(w, digits).replace(unit, '')} × ${length(h, digits)}`;
-};
+/** A width × height in the user's units: "22.00 × 30.00 in" or "558.8 × 762.0 mm". */
+export const size = (w: number | null | undefined, h: number | null | undefined, digits = 2) =>
+  sizeIn(lengthUnits.value, w, h, digits);
 
 /** The same size in the other unit. */
-export const otherSize = (w: number | null | undefined, h: number | null | undefined, digits = 2) => {
-  if (!w || !h) return '—';
-  const unit = lengthUnits.value === 'mm' ? ' in' : ' mm';
-  return `${otherLength(w, digits).replace(unit, '')} × ${otherLength(h, digits)}`;
-};
+export const otherSize = (w: number | null | undefined, h: number | null | undefined, digits = 2) =>
+  sizeIn(otherUnits(), w, h, digits);
 
 /** A calendar date (YYYY-MM-DD) for people: "Fri, Dec 18, 2026". */
 export const calendarDate = (date: string | null | undefined) =>
