@@ -8,6 +8,7 @@ import {
   COMPLEXITY_RULE,
   DEFAULT_LIMITS,
   DielineError,
+  inchesToMm,
   type DielineAnalysis,
   type LayerMap,
   RULE_TYPES,
@@ -18,7 +19,6 @@ import {
 
 const USAGE =
   'usage: dieline FILE [--json] [--units in|mm] [--margin IN] [--map LAYER=TYPE]... [--drawing-units in|mm|cm|m|ft|px] [--press WxL] [--page N]';
-const MM_PER_IN = 25.4;
 
 /** The units the table is printed in; the JSON is in inches whatever this says. */
 type ShownUnits = 'in' | 'mm';
@@ -93,11 +93,11 @@ function table(a: DielineAnalysis, file: string, shown: ShownUnits): string {
   // The chosen unit first, the other beside it.
   const both = (inches: number, inDigits: number, mmDigits: number) =>
     shown === 'mm'
-      ? `${f(inches * MM_PER_IN, mmDigits)} mm   ${f(inches, inDigits)} in`
-      : `${f(inches, inDigits)} in   ${f(inches * MM_PER_IN, mmDigits)} mm`;
+      ? `${f(inchesToMm(inches), mmDigits)} mm   ${f(inches, inDigits)} in`
+      : `${f(inches, inDigits)} in   ${f(inchesToMm(inches), mmDigits)} mm`;
   const size = (box: { width: number; height: number }) =>
     shown === 'mm'
-      ? `${f(box.width * MM_PER_IN, 1)} × ${f(box.height * MM_PER_IN, 1)} mm`
+      ? `${f(inchesToMm(box.width), 1)} × ${f(inchesToMm(box.height), 1)} mm`
       : `${f(box.width)} × ${f(box.height)} in`;
   const rows: Array<[string, string]> = [
     ['file', file],
@@ -134,8 +134,8 @@ function table(a: DielineAnalysis, file: string, shown: ShownUnits): string {
 /** The metrics in inches as the contract has them, with the rules box and the board in millimetres beside them. */
 function withMillimetres(m: DielineAnalysis['metrics']) {
   const mm = (box: { width: number; height: number }) => ({
-    width: box.width * MM_PER_IN,
-    height: box.height * MM_PER_IN,
+    width: inchesToMm(box.width),
+    height: inchesToMm(box.height),
   });
   const out: Record<string, unknown> = {};
   for (const [key, value] of Object.entries(m)) {
