@@ -6,7 +6,7 @@ import {
   type LengthUnits,
   type RequestStatus,
 } from '@kerfmark/contracts';
-import { inchesToMm } from '@kerfmark/dieline';
+import { formatLength, formatSize, inchesOf, inchesToMm } from '@kerfmark/dieline';
 import { ref } from 'vue';
 
 /** The signed-in user's length units (the auth store sets it from /me); lengths arrive in inches. */
@@ -14,39 +14,45 @@ export const lengthUnits = ref<LengthUnits>('in');
 /** The signed-in user's locale for dates and numbers (the auth store sets it from /me). */
 export const displayLocale = ref<DisplayLocale>('en-US');
 
-/** Small display helpers shared by the views. Lengths arrive in inches. */
-export const inches = (value: number | null | undefined, digits = 2) =>
-  value === null || value === undefined
-    ? '—'
-    : `${value.toLocaleString(displayLocale.value, { maximumFractionDigits: digits, minimumFractionDigits: digits })} in`;
-
-export const millimetres = (inchValue: number | null | undefined, digits = 0) =>
-  inchValue === null || inchValue === undefined
-    ? '—'
-    : `${inchesToMm(inchValue).toLocaleString(displayLocale.value, { maximumFractionDigits: digits, minimumFractionDigits: digits })} mm`;
-
-/** A length in the given units: inches to `digits` places, millimetres to one fewer (0.01 in ≈ 0.25 mm). */
-const inUnits = (units: LengthUnits, inchValue: number | null | undefined, digits: number) =>
-  units === 'mm' ? millimetres(inchValue, Math.max(0, digits - 1)) : inches(inchValue, digits);
+/** The signed-in user's way of reading lengths, for the shared formatters. */
+const style = (units: LengthUnits = lengthUnits.value) => ({ units, locale: displayLocale.value });
 const otherUnits = (): LengthUnits => (lengthUnits.value === 'mm' ? 'in' : 'mm');
-const sizeIn = (units: LengthUnits, w: number | null | undefined, h: number | null | undefined, digits: number) =>
-  w && h ? `${inUnits(units, w, digits).replace(` ${units}`, '')} × ${inUnits(units, h, digits)}` : '—';
+
+/** Small display helpers shared by the views. Lengths arrive in inches. */
+export const inches = (value: number | null | undefined, digits = 2) => formatLength(value, style('in'), digits);
+
+/** Millimetres to `digits` places (not one fewer, as `length` does). */
+export const millimetres = (inchValue: number | null | undefined, digits = 0) =>
+  formatLength(inchValue, style('mm'), digits + 1);
 
 /** A length in the user's units: "26.79 in" or "680.4 mm". */
-export const length = (inchValue: number | null | undefined, digits = 2) =>
-  inUnits(lengthUnits.value, inchValue, digits);
+export const length = (inchValue: number | null | undefined, digits = 2) => formatLength(inchValue, style(), digits);
 
 /** The same length in the other unit, for beside it: "680.4 mm" or "26.79 in". */
 export const otherLength = (inchValue: number | null | undefined, digits = 2) =>
-  inUnits(otherUnits(), inchValue, digits);
+  formatLength(inchValue, style(otherUnits()), digits);
 
 /** A width × height in the user's units: "22.00 × 30.00 in" or "558.8 × 762.0 mm". */
 export const size = (w: number | null | undefined, h: number | null | undefined, digits = 2) =>
-  sizeIn(lengthUnits.value, w, h, digits);
+  formatSize(w, h, style(), digits);
 
 /** The same size in the other unit. */
 export const otherSize = (w: number | null | undefined, h: number | null | undefined, digits = 2) =>
-  sizeIn(otherUnits(), w, h, digits);
+  formatSize(w, h, style(otherUnits()), digits);
+
+/** A length in the user's units with the other beside: "0.937 in (23.80 mm)". */
+export const bothLengths = (inchValue: number, digits = 2) =>
+  `${length(inchValue, digits)} (${otherLength(inchValue, digits)})`;
+
+/** A size in the user's units with the other beside: "22.00 × 30.00 in (558.8 × 762.0 mm)". */
+export const bothSizes = (w: number, h: number, digits = 2) => `${size(w, h, digits)} (${otherSize(w, h, digits)})`;
+
+/** What a price of rule is quoted per: an inch, or a metre for metric readers. */
+export const perLengthName = () => (lengthUnits.value === 'mm' ? 'metre' : 'inch');
+
+/** A price per inch as a price per `perLengthName()`: per metre is per inch × 1000 / 25.4. */
+export const perLengthCents = (centsPerInch: number) =>
+  lengthUnits.value === 'mm' ? centsPerInch * inchesOf(1000, 'mm') : centsPerInch;
 
 /** A calendar date (YYYY-MM-DD) for people: "Fri, Dec 18, 2026". */
 export const calendarDate = (date: string | null | undefined) =>

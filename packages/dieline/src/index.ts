@@ -1,5 +1,6 @@
 // Dieline parsing and geometry metrics: pure, no I/O.
 export * from './units';
+export * from './lengthText';
 export { analyseDieline, analyseDielineAsync } from './analyse';
 export { MAX_UPS, PIECE_GRAINS, type LayoutReport, type PieceGrain, type UpsLayout } from './layout/stepAndRepeat';
 export type { AnalyseOptions, DielineAnalysis, DielineMetrics } from './analyse';
