@@ -1,11 +1,19 @@
-import type { NotificationKind } from '@kerfmark/contracts';
+import type { DisplayLocale, LengthUnits, NotificationKind } from '@kerfmark/contracts';
 import type { Knex } from 'knex';
 import { emailLayout } from './emailLayout';
+
+/** How one reader reads a notice: lengths, dates and numbers, and the clock, each as they chose. */
+export interface Reader {
+  lengthUnits: LengthUnits;
+  locale: DisplayLocale;
+  timeZone: string;
+}
 
 export interface Notice {
   kind: NotificationKind;
   title: string;
-  body: string;
+  /** The text, or a text written for each reader (lengths in their units, times in their zone). */
+  body: string | ((reader: Reader) => string);
   /** A path in the app, e.g. /requests/12; e-mails carry it as a full link. */
   link: string;
 }
@@ -27,32 +35,48 @@ export async function notifyOrganisation(
     notice: Notice;
   },
 ): Promise<number[]> {
-  const query = trx('users')
-    .where('organisation_id', opts.organisationId)
-    .where('status', 'active')
-    .select('id', 'email', 'name', 'preferences');
-  if (opts.roles) query.whereIn('role', [...opts.roles]);
-  if (opts.onlyUserIds) query.whereIn('id', [...opts.onlyUserIds]);
+  const query = trx('users as u')
+    .join('organisations as o', 'o.id', 'u.organisation_id')
+    .where('u.organisation_id', opts.organisationId)
+    .where('u.status', 'active')
+    .select(
+      'u.id',
+      'u.email',
+      'u.name',
+      'u.preferences',
+      trx.raw('coalesce(u.length_units, o.length_units) as length_units'),
+      trx.raw('coalesce(u.locale, o.locale) as locale'),
+      'o.time_zone',
+    );
+  if (opts.roles) query.whereIn('u.role', [...opts.roles]);
+  if (opts.onlyUserIds) query.whereIn('u.id', [...opts.onlyUserIds]);
   const users = (await query) as Array<{
     id: number;
     email: string;
     name: string;
     preferences: Record<string, boolean> | null;
+    length_units: LengthUnits;
+    locale: DisplayLocale;
+    time_zone: string;
   }>;
   const outbox: number[] = [];
   for (const user of users) {
+    const body =
+      typeof opts.notice.body === 'string'
+        ? opts.notice.body
+        : opts.notice.body({ lengthUnits: user.length_units, locale: user.locale, timeZone: user.time_zone });
     await trx('notifications').insert({
       user_id: user.id,
       kind: opts.notice.kind,
       title: opts.notice.title,
-      body: opts.notice.body,
+      body,
       link: opts.notice.link,
     });
     if (user.preferences?.[opts.notice.kind] === false) continue;
     const email = emailLayout({
       subject: opts.notice.title,
       greeting: `Hello ${user.name},`,
-      paragraphs: [opts.notice.body],
+      paragraphs: [body],
       action: { label: 'Open in Kerfmark', url: `${opts.appUrl}${opts.notice.link}` },
       footer:
         'You receive this as a member of your organisation on Kerfmark. Choose which e-mails you get under Notifications.',

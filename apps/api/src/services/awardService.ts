@@ -1,3 +1,5 @@
+import { formatCalendarDate } from '@kerfmark/contracts';
+import { dieSummary, type DieFigures } from '@kerfmark/notices';
 import { awardReason, formatMoney } from '@kerfmark/pricing';
 import type { Knex } from 'knex';
 import { assertMay } from '../access';
@@ -83,15 +85,27 @@ export async function tellOutcome(
   poNumber: string,
 ): Promise<void> {
   const link = `/requests/${request.id}`;
+  const die = (await trx('dieRequests')
+    .where({ id: request.id })
+    .first(
+      'measuredRuleIn as ruleIn',
+      'measuredBoardWidthIn as boardWidthIn',
+      'measuredBoardHeightIn as boardHeightIn',
+    )) as DieFigures;
   await tellBidders(trx, deps, request.id, (shopId) =>
     shopId === bid.shopId
       ? {
           kind: 'award_won',
           title: `Awarded to you: ${request.title} (${poNumber})`,
-          body:
-            `Your bid of ${formatMoney({ cents: bid.totalCents, currency: bid.currency })} on "${request.title}" ` +
-            `was awarded. Purchase order ${poNumber} is attached to the request; the promised ship date is ` +
-            `${bid.promisedShipDate}.`,
+          body: (reader) =>
+            [
+              `Your bid of ${formatMoney({ cents: bid.totalCents, currency: bid.currency })} on "${request.title}" ` +
+                `was awarded. Purchase order ${poNumber} is attached to the request; the promised ship date is ` +
+                `${formatCalendarDate(bid.promisedShipDate, reader.locale)}.`,
+              dieSummary(die, reader),
+            ]
+              .filter(Boolean)
+              .join(' '),
           link,
         }
       : {

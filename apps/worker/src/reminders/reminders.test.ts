@@ -102,6 +102,28 @@ describe('reminders against PostgreSQL and Redis', () => {
     expect(await outboxTo(r.buyer.email)).toHaveLength(0);
   });
 
+  it('writes each reader their own e-mail: their units, their locale and their zone', async () => {
+    const deadline = new Date('2027-01-15T23:00:00Z');
+    const r = await openRequest(deadline);
+    // A measured die: 412.5 in of rule on a 22 × 30 in board.
+    await knex('die_requests')
+      .where({ id: r.id })
+      .update({ measured_rule_in: 412.5, measured_board_width_in: 22, measured_board_height_in: 30 });
+    const metric = await user(r.shop, 'estimator');
+    await knex('users').where({ id: metric.id }).update({ length_units: 'mm', locale: 'en-GB' });
+    const key = await keyOf(r.id, 'bid_deadline_24h');
+    await sendReminder(knex, { ...APP, now: new Date(deadline.getTime() - 23 * HOUR) }, r.id, key);
+    const [imperialMail] = await outboxTo(r.estimator.email);
+    const [metricMail] = await outboxTo(metric.email);
+    // 412.5 × 25.4 = 10,477.5 mm; 22 × 25.4 = 558.8 and 30 × 25.4 = 762 (1 in = 25.4 mm exactly).
+    expect(imperialMail.text_body).toContain('The die has 412.5 in of rule on a 22.00 × 30.00 in board.');
+    expect(metricMail.text_body).toContain('The die has 10,478 mm of rule on a 558.8 × 762.0 mm board.');
+    // en-GB writes the day before the month, and names a US zone by its offset (CLDR has no
+    // British short name for it), as Intl does.
+    expect(imperialMail.text_body).toContain('Jan 15, 2027, 18:00 EST');
+    expect(metricMail.text_body).toContain('15 Jan 2027, 18:00 GMT-5');
+  });
+
   it('tells purchasing when the best bid is about to lapse, and the awarded shop and buyer before the need-by date', async () => {
     const r = await openRequest(new Date('2026-12-01T23:00:00Z'));
     await knex('die_requests')

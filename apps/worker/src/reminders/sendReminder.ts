@@ -1,12 +1,12 @@
-import { formatInZone } from '@kerfmark/contracts';
-import { notifyOrganisation } from '@kerfmark/notices';
+import { formatCalendarDate, formatInZone } from '@kerfmark/contracts';
+import { dieSummary, notifyOrganisation, type DieFigures, type Notice, type Reader } from '@kerfmark/notices';
 import type { Knex } from 'knex';
 import { loadReminderState } from './loadReminderState';
 import { isDue, planReminders, type PlannedReminder } from './planReminders';
 
 export type ReminderResult = 'sent' | 'already-sent' | 'no-longer-applies' | 'not-due';
 
-interface RequestRow {
+interface RequestRow extends DieFigures {
   id: number;
   title: string;
   organisation_id: number;
@@ -65,6 +65,9 @@ export async function sendReminder(
         'r.visibility',
         'r.bid_deadline',
         'r.need_by_date',
+        'r.measured_rule_in as ruleIn',
+        'r.measured_board_width_in as boardWidthIn',
+        'r.measured_board_height_in as boardHeightIn',
         'o.time_zone',
       )) as RequestRow;
     const outboxIds = await deliver(trx, opts.appUrl, reminder, request);
@@ -82,7 +85,7 @@ async function deliver(
   const ids: number[] = [];
   const tell = async (
     organisationId: number,
-    notice: { title: string; body: string },
+    notice: Pick<Notice, 'title' | 'body'>,
     roles?: string[],
     onlyUserIds?: number[],
   ) =>
@@ -95,9 +98,10 @@ async function deliver(
         notice: { kind: reminder.kind, link, ...notice },
       })),
     );
-  const deadline = request.bid_deadline ? formatInZone(request.bid_deadline, request.time_zone) : '';
   const needBy =
     request.need_by_date instanceof Date ? request.need_by_date.toISOString().slice(0, 10) : request.need_by_date;
+  // Dates, times and lengths as each reader chose: their zone, their locale, their units.
+  const needByText = (reader: Reader) => (needBy ? formatCalendarDate(needBy, reader.locale) : 'its need-by date');
   const award = await trx('awards').where({ request_id: request.id }).first('shop_id', 'promised_ship_date');
   const buyer = request.created_by ? [request.created_by] : undefined;
   // The date reminders reach each side at its own 09:00, as a reminder each.
@@ -108,15 +112,19 @@ async function deliver(
     case 'bid_deadline_48h':
     case 'bid_deadline_24h': {
       const hours = reminder.kind === 'bid_deadline_48h' ? 48 : 24;
+      const deadline = request.bid_deadline;
+      if (!deadline) break;
       for (const shopId of await shopsYetToBid(trx, request.id)) {
-        // Each shop reads the deadline in its own time zone.
-        const shop = await trx('organisations').where({ id: shopId }).first('time_zone');
-        const due = request.bid_deadline
-          ? formatInZone(request.bid_deadline, shop?.time_zone ?? request.time_zone)
-          : deadline;
         await tell(shopId, {
           title: `Bids due in ${hours} hours: ${request.title}`,
-          body: `Bids on "${request.title}" are due by ${due}. Your shop has not bid yet.`,
+          body: (reader) =>
+            [
+              `Bids on "${request.title}" are due by ${formatInZone(deadline, reader.timeZone, reader.locale)}.`,
+              dieSummary(request, reader),
+              'Your shop has not bid yet.',
+            ]
+              .filter(Boolean)
+              .join(' '),
         });
       }
       break;
@@ -148,7 +156,8 @@ async function deliver(
     case 'need_by_7d':
     case 'need_by_2d': {
       const days = reminder.kind === 'need_by_7d' ? 7 : 2;
-      const body = `The die for "${request.title}" is needed by ${needBy}, ${days} days from now, and has not shipped yet.`;
+      const body = (reader: Reader) =>
+        `The die for "${request.title}" is needed by ${needByText(reader)}, ${days} days from now, and has not shipped yet.`;
       if (award && toShop) await tell(award.shop_id, { title: `Needed in ${days} days: ${request.title}`, body });
       if (buyer && toPrinter)
         await tell(
@@ -164,15 +173,16 @@ async function deliver(
         .where({ id: request.id })
         .whereNull('late_flagged_at')
         .update({ late_flagged_at: new Date() });
-      const shipDate =
+      const shipDate: string | undefined =
         award?.promised_ship_date instanceof Date
           ? award.promised_ship_date.toISOString().slice(0, 10)
           : award?.promised_ship_date;
-      const body = `The die for "${request.title}" was promised to ship by ${shipDate} and has not shipped.`;
+      const body = (reader: Reader) =>
+        `The die for "${request.title}" was promised to ship by ${shipDate ? formatCalendarDate(shipDate, reader.locale) : 'its promised date'} and has not shipped.`;
       if (award && toShop)
         await tell(award.shop_id, {
           title: `Late: ${request.title}`,
-          body: `${body} Mark it shipped, or tell the buyer the new date.`,
+          body: (reader) => `${body(reader)} Mark it shipped, or tell the buyer the new date.`,
         });
       if (toPrinter)
         await tell(request.organisation_id, { title: `Late: ${request.title}`, body }, ['buyer', 'purchasing']);
