@@ -39,6 +39,9 @@ export async function purchaseOrderDocument(
     poNumber: award.poNumber,
     issuedAt: award.awardedAt,
     timeZone: printer.timeZone,
+    units: buyer?.lengthUnits ?? printer.lengthUnits,
+    locale: buyer?.locale ?? printer.locale,
+    paper: ['US', 'CA', 'MX'].includes(printer.country ?? 'US') ? 'LETTER' : 'A4',
     buyer: {
       organisation: printer.legalName ?? printer.name,
       officeAddress: printer.officeAddress,
@@ -65,7 +68,12 @@ export async function purchaseOrderDocument(
     },
     dieline:
       file && metrics
-        ? { fileName: file.fileName, totalRuleIn: pricedLength(metrics.length), complexity: metrics.complexity }
+        ? {
+            fileName: file.fileName,
+            totalRuleIn: pricedLength(metrics.length),
+            board: metrics.board.width > 0 ? metrics.board : null,
+            complexity: metrics.complexity,
+          }
         : null,
     lines: (bid?.lines ?? []).map((l) => ({
       kind: l.kind,

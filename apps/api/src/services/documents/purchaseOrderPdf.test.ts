@@ -10,6 +10,9 @@ const base: PurchaseOrderDoc = {
   poNumber: 'PO-2026-0042',
   issuedAt: new Date('2026-12-05T20:30:00Z'),
   timeZone: 'America/Chicago',
+  units: 'in',
+  locale: 'en-US',
+  paper: 'LETTER',
   buyer: {
     organisation: 'Prairie Folding Cartons LLC',
     officeAddress: '400 Quarry Row\nSuite 12\nSpringfield IL',
@@ -34,7 +37,12 @@ const base: PurchaseOrderDoc = {
     quantity: 2,
     ups: 4,
   },
-  dieline: { fileName: 'cereal-carton.dxf', totalRuleIn: 312.46, complexity: 'complex' },
+  dieline: {
+    fileName: 'cereal-carton.dxf',
+    totalRuleIn: 312.46,
+    board: { width: 22, height: 30 },
+    complexity: 'complex',
+  },
   lines: [
     { kind: 'die', description: 'Flatbed steel-rule die, 4-up', amountCents: 84500 },
     { kind: 'counter', description: 'Matrix counter', amountCents: 12000 },
@@ -102,8 +110,32 @@ describe('purchaseOrderPdf', () => {
     expect(text).toContain('This purchase order accepts bid revision 2 as submitted.');
     expect(text).toMatch(/steel-rule dies are sharp/);
     expect(text).toContain('7 working days');
-    expect(text).toContain('2027-01-15');
-    expect(text).toContain('312.5 in');
+    expect(text).toContain('Fri, Jan 15, 2027');
+    // The issuer's units first, the other beside: 312.46 × 25.4 = 7,936.48 mm (1 in = 25.4 mm exactly).
+    expect(text).toContain('312.5 in (7,936 mm)');
+    expect(text).toContain('22.00 × 30.00 in (558.8 × 762.0 mm)');
+  });
+
+  it('prints for a metric issuer in millimetres first, with British dates, on A4', async () => {
+    const buf = await purchaseOrderPdf({
+      ...base,
+      units: 'mm',
+      locale: 'en-GB',
+      paper: 'A4',
+      timeZone: 'Europe/Berlin',
+    });
+    const [text = ''] = await readBack(buf);
+    expect(text).toContain('7,936 mm (312.5 in)');
+    expect(text).toContain('558.8 × 762.0 mm (22.00 × 30.00 in)');
+    expect(text).toContain('Fri, 15 Jan 2027');
+    // 20:30 UTC is 21:30 in Berlin in December (IANA tz database: UTC+1 in winter).
+    expect(text).toContain('5 Dec 2026, 21:30 CET');
+    // ISO 216 A4 is 210 × 297 mm: 595.28 × 841.89 pt at 72 pt to the inch.
+    const pdf = await getDocument({ data: new Uint8Array(buf), standardFontDataUrl }).promise;
+    const [, , w, h] = (await pdf.getPage(1)).view;
+    await pdf.destroy();
+    expect(w).toBeCloseTo((210 / 25.4) * 72, 0);
+    expect(h).toBeCloseTo((297 / 25.4) * 72, 0);
   });
 
   it('prints a currency without minor units whole: 150000 JPY is ¥150,000', async () => {

@@ -1,5 +1,5 @@
-import { bidLineLabels, formatInZone } from '@kerfmark/contracts';
-import { complexityLabels } from '@kerfmark/dieline';
+import { bidLineLabels, formatCalendarDate, formatInZone } from '@kerfmark/contracts';
+import { complexityLabels, formatLength, formatSize, type LengthStyle } from '@kerfmark/dieline';
 import { formatMoney } from '@kerfmark/pricing';
 import PDFDocument from 'pdfkit';
 import type { PurchaseOrderDoc } from './types';
@@ -26,7 +26,7 @@ export async function purchaseOrderPdf(doc: PurchaseOrderDoc): Promise<Buffer> {
   checkDocument(doc);
   const money = (cents: number) => formatMoney({ cents, currency: doc.currency });
   const pdf = new PDFDocument({
-    size: 'LETTER',
+    size: doc.paper,
     margin: MARGIN,
     bufferPages: true, // so every page can carry "page n of m" at the end
     info: {
@@ -48,7 +48,7 @@ export async function purchaseOrderPdf(doc: PurchaseOrderDoc): Promise<Buffer> {
   writeText(pdf, 'Purchase order', { weight: 'bold', x: left, y: MARGIN + 2, width, align: 'right' });
   pdf.fontSize(10).moveDown(0.3);
   writeText(pdf, `PO number ${doc.poNumber}`, { width, align: 'right' });
-  writeText(pdf, `Issued ${formatInZone(doc.issuedAt, doc.timeZone)}`, { width, align: 'right' });
+  writeText(pdf, `Issued ${formatInZone(doc.issuedAt, doc.timeZone, doc.locale)}`, { width, align: 'right' });
   pdf.moveDown(1.5);
 
   // Buyer, supplier and delivery side by side.
@@ -89,7 +89,11 @@ export async function purchaseOrderPdf(doc: PurchaseOrderDoc): Promise<Buffer> {
   if (doc.request.jobReference) field(pdf, 'Job reference', doc.request.jobReference);
   field(pdf, 'Quantity of dies', String(doc.request.quantity));
   field(pdf, 'Ups', String(doc.request.ups));
-  field(pdf, 'Need-by date', doc.request.needByDate ?? 'None given');
+  field(
+    pdf,
+    'Need-by date',
+    doc.request.needByDate ? formatCalendarDate(doc.request.needByDate, doc.locale) : 'None given',
+  );
 
   section(pdf, 'Dieline', width);
   if (doc.dieline) {
@@ -97,8 +101,15 @@ export async function purchaseOrderPdf(doc: PurchaseOrderDoc): Promise<Buffer> {
     field(
       pdf,
       'Total rule length',
-      `${new Intl.NumberFormat('en-US', { maximumFractionDigits: 1 }).format(doc.dieline.totalRuleIn)} in`,
+      bothUnits(doc, (style) => formatLength(doc.dieline!.totalRuleIn, style, 1)),
     );
+    const board = doc.dieline.board;
+    if (board)
+      field(
+        pdf,
+        'Board',
+        bothUnits(doc, (style) => formatSize(board.width, board.height, style)),
+      );
     field(pdf, 'Complexity', complexityLabels[doc.dieline.complexity]);
   } else {
     writeText(pdf, 'No dieline attached.');
@@ -111,7 +122,7 @@ export async function purchaseOrderPdf(doc: PurchaseOrderDoc): Promise<Buffer> {
   if (doc.buyer.paymentTerms) field(pdf, 'Payment terms', doc.buyer.paymentTerms);
   field(pdf, 'Currency', doc.currency);
   field(pdf, 'Lead time', `${doc.leadDays} working ${doc.leadDays === 1 ? 'day' : 'days'}`);
-  field(pdf, 'Promised ship date', doc.promisedShipDate);
+  field(pdf, 'Promised ship date', formatCalendarDate(doc.promisedShipDate, doc.locale));
   field(pdf, 'Bid revision', String(doc.bidRevision));
   if (doc.awardReason) field(pdf, 'Award reason', doc.awardReason);
   if (doc.notes) field(pdf, 'Notes', doc.notes);
@@ -123,6 +134,12 @@ export async function purchaseOrderPdf(doc: PurchaseOrderDoc): Promise<Buffer> {
   pageFooters(pdf, doc.poNumber, left, width);
   pdf.end();
   return bytes;
+}
+
+/** A length in the issuer's units with the other unit beside, so either side reads it: "312.5 in (7,937 mm)". */
+function bothUnits(doc: PurchaseOrderDoc, text: (style: LengthStyle) => string): string {
+  const other = doc.units === 'mm' ? 'in' : 'mm';
+  return `${text({ units: doc.units, locale: doc.locale })} (${text({ units: other, locale: doc.locale })})`;
 }
 
 function collect(pdf: Pdf): Promise<Buffer> {

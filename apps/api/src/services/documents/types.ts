@@ -1,9 +1,15 @@
-import type { Complexity } from '@kerfmark/dieline';
+import type { DisplayLocale, LengthUnits } from '@kerfmark/contracts';
+import type { Complexity, Size } from '@kerfmark/dieline';
 /** What a purchase order document says; money in integer cents (minor units) with its currency. */
 export interface PurchaseOrderDoc {
   poNumber: string;
   issuedAt: Date;
   timeZone: string;
+  /** How the issuer reads it: lengths in their units (the other beside), dates and numbers in their locale. */
+  units: LengthUnits;
+  locale: DisplayLocale;
+  /** Letter in North America, A4 elsewhere, by the issuing printer's country. */
+  paper: 'LETTER' | 'A4';
   /** The printer that issues the order: its legal name (else its name), office and payment terms. */
   buyer: {
     organisation: string;
@@ -25,7 +31,7 @@ export interface PurchaseOrderDoc {
     quantity: number;
     ups: number;
   };
-  dieline: { fileName: string; totalRuleIn: number; complexity: Complexity } | null;
+  dieline: { fileName: string; totalRuleIn: number; board: Size | null; complexity: Complexity } | null;
   lines: Array<{ kind: string; description: string; amountCents: number }>;
   totalCents: number;
   currency: string;
