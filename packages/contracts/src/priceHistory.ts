@@ -47,7 +47,7 @@ export const importFields = {
   diePrice: { label: 'Die price', required: true, hints: ['die price', 'die', 'price'] },
   totalPrice: { label: 'Total price', required: false, hints: ['total'] },
   currency: { label: 'Currency', required: false, hints: ['currency', 'ccy'] },
-  ruleLengthIn: { label: 'Rule length (in)', required: true, hints: ['rule length', 'length', 'inches', 'rule'] },
+  ruleLengthIn: { label: 'Rule length (in or mm)', required: true, hints: ['rule length', 'length', 'inches', 'rule'] },
   bends: { label: 'Bends', required: false, hints: ['bends', 'bend'] },
   curves: { label: 'Curves', required: false, hints: ['curves', 'curve', 'arcs'] },
   joints: { label: 'Joints', required: false, hints: ['joints', 'joint', 'notches'] },
@@ -55,6 +55,11 @@ export const importFields = {
   complexity: { label: 'Complexity', required: false, hints: ['complexity', 'class'] },
 } as const;
 export type ImportField = keyof typeof importFields;
+
+/** The unit a rule-length column's heading names: "Rule length (mm)" is millimetres, anything else inches. */
+export function unitOfHeading(heading: string): 'in' | 'mm' {
+  return /\bmm\b|millimet/i.test(heading) ? 'mm' : 'in';
+}
 
 export const ImportMapping = z.record(z.string(), z.string().max(200));
 

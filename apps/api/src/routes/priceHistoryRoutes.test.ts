@@ -51,6 +51,41 @@ describe('price history', () => {
     expect(rows.slice(1).some((r) => /^[=+\-@]/.test(r[1]!))).toBe(false);
   });
 
+  it('reads a rule-length column headed in millimetres as millimetres, and exports in each reader’s units', async () => {
+    const w = await createWorld();
+    // 2,540 mm is 100 in exactly (1 in = 25.4 mm, ISO 80000-3).
+    const csv = 'Date,Supplier,Die price,Rule length (mm)\n2026-03-15,Metric Dies,500.00,2540\n';
+    const imported = await request(app)
+      .post('/api/price-history/import')
+      .set(bearer(w.tokens.purchasing))
+      .attach('file', Buffer.from(csv), 'history.csv')
+      .field(
+        'mapping',
+        JSON.stringify({
+          pricedOn: 'Date',
+          shopName: 'Supplier',
+          diePrice: 'Die price',
+          ruleLengthIn: 'Rule length (mm)',
+        }),
+      );
+    expect(imported.status, JSON.stringify(imported.body)).toBe(201);
+    const listed = await request(app).get('/api/price-history').set(bearer(w.tokens.purchasing));
+    expect(listed.body.items[0].ruleLengthIn).toBeCloseTo(100, 6);
+
+    const column = async (heading: string) => {
+      const text = (await request(app).get('/api/price-history/export.csv').set(bearer(w.tokens.purchasing))).text;
+      const [head = [], row = []] = Papa.parse<string[]>(text.trim()).data;
+      return [head.includes(heading), row[head.indexOf(heading)]];
+    };
+    expect(await column('Rule length (in)')).toEqual([true, '100']);
+    const chosen = await request(app)
+      .put('/api/me/preferences')
+      .set(bearer(w.tokens.purchasing))
+      .send({ lengthUnits: 'mm' });
+    expect(chosen.status).toBe(200);
+    expect(await column('Rule length (mm)')).toEqual([true, '2540']);
+  });
+
   it('imports a CSV whole, lists it with filters, exports it, and fits it', async () => {
     const w = await createWorld();
     const preview = await request(app)

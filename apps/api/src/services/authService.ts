@@ -4,6 +4,7 @@ import type { LoginLimiter } from '../auth/loginLimiter';
 import { verifyPassword } from '../auth/passwords';
 import { signToken } from '../auth/tokens';
 import { HttpError } from '../lib/httpError';
+import { readingStyle } from '../lib/readingStyle';
 import { Organisation, User } from '../models';
 import type { ServiceDeps } from './deps';
 
@@ -44,7 +45,7 @@ export function createAuthService({ config, knex }: ServiceDeps, limiter: LoginL
 
     async me(user: AuthUser): Promise<Me> {
       const organisation = await Organisation.query().findById(user.organisationId).throwIfNotFound();
-      const own = await User.query().findById(user.id).select('lengthUnits', 'locale');
+      const style = await readingStyle(knex, user.id);
       return {
         id: user.id,
         email: user.email,
@@ -56,8 +57,7 @@ export function createAuthService({ config, knex }: ServiceDeps, limiter: LoginL
           kind: organisation.kind,
           timeZone: organisation.timeZone,
         },
-        lengthUnits: own?.lengthUnits ?? organisation.lengthUnits,
-        locale: own?.locale ?? organisation.locale,
+        ...style,
       };
     },
   };

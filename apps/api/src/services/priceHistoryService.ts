@@ -7,6 +7,7 @@ import { fairPriceFor } from './priceHistory/fairPriceFor';
 import { createHistoryFits } from './priceHistory/historyFits';
 import { importPriceRecords } from './priceHistory/importPriceRecords';
 import { priceHistoryChart } from './priceHistory/priceHistoryChart';
+import { readingStyle } from '../lib/readingStyle';
 import { priceHistoryCsv } from './priceHistory/priceHistoryCsv';
 import { previewImport } from './priceHistory/priceImport';
 import { priceRecordPage } from './priceHistory/priceRecordPage';
@@ -31,8 +32,9 @@ export function createPriceHistoryService({ knex }: ServiceDeps) {
     },
     fairPriceFor: bandFor,
     list: (actor: AuthUser, f: PriceFilters) => priceRecordPage(knex, actor.organisationId, f),
-    /** The filtered history as CSV, money in major units (as people read it), dates as YYYY-MM-DD. */
-    csv: (actor: AuthUser, f: PriceFilters) => priceHistoryCsv(knex, actor.organisationId, f),
+    /** The filtered history as CSV, lengths in the reader's units. */
+    csv: async (actor: AuthUser, f: PriceFilters) =>
+      priceHistoryCsv(knex, actor.organisationId, f, (await readingStyle(knex, actor.id)).lengthUnits),
     preview: (text: string) => previewImport(text),
     async importCsv(actor: AuthUser, text: string, mapping: Record<string, string>) {
       const result = await importPriceRecords(knex, actor, text, mapping);

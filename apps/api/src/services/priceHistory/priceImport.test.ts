@@ -42,7 +42,7 @@ describe('price history import', () => {
       [4, 'Date'],
       [4, 'Die shop'],
       [4, 'Die price'],
-      [4, 'Rule length (in)'],
+      [4, 'Rule length (in or mm)'],
       [4, 'Bends'],
     ]);
   });

@@ -3,11 +3,12 @@ import {
   earliestDate,
   importFields,
   latestDate,
+  unitOfHeading,
   type ImportField,
   type ImportPreviewDto,
   type ImportRowError,
 } from '@kerfmark/contracts';
-import { complexityOf, type Complexity } from '@kerfmark/dieline';
+import { complexityOf, inchesOf, type Complexity, type LengthUnit } from '@kerfmark/dieline';
 import { isCurrencyCode, parseMoneyInput } from '@kerfmark/pricing';
 import Papa from 'papaparse';
 import { badRequest } from '../../lib/httpError';
@@ -45,6 +46,8 @@ export function previewImport(text: string): ImportPreviewDto {
   return { headers, rows: rows.slice(0, 10), totalRows: rows.length, suggested };
 }
 
+const unitWords: Record<LengthUnit, string> = { in: 'inches', mm: 'millimetres' };
+
 export interface ImportedRecord {
   pricedOn: string;
   shopName: string;
@@ -79,6 +82,7 @@ export function readImport(
     );
   }
   const column = (field: ImportField) => (mapping[field] ? headers.indexOf(mapping[field]) : -1);
+  const ruleUnits = unitOfHeading(mapping.ruleLengthIn ?? '');
   const records: ImportedRecord[] = [];
   const errors: ImportRowError[] = [];
   rows.forEach((cells, i) => {
@@ -109,9 +113,10 @@ export function readImport(
     const totalText = cell('totalPrice');
     const totalCents = totalText && isCurrencyCode(currency) ? parseMoneyInput(totalText, currency) : dieCents;
     if (totalText && totalCents === null) fail('totalPrice', `“${totalText}” is not a price`);
-    const ruleLengthIn = Number(cell('ruleLengthIn'));
+    const ruleLength = Number(cell('ruleLengthIn'));
+    const ruleLengthIn = inchesOf(ruleLength, ruleUnits);
     if (!(ruleLengthIn > 0) || ruleLengthIn > 100_000)
-      fail('ruleLengthIn', `“${cell('ruleLengthIn')}” is not a rule length in inches`);
+      fail('ruleLengthIn', `“${cell('ruleLengthIn')}” is not a rule length in ${unitWords[ruleUnits]}`);
     const features = {
       bends: count('bends'),
       curves: count('curves'),
