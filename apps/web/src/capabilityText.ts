@@ -1,5 +1,5 @@
 import { dieKindLabels, type ShopCapabilities } from '@kerfmark/contracts';
-import { otherSize, size } from './format';
+import { bothLengths, otherSize, size } from './format';
 
 const yesNo = (value: boolean | null) => (value === null ? 'Not stated' : value ? 'Yes' : 'No');
 
@@ -10,10 +10,10 @@ export function capabilityText(c: ShopCapabilities & { laserCutBoards: boolean |
     [
       'Largest die board',
       c.maxBoardWidthIn && c.maxBoardLengthIn
-        ? `${size(c.maxBoardWidthIn, c.maxBoardLengthIn)} (${otherSize(c.maxBoardWidthIn, c.maxBoardLengthIn, 0)})`
+        ? `${size(c.maxBoardWidthIn, c.maxBoardLengthIn)} (${otherSize(c.maxBoardWidthIn, c.maxBoardLengthIn, 1)})`
         : 'Not stated',
     ],
-    ['Cutting rule heights', c.ruleHeightsIn.map((h) => `${h} in`).join(', ') || 'Not stated'],
+    ['Cutting rule heights', c.ruleHeightsIn.map((h) => bothLengths(h, 3)).join(', ') || 'Not stated'],
     ['Makes counters', yesNo(c.makesCounters)],
     ['Fits ejection rubber', yesNo(c.fitsEjectionRubber)],
     ['Cuts die boards by laser', yesNo(c.laserCutBoards)],

@@ -36,7 +36,7 @@ describe('OrganisationProfileUpdate', () => {
       { path: 'dieKinds', message: 'Name each of the die kinds once' },
     ]);
     expect(issuesOf({ maxBoardWidthIn: 0.5 })).toEqual([
-      { path: 'maxBoardWidthIn', message: 'A board side is at least 1 in' },
+      { path: 'maxBoardWidthIn', message: 'A board side is at least 1 in (25.4 mm)' },
     ]);
     expect(
       issuesOf({

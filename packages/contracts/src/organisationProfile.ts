@@ -1,3 +1,4 @@
+import { inchesAndMm } from '@kerfmark/dieline';
 import { CUTTING_RULE_HEIGHTS_IN } from '@kerfmark/stock';
 import { z } from 'zod';
 import { Email } from './auth';
@@ -50,9 +51,9 @@ const distinct = <T extends z.ZodType>(item: T, what: string, max: number) =>
 // A die board is cut from a sheet of plywood; 200 in each way is far past any die-cutting press
 // (common practice: a small press takes about 22 × 30 in, large flatbeds about 60 × 80 in).
 const BoardSide = z
-  .number({ error: 'Enter a size in inches' })
-  .min(1, 'A board side is at least 1 in')
-  .max(200, 'A board side is at most 200 in')
+  .number({ error: 'Enter a size' })
+  .min(1, `A board side is at least ${inchesAndMm(1)}`)
+  .max(200, `A board side is at most ${inchesAndMm(200)}`)
   .nullable();
 
 const CuttingRuleHeight = z.union(

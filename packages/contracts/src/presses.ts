@@ -1,3 +1,4 @@
+import { inchesAndMm } from '@kerfmark/dieline';
 import { CUTTING_RULE_HEIGHT_IN, CUTTING_RULE_HEIGHTS_IN } from '@kerfmark/stock';
 import { z } from 'zod';
 
@@ -12,10 +13,10 @@ export const pressKindLabels: Record<PressKind, string> = {
 };
 
 const SheetSide = z
-  .number({ error: 'Enter a size in inches' })
+  .number({ error: 'Enter a size' })
   // Stored to the hundredth of an inch: a side under 1 in is no press, and 1e-300 would be stored as 0.
-  .min(1, 'A sheet side is at least 1 in')
-  .max(120, 'A sheet side is at most 120 in');
+  .min(1, `A sheet side is at least ${inchesAndMm(1)}`)
+  .max(120, `A sheet side is at most ${inchesAndMm(120)}`);
 
 // Common practice: die-cutting presses run a few thousand sheets an hour, up to about 7,800 on a
 // fast one; the upper bound here is generous so that rotary lines fit too.

@@ -1,4 +1,4 @@
-import { PIECE_GRAINS } from '@kerfmark/dieline';
+import { inchesAndMm, PIECE_GRAINS } from '@kerfmark/dieline';
 import { STOCK_KINDS } from '@kerfmark/stock';
 import { z } from 'zod';
 import { RequestStatus } from './requestStatus';
@@ -30,9 +30,9 @@ const IsoDate = calendarDate();
 const Instant = instant();
 const Inches = (what: string) =>
   z
-    .number({ error: `Enter ${what} in inches` })
+    .number({ error: `Enter ${what}` })
     .positive(`${what} must be more than 0`)
-    .max(120, `${what} is at most 120 in`);
+    .max(120, `${what} is at most ${inchesAndMm(120)}`);
 /** Ups in one direction of a one-up layout. */
 const upsInLine = (way: 'across' | 'along') =>
   z
@@ -68,7 +68,7 @@ const DieRequestFields = z.object({
   gutterIn: z
     .number({ error: 'Enter the gutter' })
     .min(0, '0 or more (0 for shared cuts)')
-    .max(10, 'At most 10 in')
+    .max(10, `At most ${inchesAndMm(10)}`)
     .nullable()
     .optional(),
   pieceGrain: PieceGrain.nullable().optional(),
@@ -78,15 +78,15 @@ const DieRequestFields = z.object({
   // Paperboard caliper: 0.001 in (1 pt) to 0.5 in covers folding carton to heavy corrugated.
   caliperIn: z
     .number({ error: 'Enter the caliper' })
-    .min(0.001, 'At least 0.001 in')
-    .max(0.5, 'At most 0.5 in')
+    .min(0.001, `At least ${inchesAndMm(0.001)}`)
+    .max(0.5, `At most ${inchesAndMm(0.5)}`)
     .nullable()
     .optional(),
   // Corrugated only: the board pressed flat under the creasing rule, thinner than its caliper.
   crushedCaliperIn: z
     .number({ error: 'Enter the crushed thickness' })
-    .min(0.001, 'At least 0.001 in')
-    .max(0.5, 'At most 0.5 in')
+    .min(0.001, `At least ${inchesAndMm(0.001)}`)
+    .max(0.5, `At most ${inchesAndMm(0.5)}`)
     .nullable()
     .optional(),
   stockWeightGsm: z

@@ -98,7 +98,7 @@ describe('presses', () => {
       maxSpeedSph: 5000,
     });
     expect(tiny.status).toBe(400);
-    expect(tiny.body.error.fields.maxSheetWidthIn).toBe('A sheet side is at least 1 in');
+    expect(tiny.body.error.fields.maxSheetWidthIn).toBe('A sheet side is at least 1 in (25.4 mm)');
   });
 
   it('keeps the typical speed at or below the maximum, on create and on a partial edit', async () => {
