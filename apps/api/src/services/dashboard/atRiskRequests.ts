@@ -1,7 +1,8 @@
-import { formatCalendarDate as day, pressHoursPerDay, type AtRiskItem } from '@kerfmark/contracts';
+import { formatCalendarDate, pressHoursPerDay, type AtRiskItem } from '@kerfmark/contracts';
 import { addWorkingDays, checkArrival, runHours } from '@kerfmark/pricing';
 import { factsOf, visibleParts } from '../../access';
 import type { AuthUser } from '../../auth/passport';
+import { readingStyle } from '../../lib/readingStyle';
 import { todayIn } from '../../lib/todayIn';
 import { Award, Bid, DieRequest } from '../../models';
 import { LIVE_STATUSES } from './liveStatuses';
@@ -17,6 +18,9 @@ const mayReckonWithBids = (actor: AuthUser, r: DieRequest, now: Date) =>
  * Before the deadline the bids are sealed: only the request's own dates count.
  */
 export async function atRiskRequests(actor: AuthUser): Promise<AtRiskItem[]> {
+  // The reasons are written for the reader: dates in their locale.
+  const { locale } = await readingStyle(DieRequest.knex(), actor.id);
+  const day = (date: string) => formatCalendarDate(date, locale);
   const today = todayIn(actor.timeZone);
   const now = new Date();
   const requests = await DieRequest.query()
