@@ -15,10 +15,15 @@ export async function seedDemo(knex: Knex, opts: { storage?: Storage; bcryptRoun
   const passwordHash = await bcrypt.hash(DEMO_PASSWORD, bcryptRounds);
   await knex.transaction(async (trx) => {
     for (const org of demoOrganisations) {
+      const place = {
+        country: org.country ?? 'US',
+        lengthUnits: org.lengthUnits ?? 'in',
+        locale: org.locale ?? 'en-US',
+      };
       const [row] = await trx('organisations')
-        .insert({ name: org.name, kind: org.kind, timeZone: org.timeZone, postcode: org.postcode })
+        .insert({ name: org.name, kind: org.kind, timeZone: org.timeZone, postcode: org.postcode, ...place })
         .onConflict('name')
-        .merge(['kind', 'timeZone', 'postcode'])
+        .merge(['kind', 'timeZone', 'postcode', 'country', 'lengthUnits', 'locale'])
         .returning('id');
       const organisationId = (row as { id: number }).id;
       // The demo's profile until someone has filled one in: a second seed keeps their edits.

@@ -10,6 +10,10 @@ interface DemoOrg {
   kind: OrgKind;
   timeZone: string;
   postcode: string;
+  /** ISO 3166 country; outside the US an organisation reads millimetres and en-GB by default. */
+  country?: string;
+  lengthUnits?: 'in' | 'mm';
+  locale?: 'en-US' | 'en-GB';
   /** The profile: legal name and office, and a printer's terms or a die shop's capabilities. */
   profile: OrganisationProfileUpdate;
   users: Array<{ email: string; name: string; role: Role }>;
@@ -105,6 +109,49 @@ export const demoOrganisations: DemoOrg[] = [
         maxSheetLengthIn: 29,
         typicalSpeedSph: 4500,
         maxSpeedSph: 6000,
+      },
+    ],
+  },
+  {
+    // A metric printer in Berlin: millimetres, British English dates, its own time zone.
+    name: 'Elbstrom Kartonagen',
+    kind: 'printer',
+    timeZone: 'Europe/Berlin',
+    postcode: '12099',
+    country: 'DE',
+    lengthUnits: 'mm',
+    locale: 'en-GB',
+    profile: {
+      legalName: 'Elbstrom Kartonagen GmbH',
+      officeAddress: 'Weidenkorbweg 14\n12099 Berlin\nGermany',
+      contactEmail: 'einkauf@elbstrom.example',
+      paymentTerms: 'Net 30',
+      deliveryPoints: [
+        { name: 'Werk 1, Tor 3', address: 'Weidenkorbweg 14\n12099 Berlin\nGermany', postcode: '12099' },
+      ],
+    },
+    users: [
+      { email: 'hanna@elbstrom.example', name: 'Hanna Vogt', role: 'buyer' },
+      { email: 'felix@elbstrom.example', name: 'Felix Brandt', role: 'purchasing' },
+      { email: 'ines@elbstrom.example', name: 'Ines Kaya', role: 'admin' },
+    ],
+    // Metric sheet sizes, stored in inches to the thousandth: 740 × 1040 mm and 530 × 750 mm.
+    presses: [
+      {
+        name: 'Flachbett 1 (740 × 1040 mm)',
+        kind: 'flatbed',
+        maxSheetWidthIn: 29.134,
+        maxSheetLengthIn: 40.945,
+        typicalSpeedSph: 5000,
+        maxSpeedSph: 7500,
+      },
+      {
+        name: 'Tiegel 2 (530 × 750 mm)',
+        kind: 'platen',
+        maxSheetWidthIn: 20.866,
+        maxSheetLengthIn: 29.528,
+        typicalSpeedSph: 3500,
+        maxSpeedSph: 5000,
       },
     ],
   },
