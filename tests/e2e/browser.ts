@@ -56,9 +56,12 @@ export async function signIn(page: Page, email: string, password = DEMO_PASSWORD
   await page.locator('[data-test=sign-in]').click();
 }
 
-/** A page of its own (a fresh browser context) signed in as the user, on the home page, at a width. */
-export async function pageAs(browser: Browser, email: string, width = 1366): Promise<Page> {
-  const context = await browser.newContext({ viewport: { width, height: 900 }, acceptDownloads: true });
+/**
+ * A page of its own (a fresh browser context) signed in as the user, on the home page, at a
+ * width; the browser's own time zone may be set, to show that the app does not follow it.
+ */
+export async function pageAs(browser: Browser, email: string, width = 1366, timezoneId?: string): Promise<Page> {
+  const context = await browser.newContext({ viewport: { width, height: 900 }, acceptDownloads: true, timezoneId });
   const p = await context.newPage();
   await signIn(p, email);
   await p.waitForURL(`${baseUrl}/`);

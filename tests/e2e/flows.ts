@@ -29,6 +29,11 @@ export async function postRequest(
     screenshots?: (name: string) => Promise<void>;
     dieline?: { file: string; metricsShow: string };
     oneUp?: { across: number; along: number; gutterIn: number };
+    /** The press to choose (its name begins so) and the delivery postcode. */
+    press?: string;
+    postcode?: string;
+    /** The bid deadline typed into the picker ("9 Dec 2026 17:00"), else picked 5 days on. */
+    deadlineText?: string;
     /** Steps taken on a step before going on, such as choosing shops to invite. */
     onJobStep?: (p: Page) => Promise<void>;
     onPressStep?: (p: Page) => Promise<void>;
@@ -52,11 +57,17 @@ export async function postRequest(
   await opts.onJobStep?.(p);
   await p.locator('[data-test=next]').click();
   await p.locator('[data-test=req-press]').click();
-  await p.locator('.ant-select-item-option >> text=Platen 1').click();
+  const press = opts.press ?? 'Platen 1';
+  await p.locator(`.ant-select-item-option >> text=${press}`).click();
   await p.locator('[data-test=req-sheets] input, input[data-test=req-sheets]').first().fill('10000');
-  await pickDate(p, 'req-deadline', new Date(Date.now() + 5 * 86_400_000), true);
+  if (opts.deadlineText) {
+    const deadline = p.locator('[data-test=req-deadline] input');
+    await deadline.click();
+    await deadline.fill(opts.deadlineText);
+    await deadline.press('Enter');
+  } else await pickDate(p, 'req-deadline', new Date(Date.now() + 5 * 86_400_000), true);
   await pickDate(p, 'req-needby', new Date(Date.now() + 30 * 86_400_000), false);
-  await p.locator('[data-test=req-postcode]').fill('60614');
+  await p.locator('[data-test=req-postcode]').fill(opts.postcode ?? '60614');
   await opts.onPressStep?.(p);
   await p.locator('[data-test=next]').click();
   await p.waitForURL(/\/requests\/\d+\/edit/);
@@ -78,7 +89,7 @@ export async function postRequest(
   await opts.screenshots?.('dieline');
   await opts.onDielineStep?.(p);
   await p.locator('[data-test=next]').click();
-  await expect.poll(() => p.locator('[data-test=request-checks]').innerText()).toContain('fits Platen 1');
+  await expect.poll(() => p.locator('[data-test=request-checks]').innerText()).toContain(`fits ${press}`);
   await opts.screenshots?.('review');
   await p.locator('[data-test=publish]').click();
   await p.waitForURL(/\/requests\/\d+$/);

@@ -54,6 +54,16 @@ export const perLengthName = () => (lengthUnits.value === 'mm' ? 'metre' : 'inch
 export const perLengthCents = (centsPerInch: number) =>
   lengthUnits.value === 'mm' ? centsPerInch * inchesOf(1000, 'mm') : centsPerInch;
 
+/**
+ * The date pickers' formats in the user's locale: the first is how a date is shown, and any of
+ * them may be typed (dayjs cannot read a weekday back, so each has a form without it).
+ */
+export const pickerFormats = (withTime: boolean): string[] => {
+  const time = withTime ? ' HH:mm' : '';
+  const shown = displayLocale.value === 'en-GB' ? ['ddd D MMM YYYY', 'D MMM YYYY'] : ['ddd MMM D, YYYY', 'MMM D, YYYY'];
+  return [...shown, 'YYYY-MM-DD'].map((f) => `${f}${time}`);
+};
+
 /** A calendar date (YYYY-MM-DD) for people: "Fri, Dec 18, 2026". */
 export const calendarDate = (date: string | null | undefined) =>
   date ? formatCalendarDate(date, displayLocale.value) : '—';
