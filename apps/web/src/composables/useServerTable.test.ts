@@ -31,4 +31,12 @@ describe('useServerTable', () => {
     expect(table.sort.value).toBe('bidDeadline');
     expect(table.sortable('distance').sortOrder).toBeNull();
   });
+
+  it('goes back to the first page when the order changes, from a header or the phone’s sort list', async () => {
+    const table = useServerTable('bidDeadline');
+    table.page.value = 4;
+    table.sort.value = '-ruleLength';
+    await nextTick();
+    expect(table.page.value).toBe(1);
+  });
 });

@@ -19,6 +19,9 @@ export function useServerTable(defaultSort: string) {
     }, 300);
   });
 
+  // A new order starts again from its first page (a column header or the phone's sort list).
+  watch(sort, () => (page.value = 1));
+
   /** A column's sorter props, showing the current sort. */
   const sortable = (key: string) => ({
     sorter: true,
