@@ -79,13 +79,13 @@ export const pressesApi = {
   update: (id: number, patch: PressUpdate) => api<Press>(`/presses/${id}`, { method: 'PATCH', body: patch }),
 };
 
-type Query = Record<string, string | number | boolean | undefined>;
+type Query = Record<string, string | number | boolean | null | undefined>;
 
 /** A query string of the values that are set. */
 function searchParams(query: Query): URLSearchParams {
   const params = new URLSearchParams();
   for (const [key, value] of Object.entries(query))
-    if (value !== undefined && value !== '') params.set(key, String(value));
+    if (value !== undefined && value !== null && value !== '') params.set(key, String(value));
   return params;
 }
 
