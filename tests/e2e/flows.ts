@@ -29,6 +29,8 @@ export async function postRequest(
     screenshots?: (name: string) => Promise<void>;
     dieline?: { file: string; metricsShow: string };
     oneUp?: { across: number; along: number; gutterIn: number };
+    /** The caliper as typed in the user's units (points, or millimetres for a metric user). */
+    caliper?: string;
     /** The press to choose (its name begins so) and the delivery postcode. */
     press?: string;
     postcode?: string;
@@ -44,7 +46,10 @@ export async function postRequest(
   await p.locator('[data-test=req-title]').fill(title);
   await p.locator('[data-test=req-job]').fill('LPC-E2E');
   await p.locator('[data-test=req-stock]').fill('16 pt SBS');
-  await p.locator('[data-test=req-caliper] input, input[data-test=req-caliper]').first().fill('16');
+  await p
+    .locator('[data-test=req-caliper] input, input[data-test=req-caliper]')
+    .first()
+    .fill(opts.caliper ?? '16');
   if (opts.oneUp) {
     await p.locator('[data-test=dieline-one-up]').click();
     await p.locator('input[data-test=ups-across]').fill(String(opts.oneUp.across));

@@ -37,6 +37,7 @@ describe('a metric buyer in Berlin and a die shop in Chicago', () => {
     const typed = `${date.d} ${part({ month: 'short' })} ${date.y} 17:00`;
     const title = `Metric sleeve ${Date.now()}`;
     const id = await postRequest(hanna, title, {
+      caliper: '0.4',
       press: 'Flachbett 1',
       postcode: '12099',
       deadlineText: typed,
@@ -68,6 +69,8 @@ describe('a metric buyer in Berlin and a die shop in Chicago', () => {
     await expect.poll(() => subtitle.innerText()).toContain(`due ${shown('en-GB', 'Europe/Berlin')}`);
     // 200 mm = 7.874 in and 150 mm = 5.906 in (1 in = 25.4 mm exactly); shown back in millimetres.
     expect(await hanna.locator('main').innerText()).toContain('200.0 × 150.0 mm');
+    // 0.4 mm = 15.748 thousandths of an inch: the caliper in millimetres first, points beside.
+    expect(await hanna.locator('main').innerText()).toContain('0.40 mm (15.7 pt)');
     expect(await hanna.locator('[data-test=metrics]').innerText()).toMatch(/Total\s+[\d,.]+ mm/);
 
     const grace = await pageAs(browser(), 'grace@brightline.example', 1440, 'Asia/Tokyo');
@@ -75,6 +78,7 @@ describe('a metric buyer in Berlin and a die shop in Chicago', () => {
     const theirs = grace.locator('.page-subtitle');
     await expect.poll(() => theirs.innerText()).toContain(`due ${shown('en-US', 'America/Chicago')}`);
     expect(await grace.locator('main').innerText()).toContain('7.87 × 5.91 in');
+    expect(await grace.locator('main').innerText()).toContain('15.7 pt (0.40 mm)');
     await expect.poll(() => grace.locator('[data-test=metrics]').innerText()).toMatch(/Total\s+[\d,.]+ in/);
     await screenshot(grace, 'metric-buyer-shop-view');
   });

@@ -86,9 +86,13 @@ export const statusLabel = (status: RequestStatus) => requestStatusLabels[status
 export const bytes = (n: number) =>
   n < 1024 ? `${n} B` : n < 1048576 ? `${(n / 1024).toFixed(0)} KB` : `${(n / 1048576).toFixed(1)} MB`;
 
-/** Caliper is given in points (thousandths of an inch) in North America. */
-export const caliper = (inchValue: number | null | undefined) =>
-  inchValue ? `${Math.round(inchValue * 1000 * 10) / 10} pt (${inchesToMm(inchValue).toFixed(2)} mm)` : '—';
+/** A caliper in points (thousandths of an inch, as North America sells board) and millimetres, the user’s unit first. */
+export const caliper = (inchValue: number | null | undefined) => {
+  if (!inchValue) return '—';
+  const points = `${Math.round(inchValue * 1000 * 10) / 10} pt`;
+  const mm = `${inchesToMm(inchValue).toLocaleString(displayLocale.value, { minimumFractionDigits: 2, maximumFractionDigits: 2 })} mm`;
+  return lengthUnits.value === 'mm' ? `${mm} (${points})` : `${points} (${mm})`;
+};
 
 /** A gutter as typed: "0 in", "0.125 in". */
 export const gutter = (value: number) =>

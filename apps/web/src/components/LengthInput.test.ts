@@ -37,4 +37,18 @@ describe('LengthInput', () => {
     const w = mountWithApp(LengthInput, { value: 1, unitLabel: 'Unit of the gutter', 'data-test': 'sheet' });
     expect(w.find('[aria-label="Unit of the gutter"]').exists()).toBe(true);
   });
+
+  it('takes a caliper in points or millimetres and gives the form points', async () => {
+    const w = mountWithApp(LengthInput, { value: 16, fine: true, 'data-test': 'sheet' });
+    expect((w.find('input[data-test=sheet]').element as HTMLInputElement).value).toBe('16');
+    expect(w.text()).toContain('pt');
+    lengthUnits.value = 'mm';
+    const metric = mountWithApp(LengthInput, { value: undefined, fine: true, 'data-test': 'sheet' });
+    const input = metric.find('input[data-test=sheet]');
+    await input.setValue('0.45');
+    await input.trigger('blur');
+    await settle();
+    // 0.45 mm ÷ 25.4 mm/in = 0.017717 in = 17.717 pt.
+    expect(metric.emitted('update:value')!.at(-1)).toEqual([17.717]);
+  });
 });
