@@ -44,9 +44,10 @@ export async function notifyOrganisation(
       'u.email',
       'u.name',
       'u.preferences',
-      trx.raw('coalesce(u.length_units, o.length_units) as length_units'),
+      // Single-word names: the API's mappers would turn length_units into lengthUnits.
+      trx.raw('coalesce(u.length_units, o.length_units) as units'),
       trx.raw('coalesce(u.locale, o.locale) as locale'),
-      'o.time_zone',
+      'o.time_zone as zone',
     );
   if (opts.roles) query.whereIn('u.role', [...opts.roles]);
   if (opts.onlyUserIds) query.whereIn('u.id', [...opts.onlyUserIds]);
@@ -55,16 +56,16 @@ export async function notifyOrganisation(
     email: string;
     name: string;
     preferences: Record<string, boolean> | null;
-    length_units: LengthUnits;
+    units: LengthUnits;
     locale: DisplayLocale;
-    time_zone: string;
+    zone: string;
   }>;
   const outbox: number[] = [];
   for (const user of users) {
     const body =
       typeof opts.notice.body === 'string'
         ? opts.notice.body
-        : opts.notice.body({ lengthUnits: user.length_units, locale: user.locale, timeZone: user.time_zone });
+        : opts.notice.body({ lengthUnits: user.units, locale: user.locale, timeZone: user.zone });
     await trx('notifications').insert({
       user_id: user.id,
       kind: opts.notice.kind,

@@ -189,6 +189,9 @@ describe('award', () => {
     const winnerMail = await waitForEmail(w.users.estimator.email, 'Awarded to you');
     expect(winnerMail.subject).toContain('Awarded to you');
     expect(winnerMail.text).toContain(awarded.body.award.poNumber);
+    // What the die measures, in the reader's units (inches for this US shop): 14 + 4 in of rule.
+    expect(winnerMail.text).toContain('Your bid of $985.00');
+    expect(winnerMail.text).toMatch(/The die has 18\.0 in of rule on a [\d.]+ × [\d.]+ in board\./);
     const loserMail = await waitForEmail(second.estimator.email, 'Not awarded');
     expect(loserMail.subject).toContain('Not awarded');
     expect(loserMail.text).not.toMatch(/\$|PO-/);

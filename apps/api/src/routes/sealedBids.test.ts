@@ -1,9 +1,10 @@
+import { formatInZone } from '@kerfmark/contracts';
 import request from 'supertest';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { MIN_DEADLINE_NOTICE_MS } from '../access';
 import { DieRequest, Notification } from '../models';
 import { bidBody } from '../test/fixtures';
-import { app, createOpenRequest, createShop, createWorld, waitForEmail, type World } from '../test/harness';
+import { app, createOpenRequest, createShop, createWorld, knex, waitForEmail, type World } from '../test/harness';
 
 // Sealed means sealed by every route: cancelling, moving the deadline and the home page included.
 const bearer = (token: string) => ({ Authorization: `Bearer ${token}` });
@@ -111,7 +112,13 @@ describe('moving an open request’s deadline', () => {
     expect(res.status, JSON.stringify(res.body)).toBe(200);
     for (const user of [w.users.estimator, second.estimator]) {
       expect((await noticesOf(user.id, r.id)).map((n) => n.kind)).toContain('deadline_changed');
-      await waitForEmail(user.email, `New bid deadline: ${r.title}`);
+      const mail = await waitForEmail(user.email, `New bid deadline: ${r.title}`);
+      // In the reader's own zone, as the shop reads its clock.
+      const { timeZone } = await knex('users as u')
+        .join('organisations as o', 'o.id', 'u.organisationId')
+        .where('u.id', user.id)
+        .first('o.timeZone');
+      expect(mail.text).toContain(`is now ${formatInZone(later, timeZone)}.`);
     }
   });
 

@@ -99,7 +99,7 @@ export async function tellOutcome(
           title: `Awarded to you: ${request.title} (${poNumber})`,
           body: (reader) =>
             [
-              `Your bid of ${formatMoney({ cents: bid.totalCents, currency: bid.currency })} on "${request.title}" ` +
+              `Your bid of ${formatMoney({ cents: bid.totalCents, currency: bid.currency }, reader.locale)} on "${request.title}" ` +
                 `was awarded. Purchase order ${poNumber} is attached to the request; the promised ship date is ` +
                 `${formatCalendarDate(bid.promisedShipDate, reader.locale)}.`,
               dieSummary(die, reader),
