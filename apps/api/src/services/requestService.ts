@@ -6,6 +6,7 @@ import type { ServiceDeps } from './deps';
 import { requestDetail } from './requests/requestDetail';
 import { createRequest, updateRequest } from './requests/requestEdits';
 import { cancelRequest, publishRequest } from './requests/requestLifecycle';
+import { boardVersion } from './requests/boardVersion';
 import { listOwnRequests, openRequestsFor } from './requests/requestLists';
 import { shopChoices } from './requests/shopChoices';
 import { factsFor, findOwned, findVisible, visibleQuery } from './requests/requestLookup';
@@ -26,6 +27,7 @@ export function createRequestService(deps: ServiceDeps) {
     dieShops: (actor: AuthUser, q: z.output<typeof DieShopsQuery>) => shopChoices(knex, actor, q),
     /** The open requests a die shop may bid on: filtered, sorted and paged by the database. */
     openRequests: (actor: AuthUser, q: z.output<typeof OpenRequestsQuery>) => openRequestsFor(knex, actor, q),
+    boardVersion: (actor: AuthUser, q: z.output<typeof OpenRequestsQuery>) => boardVersion(knex, actor, q),
     create: async (actor: AuthUser, input: DieRequestCreate) => detail(actor, await createRequest(knex, actor, input)),
     update: async (actor: AuthUser, id: number, patch: DieRequestUpdate) => {
       await updateRequest(deps, actor, id, patch);

@@ -21,6 +21,25 @@ const ORDER: Record<string, string> = {
   distance: 'd.miles',
 };
 
+/** The open requests that match a shop's board query, as a query of `die_requests as r` to build on. */
+export function matchingOpenRequests(knex: Knex, shopId: number, q: z.output<typeof OpenRequestsQuery>) {
+  const query = knex('dieRequests as r').where(biddableByShop(knex, shopId, 'r'));
+  if (q.minIn !== undefined) query.where('r.measuredRuleIn', '>=', q.minIn);
+  if (q.maxIn !== undefined) query.where('r.measuredRuleIn', '<=', q.maxIn);
+  if (q.complexity) query.where('r.measuredComplexity', q.complexity);
+  if (q.withinDays) query.where('r.bidDeadline', '<=', new Date(Date.now() + q.withinDays * 86_400_000));
+  if (q.ruleTypes?.length) query.whereRaw('r.rule_types @> ?::text[]', [q.ruleTypes]);
+  if (q.canMake) query.where(shopCanMake(knex, shopId, 'r'));
+  if (q.hideDeclined) query.whereNotIn('r.id', knex('requestDeclines').where({ shopId }).select('requestId'));
+  if (q.q) {
+    const like = containsPattern(q.q);
+    query
+      .join('organisations as o', 'o.id', 'r.organisationId')
+      .where((b) => b.whereILike('r.title', like).orWhereILike('r.jobReference', like).orWhereILike('o.name', like));
+  }
+  return query;
+}
+
 /**
  * One page of the requests open to this die shop, filtered and sorted by the database
  * and read in full, with the count of every match. The request rows carry their measured
@@ -34,23 +53,7 @@ export async function openRequestsPage(
   miles: Array<{ postcode: string; miles: number }>,
 ): Promise<{ rows: Array<BoardRow & { request: DieRequest }>; total: number }> {
   // The requests that match, as a fresh query each time it is needed.
-  const matching = () => {
-    const query = knex('dieRequests as r').where(biddableByShop(knex, shopId, 'r'));
-    if (q.minIn !== undefined) query.where('r.measuredRuleIn', '>=', q.minIn);
-    if (q.maxIn !== undefined) query.where('r.measuredRuleIn', '<=', q.maxIn);
-    if (q.complexity) query.where('r.measuredComplexity', q.complexity);
-    if (q.withinDays) query.where('r.bidDeadline', '<=', new Date(Date.now() + q.withinDays * 86_400_000));
-    if (q.ruleTypes?.length) query.whereRaw('r.rule_types @> ?::text[]', [q.ruleTypes]);
-    if (q.canMake) query.where(shopCanMake(knex, shopId, 'r'));
-    if (q.hideDeclined) query.whereNotIn('r.id', knex('requestDeclines').where({ shopId }).select('requestId'));
-    if (q.q) {
-      const like = containsPattern(q.q);
-      query
-        .join('organisations as o', 'o.id', 'r.organisationId')
-        .where((b) => b.whereILike('r.title', like).orWhereILike('r.jobReference', like).orWhereILike('o.name', like));
-    }
-    return query;
-  };
+  const matching = () => matchingOpenRequests(knex, shopId, q);
   const page = matching()
     .select('r.id', 'd.miles as distanceMiles')
     .select(knex.raw('r.id in (select request_id from request_declines where shop_id = ?) as declined', [shopId]))

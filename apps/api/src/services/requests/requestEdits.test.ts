@@ -15,7 +15,9 @@ describe('request edits', () => {
     await updateRequest(deps, actorOf(w.users.buyer, w.printer), request.id, { quantity: 3 });
     const after = await DieRequest.query().findById(request.id).throwIfNotFound();
     expect(after.quantity).toBe(3);
-    expect({ ...after, quantity: before.quantity, updatedAt: before.updatedAt }).toEqual(before);
+    expect({ ...after, quantity: before.quantity, updatedAt: before.updatedAt, changedAt: before.changedAt }).toEqual(
+      before,
+    );
   });
 
   it('lets the deadline move later for the buyer, earlier only for purchasing and with a day’s notice', async () => {
