@@ -66,6 +66,8 @@ export class DieRequest extends Model {
   lateFlaggedAt!: Date | null;
   createdAt!: Date;
   updatedAt!: Date;
+  /** Stamped by the database on every update (migration 20261204000800); the board's tag reads it. */
+  changedAt!: Date;
   organisation?: Organisation;
   press?: Press | null;
   files?: DielineFile[];
