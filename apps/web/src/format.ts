@@ -64,6 +64,12 @@ export const pickerFormats = (withTime: boolean): string[] => {
   return [...shown, 'YYYY-MM-DD'].map((f) => `${f}${time}`);
 };
 
+/** A distance in miles, in kilometres for metric readers (1 mi = 1.609344 km exactly): "12 mi", "19 km". */
+export const distanceText = (miles: number) =>
+  lengthUnits.value === 'mm'
+    ? `${Math.round(miles * 1.609344).toLocaleString(displayLocale.value)} km`
+    : `${Math.round(miles).toLocaleString(displayLocale.value)} mi`;
+
 /** A calendar date (YYYY-MM-DD) for people: "Fri, Dec 18, 2026". */
 export const calendarDate = (date: string | null | undefined) =>
   date ? formatCalendarDate(date, displayLocale.value) : '—';

@@ -1,4 +1,4 @@
-import type { DielineMetrics } from '@kerfmark/dieline';
+import type { Complexity, DielineMetrics, LengthByType } from '@kerfmark/dieline';
 import type { StockKind } from '@kerfmark/stock';
 import type { BidDto } from './bids';
 import type { Press } from './presses';
@@ -42,13 +42,34 @@ export interface DieRequestSummary {
   visibility: Visibility;
   metrics: DielineMetrics | null;
   analysisStatus: AnalysisStatus | null;
-  /** For die shops: straight-line miles from the shop to the delivery postcode, when both are known. */
-  distanceMiles?: number | null;
-  /** For die shops: the shop said it is not bidding, or it has bid. */
-  declined?: boolean;
-  hasBid?: boolean;
   createdAt: string;
   updatedAt: string;
+}
+
+/**
+ * One row of the die shops' board: only what the board shows. The full metrics, layers and
+ * warnings are on the request page.
+ */
+export interface OpenRequestRow {
+  id: number;
+  title: string;
+  jobReference: string | null;
+  organisationName: string;
+  quantity: number;
+  ups: number;
+  ruleTypes: RuleType[];
+  needByDate: string | null;
+  bidDeadline: string | null;
+  deliveryPostcode: string | null;
+  /** Rule length by rule type, in inches, once the dieline is measured. */
+  length: LengthByType | null;
+  complexity: Complexity | null;
+  analysisStatus: AnalysisStatus | null;
+  /** Straight-line miles from the shop to the delivery postcode, when both are known. */
+  distanceMiles: number | null;
+  /** The shop said it is not bidding, or it has bid. */
+  declined: boolean;
+  hasBid: boolean;
 }
 
 export interface RequestQuestionDto {

@@ -26,6 +26,7 @@ import type {
   DieRequestCreate,
   DieRequestDetail,
   DieRequestSummary,
+  OpenRequestRow,
   DieRequestUpdate,
   Invitation,
   Page,
@@ -102,7 +103,7 @@ export const requestsApi = {
     api<RequestQuestionDto>(`/requests/${id}/questions`, { method: 'POST', body: { question } }),
   answer: (id: number, questionId: number, answer: string) =>
     api<RequestQuestionDto>(`/requests/${id}/questions/${questionId}/answer`, { method: 'POST', body: { answer } }),
-  openRequests: (query: Query) => api<Page<DieRequestSummary>>(`/open-requests?${searchParams(query)}`),
+  openRequests: (query: Query) => api<Page<OpenRequestRow>>(`/open-requests?${searchParams(query)}`),
   dieShops: (query: Query) => api<DieShopChoices>(`/die-shops?${searchParams(query)}`),
 };
 

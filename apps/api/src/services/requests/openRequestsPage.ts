@@ -1,18 +1,9 @@
-import type { OpenRequestsQuery } from '@kerfmark/contracts';
+import type { OpenRequestRow, OpenRequestsQuery } from '@kerfmark/contracts';
 import type { Knex } from 'knex';
 import type { z } from 'zod';
 import { containsPattern } from '../../lib/containsPattern';
-import { DieRequest } from '../../models';
 import { biddableByShop } from '../../access';
-import { readRequestGraph } from './requestGraph';
 import { shopCanMake } from './shopCanMake';
-import { SUMMARY_COLUMNS } from '../../dto/requestViews';
-
-export interface BoardRow {
-  distanceMiles: number | null;
-  declined: boolean;
-  hasBid: boolean;
-}
 
 const ORDER: Record<string, string> = {
   bidDeadline: 'r.bid_deadline',
@@ -41,8 +32,8 @@ export function matchingOpenRequests(knex: Knex, shopId: number, q: z.output<typ
 }
 
 /**
- * One page of the requests open to this die shop, filtered and sorted by the database
- * and read in full, with the count of every match. The request rows carry their measured
+ * One page of the requests open to this die shop, filtered and sorted by the database, each
+ * row with only what the board shows, and the count of every match. The request rows carry their measured
  * dieline's figures (migration 009); `miles` gives the distance from the shop to each delivery
  * postcode it knows.
  */
@@ -51,7 +42,7 @@ export async function openRequestsPage(
   shopId: number,
   q: z.output<typeof OpenRequestsQuery>,
   miles: Array<{ postcode: string; miles: number }>,
-): Promise<{ rows: Array<BoardRow & { request: DieRequest }>; total: number }> {
+): Promise<{ rows: OpenRequestRow[]; total: number }> {
   // The requests that match, as a fresh query each time it is needed.
   const matching = () => matchingOpenRequests(knex, shopId, q);
   const page = matching()
@@ -79,29 +70,55 @@ export async function openRequestsPage(
     .orderByRaw(order)
     .limit(q.pageSize)
     .offset((q.page - 1) * q.pageSize);
-  // The page's requests in full and the count of every match, in one query: the count is a
-  // subquery of its own, which PostgreSQL works out once (a window count over the page's query
-  // would sort every match to number 25 of them). Only a page past the end asks for it alone.
+  // The page's rows, only what the board shows, and the count of every match, in one query:
+  // the count is a subquery of its own, which PostgreSQL works out once (a window count over the
+  // page's query would sort every match to number 25 of them). The file that stands for the
+  // request is the one marked primary, else the newest measured, else the newest (primaryFile).
+  // Only a page past the end asks for the count alone.
   const count = () => matching().count('*');
-  const requests = (await readRequestGraph(
-    knex,
-    DieRequest.query()
-      .join(page.as('page'), 'page.id', 'die_requests.id')
-      .select('page.distanceMiles', 'page.declined', 'page.hasBid', count().as('totalMatches'))
-      .orderBy('page.position'),
-    ['organisation', 'press', 'fileSummaries'],
-    SUMMARY_COLUMNS,
-  )) as Array<DieRequest & BoardRow & { totalMatches: number }>;
+  const rows = (await knex
+    .from(page.as('page'))
+    .join('dieRequests as r', 'r.id', 'page.id')
+    .join('organisations as o', 'o.id', 'r.organisationId')
+    .joinRaw(
+      `left join lateral (
+        select f.analysis_status, f.metrics from dieline_files f where f.request_id = r.id
+        order by (f.is_primary and f.analysis_status = 'done') desc, (f.analysis_status = 'done') desc,
+          f.uploaded_at desc, f.id desc
+        limit 1) f on true`,
+    )
+    .select(
+      'r.id',
+      'r.title',
+      'r.jobReference',
+      'o.name as organisationName',
+      'r.quantity',
+      'r.ups',
+      'r.ruleTypes',
+      'r.needByDate',
+      'r.bidDeadline',
+      'r.deliveryPostcode',
+      knex.raw(`case when f.analysis_status = 'done' then f.metrics->'length' end as length`),
+      knex.raw(`case when f.analysis_status = 'done' then f.metrics->>'complexity' end as complexity`),
+      'f.analysisStatus',
+      'page.distanceMiles',
+      'page.declined',
+      'page.hasBid',
+      count().as('totalMatches'),
+    )
+    .orderBy('page.position')
+    .options({ prepare: true })) as Array<
+    Omit<OpenRequestRow, 'bidDeadline'> & { bidDeadline: Date | null; totalMatches: number }
+  >;
   const total =
-    requests[0]?.totalMatches ??
+    rows[0]?.totalMatches ??
     Number(((await count().options({ prepare: true })) as Array<{ count: number }>)[0]?.count ?? 0);
   return {
-    rows: requests.map((request) => {
-      const { distanceMiles, declined, hasBid } = request;
-      for (const key of ['distanceMiles', 'declined', 'hasBid', 'totalMatches'] as const)
-        delete (request as Partial<typeof request>)[key];
-      return { request, distanceMiles: distanceMiles === null ? null : Math.round(distanceMiles), declined, hasBid };
-    }),
+    rows: rows.map(({ totalMatches: _total, bidDeadline, distanceMiles, ...row }) => ({
+      ...row,
+      bidDeadline: bidDeadline?.toISOString() ?? null,
+      distanceMiles: distanceMiles === null ? null : Math.round(distanceMiles),
+    })),
     total,
   };
 }

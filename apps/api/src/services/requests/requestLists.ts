@@ -1,4 +1,4 @@
-import type { DieRequestSummary, OpenRequestsQuery, Page, RequestListQuery } from '@kerfmark/contracts';
+import type { DieRequestSummary, OpenRequestRow, OpenRequestsQuery, Page, RequestListQuery } from '@kerfmark/contracts';
 import type { Knex } from 'knex';
 import type { z } from 'zod';
 import type { AuthUser } from '../../auth/passport';
@@ -39,7 +39,7 @@ export async function openRequestsFor(
   knex: Knex,
   actor: AuthUser,
   q: z.output<typeof OpenRequestsQuery>,
-): Promise<Page<DieRequestSummary>> {
+): Promise<Page<OpenRequestRow>> {
   const from = postcodeCentre(actor.orgPostcode);
   // Distances to the delivery postcodes open requests use, only those the dataset places.
   const miles: Array<{ postcode: string; miles: number }> = [];
@@ -54,10 +54,5 @@ export async function openRequestsFor(
     }
   }
   const { rows, total } = await openRequestsPage(knex, actor.organisationId, q, miles);
-  return {
-    items: rows.map(({ request, ...row }) => ({ ...toSummary(request), ...row })),
-    total,
-    page: q.page,
-    pageSize: q.pageSize,
-  };
+  return { items: rows, total, page: q.page, pageSize: q.pageSize };
 }
