@@ -11,15 +11,13 @@ export function openRequestRoutes(services: Services, requireAuth: RequestHandle
   // from one aggregate query without reading the rows (the browser revalidates: no-cache).
   router.get('/open-requests', requireAuth, allow({ kind: 'die_shop' }), async (req, res) => {
     const q = parse(OpenRequestsQuery, req.query);
-    res
-      .set('ETag', await services.requests.boardVersion(req.user!, q))
-      .set('Cache-Control', 'private, no-cache')
-      .set('Vary', 'Authorization');
+    const { tag, total } = await services.requests.boardVersion(req.user!, q);
+    res.set('ETag', tag).set('Cache-Control', 'private, no-cache').set('Vary', 'Authorization');
     if (req.fresh) {
       res.status(304).end();
       return;
     }
-    res.json(await services.requests.openRequests(req.user!, q));
+    res.json(await services.requests.openRequests(req.user!, q, total));
   });
 
   router.get('/die-shops', requireAuth, allow({ kind: 'printer' }), async (req, res) => {

@@ -9,29 +9,26 @@ import { matchingOpenRequests } from './openRequestsPage';
 const BOOT = `${process.pid}-${Date.now()}`;
 
 /**
- * A tag for one page of a shop's board that changes whenever what the page shows may have:
- * the matching requests' count, ids and newest change (migration 20261204000800 stamps every
- * update, the measure trigger's included), the newest change to their printers (a name) and to
- * the shop (its profile), and the shop's own bids and declines. One aggregate query, no
- * row read: a reload that finds nothing new is answered 304 from it.
+ * A tag for one page of a shop's board that changes whenever what the page shows may have, and
+ * the count of every match, from one pass over the matching requests: their count, ids and
+ * newest change and their printers' newest change (migration 20261204000800 stamps every update,
+ * the measure trigger's included), the shop's own newest change (its profile), and its bids and
+ * declines. No row is read: a reload that finds nothing new is answered 304 from this alone,
+ * and a full answer takes its total from here.
  */
 export async function boardVersion(
   knex: Knex,
   actor: AuthUser,
   q: z.output<typeof OpenRequestsQuery>,
-): Promise<string> {
+): Promise<{ tag: string; total: number }> {
   const shopId = actor.organisationId;
-  const requests = matchingOpenRequests(knex, shopId, q)
-    .select(knex.raw("count(*) || ':' || coalesce(sum(r.id), 0) || ':' || coalesce(max(r.changed_at)::text, '')"))
-    .as('requests');
-  const [row] = (await knex
+  const [row] = (await matchingOpenRequests(knex, shopId, q)
+    .join('organisations as printer', 'printer.id', 'r.organisationId')
     .select(
-      requests,
-      knex('organisations').where('id', shopId).select('changedAt').as('shop'),
-      knex('organisations')
-        .whereIn('id', matchingOpenRequests(knex, shopId, q).select('r.organisationId'))
-        .max('changedAt')
-        .as('printers'),
+      knex.raw('count(*)::int as total'),
+      knex.raw("coalesce(sum(r.id), 0) || ':' || coalesce(max(r.changed_at)::text, '') as requests"),
+      knex.raw('max(printer.changed_at)::text as printers'),
+      knex('organisations').where('id', shopId).select(knex.raw('changed_at::text')).as('shop'),
       knex('bids')
         .where({ shopId })
         .select(
@@ -43,7 +40,10 @@ export async function boardVersion(
         .select(knex.raw("count(*) || ':' || coalesce(sum(request_id), 0)"))
         .as('declines'),
     )
-    .options({ prepare: true })) as Array<Record<string, unknown>>;
+    .options({ prepare: true })) as Array<Record<string, unknown> & { total: number }>;
   const parts = [BOOT, shopId, actor.orgPostcode, JSON.stringify(q), JSON.stringify(row)];
-  return `W/"${createHash('sha256').update(parts.join('|')).digest('base64url').slice(0, 27)}"`;
+  return {
+    tag: `W/"${createHash('sha256').update(parts.join('|')).digest('base64url').slice(0, 27)}"`,
+    total: row?.total ?? 0,
+  };
 }

@@ -42,6 +42,8 @@ export async function openRequestsPage(
   shopId: number,
   q: z.output<typeof OpenRequestsQuery>,
   miles: Array<{ postcode: string; miles: number }>,
+  /** The count of every match when the caller has it (the board's tag counts them). */
+  knownTotal?: number,
 ): Promise<{ rows: OpenRequestRow[]; total: number }> {
   // The requests that match, as a fresh query each time it is needed.
   const matching = () => matchingOpenRequests(knex, shopId, q);
@@ -70,11 +72,11 @@ export async function openRequestsPage(
     .orderByRaw(order)
     .limit(q.pageSize)
     .offset((q.page - 1) * q.pageSize);
-  // The page's rows, only what the board shows, and the count of every match, in one query:
-  // the count is a subquery of its own, which PostgreSQL works out once (a window count over the
-  // page's query would sort every match to number 25 of them). The file that stands for the
-  // request is the one marked primary, else the newest measured, else the newest (primaryFile).
-  // Only a page past the end asks for the count alone.
+  // The page's rows, only what the board shows, with the count of every match unless the caller
+  // has it: the count is a subquery of its own, which PostgreSQL works out once (a window count
+  // over the page's query would sort every match to number 25 of them). The file that stands
+  // for the request is the one marked primary, else the newest measured, else the newest
+  // (primaryFile). Only a page past the end asks for the count alone.
   const count = () => matching().count('*');
   const rows = (await knex
     .from(page.as('page'))
@@ -104,13 +106,14 @@ export async function openRequestsPage(
       'page.distanceMiles',
       'page.declined',
       'page.hasBid',
-      count().as('totalMatches'),
+      knownTotal === undefined ? count().as('totalMatches') : knex.raw('?::int as total_matches', [knownTotal]),
     )
     .orderBy('page.position')
     .options({ prepare: true })) as Array<
     Omit<OpenRequestRow, 'bidDeadline'> & { bidDeadline: Date | null; totalMatches: number }
   >;
   const total =
+    knownTotal ??
     rows[0]?.totalMatches ??
     Number(((await count().options({ prepare: true })) as Array<{ count: number }>)[0]?.count ?? 0);
   return {

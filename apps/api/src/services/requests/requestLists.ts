@@ -39,6 +39,7 @@ export async function openRequestsFor(
   knex: Knex,
   actor: AuthUser,
   q: z.output<typeof OpenRequestsQuery>,
+  knownTotal?: number,
 ): Promise<Page<OpenRequestRow>> {
   const from = postcodeCentre(actor.orgPostcode);
   // Distances to the delivery postcodes open requests use, only those the dataset places.
@@ -53,6 +54,6 @@ export async function openRequestsFor(
       if (centre) miles.push({ postcode, miles: distanceMiles(from, centre) });
     }
   }
-  const { rows, total } = await openRequestsPage(knex, actor.organisationId, q, miles);
+  const { rows, total } = await openRequestsPage(knex, actor.organisationId, q, miles, knownTotal);
   return { items: rows, total, page: q.page, pageSize: q.pageSize };
 }
