@@ -78,7 +78,7 @@ export async function openRequestsPage(
   // for the request is the one marked primary, else the newest measured, else the newest
   // (primaryFile). Only a page past the end asks for the count alone.
   const count = () => matching().count('*');
-  const rows = (await knex
+  const query = knex
     .from(page.as('page'))
     .join('dieRequests as r', 'r.id', 'page.id')
     .join('organisations as o', 'o.id', 'r.organisationId')
@@ -106,11 +106,12 @@ export async function openRequestsPage(
       'page.distanceMiles',
       'page.declined',
       'page.hasBid',
-      knownTotal === undefined ? count().as('totalMatches') : knex.raw('?::int as total_matches', [knownTotal]),
     )
     .orderBy('page.position')
-    .options({ prepare: true })) as Array<
-    Omit<OpenRequestRow, 'bidDeadline'> & { bidDeadline: Date | null; totalMatches: number }
+    .options({ prepare: true });
+  if (knownTotal === undefined) query.select(count().as('totalMatches'));
+  const rows = (await query) as Array<
+    Omit<OpenRequestRow, 'bidDeadline'> & { bidDeadline: Date | null; totalMatches?: number }
   >;
   const total =
     knownTotal ??
