@@ -88,3 +88,32 @@ describe('the board revalidates', () => {
     expect(after.body.items[0].declined).toBe(true);
   });
 });
+
+describe('the board shows the dies the shop can make', () => {
+  it('reads what the shop has said with each sign-in, so a profile change shows at once, with a new tag', async () => {
+    const mine = (token: string) =>
+      request(app)
+        .get(`/api/open-requests?q=${encodeURIComponent(title)}&hideDeclined=false`)
+        .set(bearer(token));
+    await knex('dieRequests').where({ id: requestId }).update({ counterWanted: true });
+    const profile = (makesCounters: boolean) =>
+      request(app)
+        .patch('/api/organisation/profile')
+        .set(bearer(w.tokens.shopAdmin))
+        .send({ makesCounters })
+        .expect(200);
+
+    await profile(false);
+    const without = await mine(w.tokens.estimator);
+    expect(without.status).toBe(200);
+    expect(without.body.items.map((r: { id: number }) => r.id)).not.toContain(requestId);
+
+    await profile(true);
+    const withIt = await mine(w.tokens.estimator);
+    expect(withIt.body.items.map((r: { id: number }) => r.id)).toContain(requestId);
+    expect(withIt.headers.etag).not.toBe(without.headers.etag);
+    // The old tag is no answer to the new board.
+    const revalidated = await mine(w.tokens.estimator).set('If-None-Match', without.headers.etag as string);
+    expect(revalidated.status).toBe(200);
+  });
+});

@@ -7,17 +7,21 @@ import type { Services } from '../services';
 /** The die shops' side: open requests to bid on; and the printers' list of shops to invite. */
 export function openRequestRoutes(services: Services, requireAuth: RequestHandler): Router {
   const router = Router();
-  // The board is reloaded many times a day: a reload that finds nothing new is a 304, answered
-  // from one aggregate query without reading the rows (the browser revalidates: no-cache).
+  // The board is reloaded many times a day: a reload that sends its tag and finds nothing new is
+  // a 304, answered from one aggregate query without reading the rows (the browser revalidates:
+  // no-cache). Otherwise the page and its tag come from one query.
   router.get('/open-requests', requireAuth, allow({ kind: 'die_shop' }), async (req, res) => {
     const q = parse(OpenRequestsQuery, req.query);
-    const { tag, total } = await services.requests.boardVersion(req.user!, q);
-    res.set('ETag', tag).set('Cache-Control', 'private, no-cache').set('Vary', 'Authorization');
-    if (req.fresh) {
-      res.status(304).end();
-      return;
+    res.set('Cache-Control', 'private, no-cache').set('Vary', 'Authorization');
+    if (req.get('If-None-Match')) {
+      res.set('ETag', await services.requests.boardVersion(req.user!, q));
+      if (req.fresh) {
+        res.status(304).end();
+        return;
+      }
     }
-    res.json(await services.requests.openRequests(req.user!, q, total));
+    const { page, tag } = await services.requests.openRequests(req.user!, q);
+    res.set('ETag', tag).json(page);
   });
 
   router.get('/die-shops', requireAuth, allow({ kind: 'printer' }), async (req, res) => {

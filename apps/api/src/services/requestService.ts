@@ -25,10 +25,9 @@ export function createRequestService(deps: ServiceDeps) {
     list: (actor: AuthUser, q: z.output<typeof RequestListQuery>) => listOwnRequests(actor, q),
     /** The die shops a printer may invite, each with how it fits the die so far. */
     dieShops: (actor: AuthUser, q: z.output<typeof DieShopsQuery>) => shopChoices(knex, actor, q),
-    /** The open requests a die shop may bid on: filtered, sorted and paged by the database. */
-    /** A page of the board; `total` is the count the board's tag already made, when there is one. */
-    openRequests: (actor: AuthUser, q: z.output<typeof OpenRequestsQuery>, total?: number) =>
-      openRequestsFor(knex, actor, q, total),
+    /** A page of the open requests a die shop may bid on, with its tag. */
+    openRequests: (actor: AuthUser, q: z.output<typeof OpenRequestsQuery>) => openRequestsFor(knex, actor, q),
+    /** The tag of a page of the open requests alone, to answer a reload that has it with 304. */
     boardVersion: (actor: AuthUser, q: z.output<typeof OpenRequestsQuery>) => boardVersion(knex, actor, q),
     create: async (actor: AuthUser, input: DieRequestCreate) => detail(actor, await createRequest(knex, actor, input)),
     update: async (actor: AuthUser, id: number, patch: DieRequestUpdate) => {

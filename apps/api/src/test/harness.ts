@@ -3,7 +3,7 @@ import type { Express } from 'express';
 import { pino } from 'pino';
 import request from 'supertest';
 import { afterAll } from 'vitest';
-import type { OrgKind, Role } from '@kerfmark/contracts';
+import type { OrgKind, Role, ShopCapabilities } from '@kerfmark/contracts';
 import { createApp } from '../app';
 import { hashPassword } from '../auth/passwords';
 import { loadConfig, type Config } from '../config';
@@ -159,6 +159,12 @@ export const deps: ServiceDeps = {
   storage,
 };
 
+/** A die shop's capabilities as the sign-in reads them, from its model. */
+function shopCapabilitiesOf(org: Organisation): ShopCapabilities {
+  const { dieKinds, maxBoardWidthIn, maxBoardLengthIn, ruleHeightsIn, makesCounters, fitsEjectionRubber } = org;
+  return { dieKinds, maxBoardWidthIn, maxBoardLengthIn, ruleHeightsIn, makesCounters, fitsEjectionRubber };
+}
+
 /** The signed-in user a route would hand a service, for a user made here. */
 export function actorOf(user: User, org: Organisation): AuthUser {
   return {
@@ -170,6 +176,7 @@ export function actorOf(user: User, org: Organisation): AuthUser {
     orgKind: org.kind,
     timeZone: org.timeZone,
     orgPostcode: org.postcode,
+    shopCapabilities: org.kind === 'die_shop' ? shopCapabilitiesOf(org) : null,
     jti: randomUUID(),
     tokenExpiresAt: new Date(Date.now() + 3_600_000),
   };

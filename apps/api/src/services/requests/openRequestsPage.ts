@@ -1,9 +1,9 @@
 import type { OpenRequestRow, OpenRequestsQuery } from '@kerfmark/contracts';
 import type { Knex } from 'knex';
 import type { z } from 'zod';
-import { containsPattern } from '../../lib/containsPattern';
-import { biddableByShop } from '../../access';
-import { shopCanMake } from './shopCanMake';
+import type { AuthUser } from '../../auth/passport';
+import { boardVersionQuery, type BoardVersionRow } from './boardVersion';
+import { matchingOpenRequests } from './matchingOpenRequests';
 
 const ORDER: Record<string, string> = {
   bidDeadline: 'r.bid_deadline',
@@ -12,46 +12,31 @@ const ORDER: Record<string, string> = {
   distance: 'd.miles',
 };
 
-/** The open requests that match a shop's board query, as a query of `die_requests as r` to build on. */
-export function matchingOpenRequests(knex: Knex, shopId: number, q: z.output<typeof OpenRequestsQuery>) {
-  const query = knex('dieRequests as r').where(biddableByShop(knex, shopId, 'r'));
-  if (q.minIn !== undefined) query.where('r.measuredRuleIn', '>=', q.minIn);
-  if (q.maxIn !== undefined) query.where('r.measuredRuleIn', '<=', q.maxIn);
-  if (q.complexity) query.where('r.measuredComplexity', q.complexity);
-  if (q.withinDays) query.where('r.bidDeadline', '<=', new Date(Date.now() + q.withinDays * 86_400_000));
-  if (q.ruleTypes?.length) query.whereRaw('r.rule_types @> ?::text[]', [q.ruleTypes]);
-  if (q.canMake) query.where(shopCanMake(knex, shopId, 'r'));
-  if (q.hideDeclined) query.whereNotIn('r.id', knex('requestDeclines').where({ shopId }).select('requestId'));
-  if (q.q) {
-    const like = containsPattern(q.q);
-    query
-      .join('organisations as o', 'o.id', 'r.organisationId')
-      .where((b) => b.whereILike('r.title', like).orWhereILike('r.jobReference', like).orWhereILike('o.name', like));
-  }
-  return query;
-}
+export type PageRow = Omit<OpenRequestRow, 'bidDeadline' | 'distanceMiles'> & {
+  bidDeadline: Date | null;
+  /** Only when sorting by distance: from the `miles` given. */
+  distanceMiles?: number | null;
+};
 
 /**
  * One page of the requests open to this die shop, filtered and sorted by the database, each
- * row with only what the board shows, and the count of every match. The request rows carry their measured
- * dieline's figures (migration 009); `miles` gives the distance from the shop to each delivery
- * postcode it knows.
+ * row with only what the board shows, and the board's version (the count of every match and
+ * what its tag is made of), all in one query: a page is one round trip to the database. The
+ * request rows carry their measured dieline's figures (migration 009). `miles`, given only to
+ * sort by distance, holds the distance from the shop to each delivery postcode it knows.
  */
 export async function openRequestsPage(
   knex: Knex,
-  shopId: number,
+  actor: AuthUser,
   q: z.output<typeof OpenRequestsQuery>,
-  miles: Array<{ postcode: string; miles: number }>,
-  /** The count of every match when the caller has it (the board's tag counts them). */
-  knownTotal?: number,
-): Promise<{ rows: OpenRequestRow[]; total: number }> {
-  // The requests that match, as a fresh query each time it is needed.
-  const matching = () => matchingOpenRequests(knex, shopId, q);
-  const page = matching()
-    .select('r.id', 'd.miles as distanceMiles')
+  miles: Array<{ postcode: string; miles: number }> | null,
+): Promise<{ rows: PageRow[]; version: BoardVersionRow }> {
+  const shopId = actor.organisationId;
+  const page = matchingOpenRequests(knex, actor, q)
+    .select('r.id')
     .select(knex.raw('r.id in (select request_id from request_declines where shop_id = ?) as declined', [shopId]))
     .select(knex.raw('r.id in (select request_id from bids where shop_id = ?) as has_bid', [shopId]));
-  if (miles.length) {
+  if (miles?.length) {
     const values = miles.map(() => '(?::text, ?::float8)').join(', ');
     page.leftJoin(
       knex.raw(
@@ -61,9 +46,10 @@ export async function openRequestsPage(
       'd.postcode',
       'r.deliveryPostcode',
     );
-  } else {
+  } else if (miles) {
     page.crossJoin(knex.raw('(select null::float8 as miles) as d'));
   }
+  if (miles) page.select('d.miles as distanceMiles');
   const desc = q.sort.startsWith('-');
   // Unknown values last either way; ties by the bid deadline, then id, so that pages are stable.
   const order = `${ORDER[q.sort.replace('-', '')]} ${desc ? 'desc' : 'asc'} nulls last, r.bid_deadline, r.id`;
@@ -72,13 +58,9 @@ export async function openRequestsPage(
     .orderByRaw(order)
     .limit(q.pageSize)
     .offset((q.page - 1) * q.pageSize);
-  // The page's rows, only what the board shows, with the count of every match unless the caller
-  // has it: the count is a subquery of its own, which PostgreSQL works out once (a window count
-  // over the page's query would sort every match to number 25 of them). The file that stands
-  // for the request is the one marked primary, else the newest measured, else the newest
-  // (primaryFile). Only a page past the end asks for the count alone.
-  const count = () => matching().count('*');
-  const query = knex
+  // The page's rows, only what the board shows. The file that stands for the request is the one
+  // marked primary, else the newest measured, else the newest.
+  const rows = knex
     .from(page.as('page'))
     .join('dieRequests as r', 'r.id', 'page.id')
     .join('organisations as o', 'o.id', 'r.organisationId')
@@ -103,26 +85,26 @@ export async function openRequestsPage(
       knex.raw(`case when f.analysis_status = 'done' then f.metrics->'length' end as length`),
       knex.raw(`case when f.analysis_status = 'done' then f.metrics->>'complexity' end as complexity`),
       'f.analysisStatus',
-      'page.distanceMiles',
       'page.declined',
       'page.hasBid',
-    )
-    .orderBy('page.position')
-    .options({ prepare: true });
-  if (knownTotal === undefined) query.select(count().as('totalMatches'));
-  const rows = (await query) as Array<
-    Omit<OpenRequestRow, 'bidDeadline'> & { bidDeadline: Date | null; totalMatches?: number }
-  >;
-  const total =
-    knownTotal ??
-    rows[0]?.totalMatches ??
-    Number(((await count().options({ prepare: true })) as Array<{ count: number }>)[0]?.count ?? 0);
+      'page.position',
+    );
+  if (miles) rows.select('page.distanceMiles');
+  // The version's one row, with the page's rows beside it (none past the last page).
+  const found = (await knex
+    .select('v.*', 'rows.*')
+    .from(boardVersionQuery(knex, actor, q).as('v'))
+    .joinRaw('left join lateral (?) as rows on true', [rows as unknown as Knex.Raw])
+    .orderBy('rows.position')
+    .options({ prepare: true })) as Array<BoardVersionRow & Partial<PageRow> & { position: number | null }>;
+  const { total, requests, printers, shop, bids, declines } = found[0]!;
   return {
-    rows: rows.map(({ totalMatches: _total, bidDeadline, distanceMiles, ...row }) => ({
-      ...row,
-      bidDeadline: bidDeadline?.toISOString() ?? null,
-      distanceMiles: distanceMiles === null ? null : Math.round(distanceMiles),
-    })),
-    total,
+    version: { total, requests, printers, shop, bids, declines },
+    rows: found
+      .filter((row) => row.position !== null)
+      .map(
+        ({ total: _t, requests: _r, printers: _p, shop: _s, bids: _b, declines: _d, position: _n, ...row }) =>
+          row as PageRow,
+      ),
   };
 }

@@ -3,9 +3,10 @@ import type { Knex } from 'knex';
 import type { z } from 'zod';
 import type { AuthUser } from '../../auth/passport';
 import { containsPattern } from '../../lib/containsPattern';
-import { distanceMiles } from '../../lib/distanceMiles';
+import { distanceMiles, type LatLon } from '../../lib/distanceMiles';
 import { postcodeCentre } from '../../lib/postcodeCentre';
 import { DieRequest } from '../../models';
+import { boardTag } from './boardVersion';
 import { openRequestsPage } from './openRequestsPage';
 import { toSummary } from '../../dto/requestViews';
 
@@ -34,26 +35,46 @@ export async function listOwnRequests(
   return { items: result.results.map(toSummary), total: result.total, page: q.page, pageSize: q.pageSize };
 }
 
-/** The open requests a die shop may bid on: filtered, sorted and paged by the database. */
+/** The distances from a shop to each delivery postcode of the open requests that the dataset places. */
+async function deliveryMiles(knex: Knex, from: LatLon | null): Promise<Array<{ postcode: string; miles: number }>> {
+  if (!from) return [];
+  const postcodes = await knex('dieRequests')
+    .where({ status: 'open' })
+    .whereNotNull('deliveryPostcode')
+    .distinct('deliveryPostcode');
+  return postcodes.flatMap(({ deliveryPostcode: postcode }) => {
+    const centre = postcodeCentre(postcode);
+    return centre ? [{ postcode, miles: distanceMiles(from, centre) }] : [];
+  });
+}
+
+/**
+ * The open requests a die shop may bid on, filtered, sorted and paged by the database, with the
+ * page's tag. Distances are worked out for the page's rows alone, unless the page is sorted by
+ * distance, when the database needs them all.
+ */
 export async function openRequestsFor(
   knex: Knex,
   actor: AuthUser,
   q: z.output<typeof OpenRequestsQuery>,
-  knownTotal?: number,
-): Promise<Page<OpenRequestRow>> {
+): Promise<{ page: Page<OpenRequestRow>; tag: string }> {
   const from = postcodeCentre(actor.orgPostcode);
-  // Distances to the delivery postcodes open requests use, only those the dataset places.
-  const miles: Array<{ postcode: string; miles: number }> = [];
-  if (from) {
-    const postcodes = await knex('dieRequests')
-      .where({ status: 'open' })
-      .whereNotNull('deliveryPostcode')
-      .distinct('deliveryPostcode');
-    for (const { deliveryPostcode: postcode } of postcodes) {
-      const centre = postcodeCentre(postcode);
-      if (centre) miles.push({ postcode, miles: distanceMiles(from, centre) });
-    }
-  }
-  const { rows, total } = await openRequestsPage(knex, actor.organisationId, q, miles, knownTotal);
-  return { items: rows, total, page: q.page, pageSize: q.pageSize };
+  const miles = q.sort.replace('-', '') === 'distance' ? await deliveryMiles(knex, from) : null;
+  const { rows, version } = await openRequestsPage(knex, actor, q, miles);
+  const milesTo = (postcode: string | null) => {
+    const centre = from && postcodeCentre(postcode);
+    return centre ? distanceMiles(from, centre) : null;
+  };
+  const items = rows.map(({ bidDeadline, distanceMiles: sorted, ...row }) => {
+    const miles = sorted === undefined ? milesTo(row.deliveryPostcode) : sorted;
+    return {
+      ...row,
+      bidDeadline: bidDeadline?.toISOString() ?? null,
+      distanceMiles: miles === null ? null : Math.round(miles),
+    };
+  });
+  return {
+    page: { items, total: version.total, page: q.page, pageSize: q.pageSize },
+    tag: boardTag(actor, q, version),
+  };
 }

@@ -1,7 +1,7 @@
 import { dieFit, dieKindOfPress, NOTHING_STATED, type ShopCapabilities } from '@kerfmark/contracts';
 import { describe, expect, it } from 'vitest';
 import { Organisation, Press } from '../../models';
-import { createOrg, createPress, createUser, knex } from '../../test/harness';
+import { actorOf, createOrg, createPress, createUser, knex } from '../../test/harness';
 import { insertOpenRequest } from '../../test/insertOpenRequest';
 import { shopCanMake } from './shopCanMake';
 
@@ -82,10 +82,14 @@ describe('shopCanMake', () => {
       await Organisation.query()
         .patch(capabilities as Partial<Organisation>)
         .findById(shop.id);
-      const stored = await Organisation.query().findById(shop.id);
+      // As the sign-in reads them: the board is kept to the hundredth of an inch, so 20.004 in is 20.00 in.
+      const stored = actorOf(
+        await createUser(shop, 'estimator'),
+        (await Organisation.query().findById(shop.id))!,
+      ).shopCapabilities!;
       const rows: Array<{ id: number }> = await knex('dieRequests as r')
         .whereIn('r.id', ids)
-        .where(shopCanMake(knex, shop.id, 'r'))
+        .where(shopCanMake(knex, stored, 'r'))
         .select('r.id');
       const bySql = new Set(rows.map((row) => row.id));
       dies.forEach((die, i) => {
@@ -97,11 +101,7 @@ describe('shopCanMake', () => {
             counterWanted: die.counterWanted,
             ejectionRubberWanted: die.ejectionRubberWanted,
           },
-          // The board is kept to the hundredth of an inch: 20.004 in is stored as 20.00 in.
-          {
-            ...capabilities,
-            maxBoardWidthIn: stored!.maxBoardWidthIn === null ? null : Number(stored!.maxBoardWidthIn),
-          },
+          stored,
         );
         expect(
           bySql.has(ids[i]!),
