@@ -13,7 +13,9 @@ export function matchingOpenRequests(knex: Knex, actor: AuthUser, q: z.output<ty
   if (q.minIn !== undefined) query.where('r.measuredRuleIn', '>=', q.minIn);
   if (q.maxIn !== undefined) query.where('r.measuredRuleIn', '<=', q.maxIn);
   if (q.complexity) query.where('r.measuredComplexity', q.complexity);
-  if (q.withinDays) query.where('r.bidDeadline', '<=', new Date(Date.now() + q.withinDays * 86_400_000));
+  // Against the database's clock, as the deadline itself is: the query's text and values then
+  // stay the same from one reload to the next, so its compiled form can be kept.
+  if (q.withinDays) query.whereRaw('r.bid_deadline <= now() + make_interval(days => ?)', [q.withinDays]);
   if (q.ruleTypes?.length) query.whereRaw('r.rule_types @> ?::text[]', [q.ruleTypes]);
   if (q.canMake && actor.shopCapabilities) query.where(shopCanMake(knex, actor.shopCapabilities, 'r'));
   if (q.hideDeclined) query.whereNotIn('r.id', knex('requestDeclines').where({ shopId }).select('requestId'));

@@ -31,6 +31,37 @@ export async function openRequestsPage(
   q: z.output<typeof OpenRequestsQuery>,
   miles: Array<{ postcode: string; miles: number }> | null,
 ): Promise<{ rows: PageRow[]; version: BoardVersionRow }> {
+  // The same shop asking the same page gets the same text and values: knex builds it once.
+  const key = JSON.stringify([actor.organisationId, actor.shopCapabilities, q, miles]);
+  let query = compiled.get(key);
+  if (!query) {
+    query = boardPageQuery(knex, actor, q, miles).toSQL();
+    if (compiled.size >= COMPILED_KEPT) compiled.delete(compiled.keys().next().value!);
+    compiled.set(key, query);
+  }
+  const { rows: raw } = (await knex.raw(query.sql, query.bindings).options({ prepare: true })) as { rows: unknown[] };
+  // A raw result skips the client's snake-case mappers: apply them as a built query would.
+  const found = (knex.client.config.postProcessResponse?.(raw, undefined) ?? raw) as Array<
+    BoardVersionRow & PageRow & { position: number | null }
+  >;
+  const { total, requests, printers, shop, bids, declines } = found[0]!;
+  return {
+    version: { total, requests, printers, shop, bids, declines },
+    rows: found[0]!.position === null ? [] : found,
+  };
+}
+
+// Compiled board queries kept, the oldest dropped first: one per shop and page it reloads.
+const COMPILED_KEPT = 500;
+const compiled = new Map<string, Knex.Sql>();
+
+/** The board's page and version as one query (see openRequestsPage). */
+function boardPageQuery(
+  knex: Knex,
+  actor: AuthUser,
+  q: z.output<typeof OpenRequestsQuery>,
+  miles: Array<{ postcode: string; miles: number }> | null,
+) {
   const shopId = actor.organisationId;
   const page = matchingOpenRequests(knex, actor, q)
     .select('r.id')
@@ -91,20 +122,9 @@ export async function openRequestsPage(
     );
   if (miles) rows.select('page.distanceMiles');
   // The version's one row, with the page's rows beside it (none past the last page).
-  const found = (await knex
+  return knex
     .select('v.*', 'rows.*')
     .from(boardVersionQuery(knex, actor, q).as('v'))
     .joinRaw('left join lateral (?) as rows on true', [rows as unknown as Knex.Raw])
-    .orderBy('rows.position')
-    .options({ prepare: true })) as Array<BoardVersionRow & Partial<PageRow> & { position: number | null }>;
-  const { total, requests, printers, shop, bids, declines } = found[0]!;
-  return {
-    version: { total, requests, printers, shop, bids, declines },
-    rows: found
-      .filter((row) => row.position !== null)
-      .map(
-        ({ total: _t, requests: _r, printers: _p, shop: _s, bids: _b, declines: _d, position: _n, ...row }) =>
-          row as PageRow,
-      ),
-  };
+    .orderBy('rows.position');
 }

@@ -65,14 +65,26 @@ export async function openRequestsFor(
     const centre = from && postcodeCentre(postcode);
     return centre ? distanceMiles(from, centre) : null;
   };
-  const items = rows.map(({ bidDeadline, distanceMiles: sorted, ...row }) => {
-    const miles = sorted === undefined ? milesTo(row.deliveryPostcode) : sorted;
-    return {
-      ...row,
-      bidDeadline: bidDeadline?.toISOString() ?? null,
-      distanceMiles: miles === null ? null : Math.round(miles),
-    };
-  });
+  const roundMiles = (miles: number | null) => (miles === null ? null : Math.round(miles));
+  // Each row written out field by field: the answer carries exactly what the board shows.
+  const items = rows.map((row): OpenRequestRow => ({
+    id: row.id,
+    title: row.title,
+    jobReference: row.jobReference,
+    organisationName: row.organisationName,
+    quantity: row.quantity,
+    ups: row.ups,
+    ruleTypes: row.ruleTypes,
+    needByDate: row.needByDate,
+    bidDeadline: row.bidDeadline?.toISOString() ?? null,
+    deliveryPostcode: row.deliveryPostcode,
+    length: row.length,
+    complexity: row.complexity,
+    analysisStatus: row.analysisStatus,
+    distanceMiles: roundMiles(row.distanceMiles === undefined ? milesTo(row.deliveryPostcode) : row.distanceMiles),
+    declined: row.declined,
+    hasBid: row.hasBid,
+  }));
   return {
     page: { items, total: version.total, page: q.page, pageSize: q.pageSize },
     tag: boardTag(actor, q, version),
