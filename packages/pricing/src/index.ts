@@ -13,3 +13,5 @@ export * from './pricePerInch';
 export * from './priceTrend';
 export * from './rateCard';
 export * from './calibrateCard';
+export * from './paymentTerms';
+export * from './invoiceMatch';
