@@ -189,7 +189,11 @@ export function formatWebRows(entry: EntryChunk, openRequests?: OpenRequestsRend
       row('open requests: first-contentful-paint', ms(openRequests.fcpMs), note),
       row('open requests: DOMContentLoaded', ms(openRequests.domContentLoadedMs), note),
       row('open requests: API answer received', ms(openRequests.openRequestsApiMs), note),
-      row('open requests: bytes before first row', kb(openRequests.transferBytes), 'over the wire (assets gzipped)'),
+      row(
+        'open requests: bytes before first row',
+        kb(openRequests.transferBytes),
+        'over the wire, as the server sends them',
+      ),
     );
   }
   return rows;
