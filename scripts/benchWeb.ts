@@ -34,13 +34,21 @@ export interface OpenRequestsRender {
   openRequestsApiMs: number;
   /** Bytes over the wire before the first row (median). */
   transferBytes: number;
-  samples: Array<{
-    firstRowMs: number;
-    fcpMs: number;
-    domContentLoadedMs: number;
-    openRequestsApiMs: number;
-    transferBytes: number;
-  }>;
+  /** The load whose bytes are the median: what came over the wire before its first row, and what was still coming. */
+  medianSample: OpenRequestsSample;
+  samples: OpenRequestsSample[];
+}
+
+export interface OpenRequestsSample {
+  firstRowMs: number;
+  fcpMs: number;
+  domContentLoadedMs: number;
+  openRequestsApiMs: number;
+  transferBytes: number;
+  /** Each response received before the first row (the page itself first), with its bytes over the wire. */
+  resources: Array<{ path: string; transferBytes: number; responseEndMs: number }>;
+  /** Requests started before the first row but still arriving when it showed: not counted in transferBytes. */
+  inFlight: Array<{ path: string; transferBytes: number; responseEndMs: number }>;
 }
 
 /**
@@ -64,12 +72,26 @@ function readTimings(mark: string) {
   const resources = performance.getEntriesByType('resource') as PerformanceResourceTiming[];
   const answer = resources.find((r) => new URL(r.name).pathname === '/api/open-requests');
   const before = resources.filter((r) => r.responseEnd <= firstRow);
+  const inFlight = resources.filter((r) => r.startTime < firstRow && r.responseEnd > firstRow);
   return {
     firstRowMs: firstRow,
     fcpMs: fcp?.startTime ?? Number.NaN,
     domContentLoadedMs: nav?.domContentLoadedEventEnd ?? Number.NaN,
     openRequestsApiMs: answer?.responseEnd ?? Number.NaN,
     transferBytes: (nav?.transferSize ?? 0) + before.reduce((total, r) => total + r.transferSize, 0),
+    resources: [
+      { path: location.pathname, transferBytes: nav?.transferSize ?? 0, responseEndMs: nav?.responseEnd ?? 0 },
+      ...before.map((r) => ({
+        path: new URL(r.name).pathname,
+        transferBytes: r.transferSize,
+        responseEndMs: r.responseEnd,
+      })),
+    ],
+    inFlight: inFlight.map((r) => ({
+      path: new URL(r.name).pathname,
+      transferBytes: r.transferSize,
+      responseEndMs: r.responseEnd,
+    })),
   };
 }
 
@@ -100,7 +122,7 @@ export async function measureOpenRequestsRender(
     const storageState = await signIn.storageState();
     await signIn.close();
 
-    const samples: OpenRequestsRender['samples'] = [];
+    const samples: OpenRequestsSample[] = [];
     for (let i = 0; i < runs; i++) {
       const context = await browser.newContext({ viewport: { width: 1366, height: 900 }, storageState });
       try {
@@ -119,7 +141,8 @@ export async function measureOpenRequestsRender(
         await context.close();
       }
     }
-    const med = (key: keyof OpenRequestsRender['samples'][number]) => median(samples.map((s) => s[key]));
+    const med = (key: 'firstRowMs' | 'fcpMs' | 'domContentLoadedMs' | 'openRequestsApiMs' | 'transferBytes') =>
+      median(samples.map((s) => s[key]));
     return {
       runs,
       firstRowMs: med('firstRowMs'),
@@ -127,6 +150,7 @@ export async function measureOpenRequestsRender(
       domContentLoadedMs: med('domContentLoadedMs'),
       openRequestsApiMs: med('openRequestsApiMs'),
       transferBytes: med('transferBytes'),
+      medianSample: samples.find((s) => s.transferBytes === med('transferBytes'))!,
       samples,
     };
   } finally {
@@ -165,7 +189,11 @@ export function formatWebRows(entry: EntryChunk, openRequests?: OpenRequestsRend
       row('open requests: first-contentful-paint', ms(openRequests.fcpMs), note),
       row('open requests: DOMContentLoaded', ms(openRequests.domContentLoadedMs), note),
       row('open requests: API answer received', ms(openRequests.openRequestsApiMs), note),
-      row('open requests: bytes before first row', kb(openRequests.transferBytes), 'over the wire (assets gzipped)'),
+      row(
+        'open requests: bytes before first row',
+        kb(openRequests.transferBytes),
+        'over the wire, as the server sends them',
+      ),
     );
   }
   return rows;
@@ -189,7 +217,17 @@ if (process.argv[1] && import.meta.url === pathToFileURL(process.argv[1]).href) 
       console.log(
         `  ${f.kind.padEnd(14)} ${f.file.padEnd(44)} ${kb(f.raw).padStart(9)} raw ${kb(f.gzip).padStart(9)} gzip`,
       );
-    if (!openRequests) console.log('  (set BENCH_WEB_URL to a running app to time the open requests too)');
+    if (openRequests) {
+      console.log(
+        `  before the first row (the load with the median bytes, first row at ${ms(openRequests.medianSample.firstRowMs)}):`,
+      );
+      for (const r of [...openRequests.medianSample.resources].sort((a, b) => b.transferBytes - a.transferBytes))
+        console.log(`    ${kb(r.transferBytes).padStart(9)}  ${r.path}`);
+      for (const r of openRequests.medianSample.inFlight)
+        console.log(
+          `    ${kb(r.transferBytes).padStart(9)}  ${r.path} (still arriving, ended at ${ms(r.responseEndMs)}; not counted)`,
+        );
+    } else console.log('  (set BENCH_WEB_URL to a running app to time the open requests too)');
     console.log([...WEB_TABLE_HEADER, ...formatWebRows(entry, openRequests)].join('\n'));
   } catch (error) {
     console.error(`benchmark failed: ${(error as Error).stack}`);

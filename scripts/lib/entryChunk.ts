@@ -41,7 +41,8 @@ function staticImports(code: string): string[] {
  * The entry the browser needs before the app can start: the module script index.html names, the
  * chunks it preloads, any further chunk they import statically (Vite preloads them all, so this
  * should add none), and the entry stylesheet. Sizes raw and gzip at level 9 (node:zlib), which is
- * what a static server or CDN that compresses would send; the API's express.static sends them raw.
+ * what a static server or CDN that compresses would send (the app's own server sends the brotli
+ * files the build makes, smaller still).
  */
 export async function measureEntryChunk(distDir: string): Promise<EntryChunk> {
   const indexPath = path.join(distDir, 'index.html');

@@ -4,7 +4,7 @@ import { app, testConfig } from './test/harness';
 
 describe('the web app served by the API', () => {
   it.skipIf(!testConfig.webDist)(
-    'answers every client route with its index page, sends its files gzipped, and API answers as they are',
+    'answers every client route with its index page, sends its files compressed and hashed ones cached for good, and API answers as they are',
     async () => {
       const page = await request(app).get('/open-requests');
       expect(page.status).toBe(200);
@@ -14,6 +14,11 @@ describe('the web app served by the API', () => {
       const script = await request(app).get(entry!).set('Accept-Encoding', 'gzip');
       expect(script.status).toBe(200);
       expect(script.headers['content-encoding']).toBe('gzip');
+      expect(script.headers['cache-control']).toBe('public, max-age=31536000, immutable');
+      const brotli = await request(app).get(entry!).set('Accept-Encoding', 'gzip, br');
+      expect(brotli.headers['content-encoding']).toBe('br');
+      const favicon = await request(app).get('/favicon.svg');
+      expect(favicon.headers['cache-control']).toBe('public, max-age=3600');
       const health = await request(app).get('/api/health').set('Accept-Encoding', 'gzip');
       expect(health.headers['content-encoding']).toBeUndefined();
     },

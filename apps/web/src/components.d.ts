@@ -102,6 +102,7 @@ declare module 'vue' {
     ProfileDetails: typeof import('./components/ProfileDetails.vue')['default']
     ProfileForm: typeof import('./components/ProfileForm.vue')['default']
     PublicHolidayLoader: typeof import('./components/PublicHolidayLoader.vue')['default']
+    QueryError: typeof import('./components/QueryError.vue')['default']
     QueryState: typeof import('./components/QueryState.vue')['default']
     RequestChecks: typeof import('./components/RequestChecks.vue')['default']
     RequestQuestions: typeof import('./components/RequestQuestions.vue')['default']

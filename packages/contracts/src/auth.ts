@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { OrgKind, Role } from './roles';
+import { OrgKind, Role } from './roleSchemas';
 
 export const Email = z
   .string({ error: 'Enter an e-mail address' })

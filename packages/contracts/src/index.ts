@@ -1,5 +1,6 @@
 export * from './ids';
 export * from './roles';
+export * from './roleSchemas';
 export * from './auth';
 export * from './users';
 export * from './presses';
@@ -9,6 +10,7 @@ export * from './queues';
 export * from './dates';
 export * from './dateFields';
 export * from './requestStatus';
+export * from './ruleTypes';
 export * from './requests';
 export * from './requestDtos';
 export * from './bids';

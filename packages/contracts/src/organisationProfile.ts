@@ -2,7 +2,7 @@ import { inchesAndMm } from '@kerfmark/dieline';
 import { CUTTING_RULE_HEIGHTS_IN } from '@kerfmark/stock';
 import { z } from 'zod';
 import { Email } from './auth';
-import type { OrgKind } from './roles';
+import type { OrgKind } from './roleSchemas';
 
 /** The kinds of steel-rule die a die shop makes. */
 export const dieKinds = ['flat', 'rotary'] as const;

@@ -2,8 +2,8 @@ import type { Complexity, DielineMetrics, LengthByType } from '@kerfmark/dieline
 import type { StockKind } from '@kerfmark/stock';
 import type { BidDto } from './bids';
 import type { Press } from './presses';
-import type { DielineShows, Grain, PieceGrain, RuleType, Visibility } from './requests';
-import type { RequestAction, RequestStatus } from './requestStatus';
+import type { DielineShows, Grain, PieceGrain, RequestStatus, RuleType, Visibility } from './requests';
+import type { RequestAction } from './requestStatus';
 
 /** The dieline metrics as the analysis reports them (lengths in inches): the dieline package's own type. */
 export type { DielineMetrics } from '@kerfmark/dieline';

@@ -1,5 +1,6 @@
-import { z } from 'zod';
-import type { Role } from './roles';
+// The statuses, their names and the moves between them; the schema is in requests.ts, so that the web app's
+// first load, which shows these names, carries no zod.
+import type { Role } from './roleSchemas';
 
 /** A die request's life, in plain words of our own. */
 export const requestStatuses = [
@@ -12,8 +13,7 @@ export const requestStatuses = [
   'received',
   'cancelled',
 ] as const;
-export const RequestStatus = z.enum(requestStatuses);
-export type RequestStatus = z.infer<typeof RequestStatus>;
+type RequestStatus = (typeof requestStatuses)[number];
 
 export const requestStatusLabels: Record<RequestStatus, string> = {
   draft: 'Draft',

@@ -1,20 +1,16 @@
 import { inchesAndMm, PIECE_GRAINS } from '@kerfmark/dieline';
 import { STOCK_KINDS } from '@kerfmark/stock';
 import { z } from 'zod';
-import { RequestStatus } from './requestStatus';
+import { requestStatuses } from './requestStatus';
 import { calendarDate, instant } from './dateFields';
 import { recordId } from './ids';
+import { ruleTypes } from './ruleTypes';
 
-export const ruleTypes = ['cut', 'crease', 'perf', 'kiss'] as const;
+export const RequestStatus = z.enum(requestStatuses);
+export type RequestStatus = z.infer<typeof RequestStatus>;
+
 export const RuleType = z.enum(ruleTypes);
 export type RuleType = z.infer<typeof RuleType>;
-export const ruleTypeLabels: Record<RuleType | 'other', string> = {
-  cut: 'Cutting rule',
-  crease: 'Creasing rule',
-  perf: 'Perforating rule',
-  kiss: 'Kiss cut',
-  other: 'Other (not priced)',
-};
 
 export const Grain = z.enum(['long', 'short']);
 export type Grain = z.infer<typeof Grain>;

@@ -1,13 +1,11 @@
-import { z } from 'zod';
+// The kinds of organisation and the roles, with their names; their schemas are in roleSchemas.ts, so that
+// the web app's first load, which shows these names, carries no zod.
+import type { OrgKind, Role } from './roleSchemas';
 
 /** The two kinds of organisation on Kerfmark. */
 export const orgKinds = ['printer', 'die_shop'] as const;
-export const OrgKind = z.enum(orgKinds);
-export type OrgKind = z.infer<typeof OrgKind>;
 
 export const roles = ['buyer', 'purchasing', 'estimator', 'admin'] as const;
-export const Role = z.enum(roles);
-export type Role = z.infer<typeof Role>;
 
 /** Which roles an organisation of each kind may give its users. */
 export const rolesByOrgKind: Record<OrgKind, readonly Role[]> = {

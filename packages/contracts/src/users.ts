@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { Email, NewPassword } from './auth';
-import { Role } from './roles';
+import { Role } from './roleSchemas';
 
 export const PersonName = z
   .string({ error: 'Enter a name' })

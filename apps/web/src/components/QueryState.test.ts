@@ -1,5 +1,5 @@
 import { mount } from '@vue/test-utils';
-import { describe, expect, it } from 'vitest';
+import { describe, expect, it, vi } from 'vitest';
 import { ApiRequestError } from '../api/client';
 import QueryState from './QueryState.vue';
 
@@ -26,7 +26,8 @@ describe('QueryState', () => {
       loading: false,
       error: new ApiRequestError(503, 'service_unavailable', 'Kerfmark is briefly unavailable.'),
     });
-    expect(wrapper.text()).toContain('Kerfmark is briefly unavailable.');
+    // The error's component loads when first needed.
+    await vi.waitFor(() => expect(wrapper.text()).toContain('Kerfmark is briefly unavailable.'));
     await wrapper.find('button').trigger('click');
     expect(wrapper.emitted('retry')).toHaveLength(1);
 
