@@ -60,18 +60,25 @@ try {
   const shopId = (await knex('organisations').where({ name: 'Brightline Rule & Die' }).first()).id;
   const base = express();
   base.get('/open-requests', async (_req, res) => {
-    // The open requests' reads: the page of matching requests, the columns the board shows and
-    // the measured file's lengths and class, and the count of all matches.
-    const matching = `FROM die_requests r WHERE r.status = 'open' AND r.bid_deadline > now() AND r.visibility = 'public'
+    // The open requests' reads, giving the board's answer: the page of requests open to the shop
+    // (public or invited, not passed on), the columns the board shows with the file that stands
+    // for the request (primary, else newest measured, else newest), whether the shop has bid or
+    // passed, and the count of all matches.
+    const matching = `FROM die_requests r WHERE r.status = 'open' AND r.bid_deadline > now()
+       AND (r.visibility = 'public' OR r.id IN (SELECT request_id FROM request_invitations WHERE shop_id = $1))
        AND r.id NOT IN (SELECT request_id FROM request_declines WHERE shop_id = $1)`;
     const [page, count] = await Promise.all([
       pool.query(
         `SELECT r.id, r.title, r.job_reference, o.name AS org, r.quantity, r.ups, r.rule_types, r.need_by_date,
            r.bid_deadline, r.delivery_postcode, f.metrics->'length' AS length, f.metrics->>'complexity' AS complexity,
-           f.analysis_status, r.id IN (SELECT request_id FROM bids WHERE shop_id = $1) AS has_bid
+           f.analysis_status, r.id IN (SELECT request_id FROM request_declines WHERE shop_id = $1) AS declined,
+           r.id IN (SELECT request_id FROM bids WHERE shop_id = $1) AS has_bid
          FROM (SELECT r.id ${matching} ORDER BY r.bid_deadline, r.id LIMIT 25) AS pg
          JOIN die_requests r ON r.id = pg.id JOIN organisations o ON o.id = r.organisation_id
-         LEFT JOIN dieline_files f ON f.request_id = r.id`,
+         LEFT JOIN LATERAL (SELECT f.analysis_status, f.metrics FROM dieline_files f WHERE f.request_id = r.id
+           ORDER BY (f.is_primary AND f.analysis_status = 'done') DESC, (f.analysis_status = 'done') DESC,
+             f.uploaded_at DESC, f.id DESC LIMIT 1) f ON true
+         ORDER BY r.bid_deadline, r.id`,
         [shopId],
       ),
       pool.query(`SELECT count(*) AS total ${matching}`, [shopId]),
