@@ -6,7 +6,7 @@ import { countBends } from './metrics/bends';
 import { boardSize, boundsOf, DEFAULT_MARGIN_IN, fitsPress, type Press, type Size, sizeOf } from './metrics/board';
 import { type Complexity, complexityOf } from './metrics/complexity';
 import { countContours } from './metrics/contours';
-import { countJoints } from './metrics/joints';
+import { countJoints, networkIds } from './metrics/joints';
 import { countCurves, type LengthByType, lengthsByType, toMm } from './metrics/lengths';
 import { buildPreview, type DielinePreview } from './preview';
 import { createRuleTypeResolver, isRuleType, type LayerMap } from './ruleType';
@@ -152,7 +152,11 @@ function measure(read: Drawing, format: DielineFormat, opts: AnalyseOptions, lim
   const length = lengthsByType(paths);
   const { curves, minRadius } = countCurves(net.segments);
   const bends = countBends(net);
-  const joints = countJoints(net);
+  const joints = countJoints(
+    net,
+    undefined,
+    dedup.index ? { index: dedup.index, netOf: networkIds(paths, dedup.origin, dedup.index.numItems) } : undefined,
+  );
   const { closedContours, punches } = countContours(net, chains);
   const bbox = sizeOf(boundsOf(priced));
   const board = priced.length > 0 ? boardSize(bbox, opts.marginIn ?? DEFAULT_MARGIN_IN) : { width: 0, height: 0 };
