@@ -27,6 +27,14 @@ export function countJoints(net: Network, tol = JOIN_TOLERANCE_IN, shared?: Shar
   let joints = 0;
   let index: Flatbush | null = shared?.index ?? null;
   const netOf = shared?.netOf ?? null;
+  // The lone end being tested; one filter function for every search.
+  let node = 0;
+  let p = { x: 0, y: 0 };
+  const touchesSide = (id: number): boolean => {
+    const s = netOf ? netOf[id]! : id;
+    if (s < 0 || net.nodeOfEnd[2 * s] === node || net.nodeOfEnd[2 * s + 1] === node) return false;
+    return distanceTo(net.segments[s]!, p) <= tol;
+  };
   for (let n = 0; n < net.nodeCount; n++) {
     const from = net.endStart[n]!;
     const to = net.endStart[n + 1]!;
@@ -39,13 +47,9 @@ export function countJoints(net: Network, tol = JOIN_TOLERANCE_IN, shared?: Shar
     }
     // A lone rule end: does it touch the side of a rule that does not meet it at this node?
     index ??= segmentIndex(net.segments, tol);
-    const p = net.nodePos[n]!;
-    const touches = index.search(p.x - tol, p.y - tol, p.x + tol, p.y + tol, (id) => {
-      const s = netOf ? netOf[id]! : id;
-      if (s < 0 || net.nodeOfEnd[2 * s] === n || net.nodeOfEnd[2 * s + 1] === n) return false;
-      return distanceTo(net.segments[s]!, p) <= tol;
-    });
-    if (touches.length > 0) joints++;
+    node = n;
+    p = net.nodePos[n]!;
+    if (index.collides(p.x - tol, p.y - tol, p.x + tol, p.y + tol, touchesSide)) joints++;
   }
   return joints;
 }

@@ -51,18 +51,13 @@ export function removeDuplicates(paths: RulePath[], tol = JOIN_TOLERANCE_IN): Du
   let removed = 0;
   let firstAt: Pt | null = null;
 
-  for (let i = 0; i < n; i++) {
-    const type = types[i];
+  // Only earlier live segments of the same type; what one candidate does changes no other's
+  // standing, so they are filtered while searching, in the index's order.
+  let i = 0;
+  const isCandidate = (j: number) => j < i && alive[j] === 1 && types[j] === types[i];
+  for (; i < n; i++) {
     const b = bbox(segs[i]!);
-    // Only earlier live segments of the same type; what one candidate does changes no other's
-    // standing, so they are filtered while searching, in the index's order.
-    const candidates = index.search(
-      b.minX - tol,
-      b.minY - tol,
-      b.maxX + tol,
-      b.maxY + tol,
-      (j) => j < i && alive[j] === 1 && types[j] === type,
-    );
+    const candidates = index.search(b.minX - tol, b.minY - tol, b.maxX + tol, b.maxY + tol, isCandidate);
     for (const j of candidates) {
       const si = segs[i]!;
       const sj = segs[j]!;
