@@ -107,18 +107,31 @@ export function length(s: Segment): number {
 
 /** Unit direction of travel at the start (end = 'a') or at the end (end = 'b'). */
 export function direction(s: Segment, end: 'a' | 'b'): Pt {
+  return directionInto(s, end, { x: 0, y: 0 });
+}
+
+/** direction(), written into `out` (for loops over every vertex that need no new object). */
+export function directionInto(s: Segment, end: 'a' | 'b', out: Pt): Pt {
   switch (s.kind) {
     case 'line': {
       const l = dist(s.a, s.b);
-      return l === 0 ? { x: 0, y: 0 } : { x: (s.b.x - s.a.x) / l, y: (s.b.y - s.a.y) / l };
+      out.x = l === 0 ? 0 : (s.b.x - s.a.x) / l;
+      out.y = l === 0 ? 0 : (s.b.y - s.a.y) / l;
+      return out;
     }
     case 'arc': {
       const angle = end === 'a' ? s.start : s.start + s.sweep;
       const sign = Math.sign(s.sweep);
-      return { x: -Math.sin(angle) * sign, y: Math.cos(angle) * sign };
+      out.x = -Math.sin(angle) * sign;
+      out.y = Math.cos(angle) * sign;
+      return out;
     }
-    case 'curve':
-      return end === 'a' ? s.startDir : s.endDir;
+    case 'curve': {
+      const d = end === 'a' ? s.startDir : s.endDir;
+      out.x = d.x;
+      out.y = d.y;
+      return out;
+    }
   }
 }
 

@@ -2,7 +2,7 @@ import KDBush from 'kdbush';
 import type { RulePath } from '../drawing';
 import { JOIN_TOLERANCE_IN } from '../limits';
 import type { PricedRuleType } from '../ruleType';
-import { direction, type Segment } from '../geometry/segment';
+import { directionInto, type Segment } from '../geometry/segment';
 import { angleBetween, dist, type Pt } from '../geometry/vec';
 
 /**
@@ -26,20 +26,25 @@ export interface Network {
 
 export const segOfEnd = (end: number) => end >> 1;
 
-/** Direction of travel arriving at the node through this end. */
-function arriving(segments: Segment[], end: number): Pt {
-  const s = segments[segOfEnd(end)]!;
-  if (end & 1) return direction(s, 'b');
-  const d = direction(s, 'a');
-  return { x: -d.x, y: -d.y };
-}
+// Directions of travel at the two ends being compared, reused: turnAngle runs at every vertex.
+const arriving = { x: 0, y: 0 };
+const leaving = { x: 0, y: 0 };
 
 /** Change of direction, in radians, passing from one rule end into the other at their node. */
 export function turnAngle(net: Pick<Network, 'segments'>, from: number, to: number): number {
-  const a = arriving(net.segments, from);
-  const b = arriving(net.segments, to);
-  // Leaving through `to` is arriving through it reversed.
-  return angleBetween(a, { x: -b.x, y: -b.y });
+  // Arriving through an end is travelling the segment towards it; leaving through `to` is
+  // travelling its segment away from it.
+  directionInto(net.segments[segOfEnd(from)]!, from & 1 ? 'b' : 'a', arriving);
+  if (!(from & 1)) {
+    arriving.x = -arriving.x;
+    arriving.y = -arriving.y;
+  }
+  directionInto(net.segments[segOfEnd(to)]!, to & 1 ? 'b' : 'a', leaving);
+  if (to & 1) {
+    leaving.x = -leaving.x;
+    leaving.y = -leaving.y;
+  }
+  return angleBetween(arriving, leaving);
 }
 
 export function buildNetwork(paths: RulePath[], tol = JOIN_TOLERANCE_IN): Network {
