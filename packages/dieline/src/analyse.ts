@@ -158,7 +158,8 @@ function measure(read: Drawing, format: DielineFormat, opts: AnalyseOptions, lim
     dedup.index ? { index: dedup.index, netOf: networkIds(paths, dedup.origin, dedup.index.numItems) } : undefined,
   );
   const { closedContours, punches } = countContours(net, chains);
-  const bbox = sizeOf(boundsOf(priced));
+  const pricedBounds = boundsOf(priced);
+  const bbox = sizeOf(pricedBounds);
   const board = priced.length > 0 ? boardSize(bbox, opts.marginIn ?? DEFAULT_MARGIN_IN) : { width: 0, height: 0 };
   const pricedLength = length.total - length.other;
 
@@ -181,7 +182,9 @@ function measure(read: Drawing, format: DielineFormat, opts: AnalyseOptions, lim
     ...(drawing.page ? { page: drawing.page } : {}),
     ...(layout ? { layout } : {}),
   };
-  return { metrics, preview: buildPreview(paths, boundsOf(paths), drawing.yUp), format, drawingUnits: drawing.units };
+  // With every rule priced the preview's frame is the same box: not measured twice.
+  const allBounds = priced.length === paths.length ? pricedBounds : boundsOf(paths);
+  return { metrics, preview: buildPreview(paths, allBounds, drawing.yUp), format, drawingUnits: drawing.units };
 }
 
 function checkOptions(opts: AnalyseOptions): void {
