@@ -27,11 +27,7 @@ const round = (v: number) => Math.round(v * 1e4) / 1e4;
 export function buildPreview(paths: RulePath[], box: Box | null, yUp: boolean): DielinePreview {
   if (!box) return { width: 0, height: 0, paths: [] };
   // Into the preview frame: x from the left edge, y down from the top edge.
-  const map = (p: Pt): Pt => ({ x: p.x - box.minX, y: yUp ? box.maxY - p.y : p.y - box.minY });
-  const xy = (p: Pt) => {
-    const q = map(p);
-    return `${round(q.x)} ${round(q.y)}`;
-  };
+  const xy = (p: Pt) => `${round(p.x - box.minX)} ${round(yUp ? box.maxY - p.y : p.y - box.minY)}`;
   const out: PreviewPath[] = paths.map((p) => {
     let d = `M${xy(p.segments[0]!.a)}`;
     for (const s of p.segments) d += segmentData(s, xy, yUp);
