@@ -87,9 +87,13 @@ export function transformedArc(m: Matrix, center: Pt, r: number, start: number, 
   const k = similarityScale(m);
   if (k !== null) {
     const c = apply(m, center);
-    const p = apply(m, onCircle(center, r, start));
+    // The start point on the circle, placed (as apply(m, onCircle(...)), in plain numbers).
+    const x = center.x + r * Math.cos(start);
+    const y = center.y + r * Math.sin(start);
+    const px = m.a * x + m.c * y + m.e;
+    const py = m.b * x + m.d * y + m.f;
     const mirrored = determinant(m) < 0;
-    return arc(c, r * k, Math.atan2(p.y - c.y, p.x - c.x), mirrored ? -sweep : sweep);
+    return arc(c, r * k, Math.atan2(py - c.y, px - c.x), mirrored ? -sweep : sweep);
   }
   return curve((t) => apply(m, onCircle(center, r, t)), start, start + sweep);
 }
