@@ -6,7 +6,7 @@ import { countBends } from './metrics/bends';
 import { boardSize, boundsOf, DEFAULT_MARGIN_IN, fitsPress, type Press, type Size, sizeOf } from './metrics/board';
 import { type Complexity, complexityOf } from './metrics/complexity';
 import { countContours } from './metrics/contours';
-import { countJoints } from './metrics/joints';
+import { countJoints, networkIds } from './metrics/joints';
 import { countCurves, type LengthByType, lengthsByType, toMm } from './metrics/lengths';
 import { buildPreview, type DielinePreview } from './preview';
 import { createRuleTypeResolver, isRuleType, type LayerMap } from './ruleType';
@@ -152,9 +152,14 @@ function measure(read: Drawing, format: DielineFormat, opts: AnalyseOptions, lim
   const length = lengthsByType(paths);
   const { curves, minRadius } = countCurves(net.segments);
   const bends = countBends(net);
-  const joints = countJoints(net);
+  const joints = countJoints(
+    net,
+    undefined,
+    dedup.index ? { index: dedup.index, netOf: networkIds(paths, dedup.origin, dedup.index.numItems) } : undefined,
+  );
   const { closedContours, punches } = countContours(net, chains);
-  const bbox = sizeOf(boundsOf(priced));
+  const pricedBounds = boundsOf(priced);
+  const bbox = sizeOf(pricedBounds);
   const board = priced.length > 0 ? boardSize(bbox, opts.marginIn ?? DEFAULT_MARGIN_IN) : { width: 0, height: 0 };
   const pricedLength = length.total - length.other;
 
@@ -177,7 +182,9 @@ function measure(read: Drawing, format: DielineFormat, opts: AnalyseOptions, lim
     ...(drawing.page ? { page: drawing.page } : {}),
     ...(layout ? { layout } : {}),
   };
-  return { metrics, preview: buildPreview(paths, boundsOf(paths), drawing.yUp), format, drawingUnits: drawing.units };
+  // With every rule priced the preview's frame is the same box: not measured twice.
+  const allBounds = priced.length === paths.length ? pricedBounds : boundsOf(paths);
+  return { metrics, preview: buildPreview(paths, allBounds, drawing.yUp), format, drawingUnits: drawing.units };
 }
 
 function checkOptions(opts: AnalyseOptions): void {

@@ -46,6 +46,8 @@ export class DrawingBuilder {
   readonly paths: RulePath[] = [];
   readonly warnings: string[] = [];
   private readonly layers = new Map<string, LayerInfo>();
+  /** A reader that hands the same choice object for each entity of a layer skips the name key. */
+  private readonly layerOfChoice = new WeakMap<RuleTypeChoice, LayerInfo>();
   private readonly skipped = new Map<string, number>();
   private entities = 0;
   private segments = 0;
@@ -62,10 +64,16 @@ export class DrawingBuilder {
         `The drawing has more than ${this.limits.maxEntities} entities (after expanding blocks); simplify it or split it into several files.`,
       );
     }
+    const known = this.layerOfChoice.get(choice);
+    if (known) {
+      known.entities++;
+      return;
+    }
     const key = `${choice.layer}\u0000${choice.ruleType}`;
-    const info = this.layers.get(key);
+    let info = this.layers.get(key);
     if (info) info.entities++;
-    else this.layers.set(key, { name: choice.layer, ruleType: choice.ruleType, entities: 1 });
+    else this.layers.set(key, (info = { name: choice.layer, ruleType: choice.ruleType, entities: 1 }));
+    this.layerOfChoice.set(choice, info);
   }
 
   /** Notes an entity that is not a rule (text, dimension …), reported once per kind. */

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import * as d from '../fixtures/dxf';
 import { analyseDieline } from './analyse';
+import { coordinateText } from './preview';
 
 describe('preview', () => {
   // DXF y points up; the preview's y points down from the top edge. A line from (0,0) to (2,1)
@@ -34,5 +35,33 @@ describe('preview', () => {
     const points = p.paths[0]!.d.split('L').length;
     expect(points).toBeGreaterThan(20);
     expect(points).toBeLessThan(200);
+  });
+});
+
+describe('coordinateText', () => {
+  // The reference is the engine's own number formatting of the rounded value: the same text.
+  it('writes exactly what formatting the rounded number writes', () => {
+    const viaFloat = (v: number) => `${Math.round(v * 1e4) / 1e4}`;
+    const values = [
+      0,
+      -0,
+      1,
+      -1,
+      0.5,
+      0.00005,
+      -0.00005,
+      0.00004,
+      1.23456,
+      -7.000049,
+      2.5e-5,
+      12345.6789,
+      1e10 + 0.1234,
+    ];
+    values.push(1e11 + 0.5, 3e14, -9.87e15, 1e21, Number.MAX_VALUE, NaN, Infinity, -Infinity);
+    let seed = 3;
+    const next = () => (seed = (seed * 1103515245 + 12345) % 2147483648) / 2147483648;
+    for (let i = 0; i < 100_000; i++) values.push((next() - 0.5) * 10 ** Math.floor(next() * 14 - 4));
+    for (let i = 0; i < 20_000; i++) values.push(Math.round((next() - 0.5) * 1e6) / 1e4);
+    expect(values.filter((v) => coordinateText(v) !== viaFloat(v))).toEqual([]);
   });
 });

@@ -24,14 +24,34 @@ export interface DielinePreview {
 const SIMPLIFY_IN = 0.001;
 const round = (v: number) => Math.round(v * 1e4) / 1e4;
 
+/**
+ * `${round(v)}`, written from the integer count of ten-thousandths, about 3 times faster than
+ * formatting the float. Below 1e11 in no shorter decimal than those four places reads back as the
+ * same double (a different one would be 1e-4 away, more than the spacing of doubles there), so
+ * the number's own shortest form is this one; larger values take the float's own route.
+ */
+export function coordinateText(v: number): string {
+  const n = Math.round(v * 1e4);
+  if (!(Math.abs(n) < 1e15)) return `${n / 1e4}`;
+  if (n === 0) return '0';
+  const whole = Math.floor(Math.abs(n) / 1e4);
+  let frac = Math.abs(n) - whole * 1e4;
+  let text = `${whole}`;
+  if (frac !== 0) {
+    let places = 4;
+    while (frac % 10 === 0) {
+      frac /= 10;
+      places--;
+    }
+    text += `.${`${frac}`.padStart(places, '0')}`;
+  }
+  return n < 0 ? `-${text}` : text;
+}
+
 export function buildPreview(paths: RulePath[], box: Box | null, yUp: boolean): DielinePreview {
   if (!box) return { width: 0, height: 0, paths: [] };
   // Into the preview frame: x from the left edge, y down from the top edge.
-  const map = (p: Pt): Pt => ({ x: p.x - box.minX, y: yUp ? box.maxY - p.y : p.y - box.minY });
-  const xy = (p: Pt) => {
-    const q = map(p);
-    return `${round(q.x)} ${round(q.y)}`;
-  };
+  const xy = (p: Pt) => `${coordinateText(p.x - box.minX)} ${coordinateText(yUp ? box.maxY - p.y : p.y - box.minY)}`;
   const out: PreviewPath[] = paths.map((p) => {
     let d = `M${xy(p.segments[0]!.a)}`;
     for (const s of p.segments) d += segmentData(s, xy, yUp);
@@ -48,7 +68,7 @@ function segmentData(s: Segment, xy: (p: Pt) => string, yUp: boolean): string {
     case 'arc': {
       // Flipping y turns the arc the other way round.
       const sweepFlag = s.sweep > 0 !== yUp ? 1 : 0;
-      const r = round(s.r);
+      const r = coordinateText(s.r);
       if (Math.abs(s.sweep) >= 2 * Math.PI - 1e-9) {
         // A full circle is two half arcs: one SVG arc cannot end where it starts.
         const half = { x: 2 * s.center.x - s.a.x, y: 2 * s.center.y - s.a.y };

@@ -33,7 +33,12 @@ interface Fields extends IEntity {
 const finite = (v: unknown): v is number => typeof v === 'number' && Number.isFinite(v);
 
 function point(p: IPoint | undefined): Pt | null {
-  return p && finite(p.x) && finite(p.y) ? { x: p.x, y: p.y } : null;
+  return isPoint(p) ? { x: p.x, y: p.y } : null;
+}
+
+/** A parsed point with finite x and y, used as it is (transforms read only x and y). */
+function isPoint(p: IPoint | undefined): p is IPoint {
+  return p !== undefined && p !== null && finite(p.x) && finite(p.y);
 }
 
 /** Counter-clockwise sweep from start to end, in (0, 2π]; equal angles make a full turn. */
@@ -57,9 +62,9 @@ export function entityGeometry(entity: IEntity, m: Matrix): EntityGeometry | nul
   const e = entity as Fields;
   switch (e.type) {
     case 'LINE': {
-      const a = point(e.vertices?.[0]);
-      const b = point(e.vertices?.[1]);
-      if (!a || !b) return { problem: 'a LINE without two end points' };
+      const a = e.vertices?.[0];
+      const b = e.vertices?.[1];
+      if (!isPoint(a) || !isPoint(b)) return { problem: 'a LINE without two end points' };
       return { segments: [line(apply(m, a), apply(m, b))], closed: false };
     }
     case 'ARC':
@@ -91,24 +96,24 @@ export function entityGeometry(entity: IEntity, m: Matrix): EntityGeometry | nul
 function polyline(e: Fields, m: Matrix): EntityGeometry {
   if (e.is3dPolygonMesh || e.isPolyfaceMesh) return { problem: `a ${e.type} mesh` };
   // Spline-fit POLYLINEs repeat their frame as control points; the fitted vertices are the curve.
-  const vertices = (e.vertices ?? []).filter((v) => !v.splineControlPoint);
-  const pts: Array<{ p: Pt; bulge: number }> = [];
-  for (const v of vertices) {
-    const p = point(v);
-    if (!p) return { problem: `a ${e.type} with an invalid vertex` };
-    pts.push({ p, bulge: finite(v.bulge) ? v.bulge : 0 });
-  }
-  if (pts.length < 2) return { problem: `a ${e.type} with fewer than two vertices` };
+  const all = e.vertices ?? [];
+  const vertices = all.some((v) => v.splineControlPoint) ? all.filter((v) => !v.splineControlPoint) : all;
+  if (!vertices.every(isPoint)) return { problem: `a ${e.type} with an invalid vertex` };
+  if (vertices.length < 2) return { problem: `a ${e.type} with fewer than two vertices` };
   const closed = e.shape === true;
+  // Each vertex is placed once; the lines meeting there share the point.
+  const placed = vertices.map((v) => apply(m, v));
   const segments: Segment[] = [];
-  const count = closed ? pts.length : pts.length - 1;
+  const count = closed ? vertices.length : vertices.length - 1;
   for (let i = 0; i < count; i++) {
-    const from = pts[i]!;
-    const to = pts[(i + 1) % pts.length]!;
-    if (from.bulge === 0 || (from.p.x === to.p.x && from.p.y === to.p.y)) {
-      segments.push(line(apply(m, from.p), apply(m, to.p)));
+    const j = (i + 1) % vertices.length;
+    const from = vertices[i]!;
+    const to = vertices[j]!;
+    const bulge = finite(from.bulge) ? from.bulge : 0;
+    if (bulge === 0 || (from.x === to.x && from.y === to.y)) {
+      segments.push(line(placed[i]!, placed[j]!));
     } else {
-      const a = bulgeArc(from.p, to.p, from.bulge);
+      const a = bulgeArc(from, to, bulge);
       segments.push(transformedArc(m, a.center, a.r, a.start, a.sweep));
     }
   }

@@ -3,7 +3,7 @@ import { type Drawing, DrawingBuilder, type DrawingUnits } from '../drawing';
 import { DielineError } from '../errors';
 import { type Matrix, multiply, rotate, scale, translate } from '../geometry/matrix';
 import { type Limits, MAX_BLOCK_DEPTH } from '../limits';
-import type { RuleTypeResolver } from '../ruleType';
+import type { RuleTypeChoice, RuleTypeResolver } from '../ruleType';
 import { inchesPerInsunit } from '../units';
 import { type UnitName, UNIT_INCHES } from '../unitNames';
 import { entityGeometry } from './entities';
@@ -24,6 +24,13 @@ export function readDxf(text: string, opts: ReadDxfOptions): Drawing {
   const units = drawingUnits(dxf, opts.units, b);
   const root = scale(units.inchesPerUnit);
   const active: string[] = [];
+  // One rule type choice per layer name, resolved once and shared by its entities.
+  const choices = new Map<string, RuleTypeChoice>();
+  const choiceOf = (layer: string): RuleTypeChoice => {
+    let choice = choices.get(layer);
+    if (!choice) choices.set(layer, (choice = opts.resolve([layer])));
+    return choice;
+  };
 
   const walk = (entities: IEntity[], m: Matrix, parentLayer: string | null, depth: number): void => {
     for (const entity of entities) {
@@ -38,7 +45,7 @@ export function readDxf(text: string, opts: ReadDxfOptions): Drawing {
         insert(entity as IInsertEntity, m, layer, depth);
         continue;
       }
-      const choice = opts.resolve([layer]);
+      const choice = choiceOf(layer);
       const geometry = entityGeometry(entity, m);
       if (geometry === null) {
         b.skip(entity.type);
@@ -96,35 +103,46 @@ export function readDxf(text: string, opts: ReadDxfOptions): Drawing {
 /**
  * DXF is pairs of lines, a whole-number group code then a value (DXF reference, "Group codes").
  * Checking the codes first gives a clear error with a line number, and keeps the parser from
- * printing its own warnings about them.
+ * printing its own warnings about them. The text is scanned by character code, without
+ * cutting out a string per line.
  */
 function checkGroupCodes(text: string): void {
+  const len = text.length;
   let start = 0;
   let lineNo = 0;
   let sawEof = false;
-  while (start < text.length) {
+  while (start < len) {
     let end = text.indexOf('\n', start);
-    if (end < 0) end = text.length;
-    const code = text.slice(start, end).trim();
+    if (end < 0) end = len;
     lineNo++;
-    if (code === '' && end >= text.length - 1) break; // the final newline
-    if (!/^-?\d{1,4}$/.test(code)) {
+    let lo = start;
+    let hi = end;
+    while (lo < hi && isTrimmed(text.charCodeAt(lo))) lo++;
+    while (hi > lo && isTrimmed(text.charCodeAt(hi - 1))) hi--;
+    if (lo === hi && end >= len - 1) break; // the final newline
+    if (!isGroupCode(text, lo, hi)) {
+      const code = text.slice(lo, hi);
       throw new DielineError(
         'MALFORMED',
         `The DXF file is damaged: line ${lineNo} should hold a group code (a whole number) but holds "${code.slice(0, 40)}".`,
       );
     }
     const valueEnd = text.indexOf('\n', end + 1);
-    if (end >= text.length) {
+    if (end >= len) {
       throw new DielineError(
         'TRUNCATED',
         'The DXF file ends in the middle of a group (a code without its value): it looks cut short. Export it again.',
       );
     }
-    const value = text.slice(end + 1, valueEnd < 0 ? text.length : valueEnd).trim();
-    if (code === '0' && value === 'EOF') sawEof = true;
+    if (hi - lo === 1 && text.charCodeAt(lo) === 48 /* 0 */) {
+      let vlo = end + 1;
+      let vhi = valueEnd < 0 ? len : valueEnd;
+      while (vlo < vhi && isTrimmed(text.charCodeAt(vlo))) vlo++;
+      while (vhi > vlo && isTrimmed(text.charCodeAt(vhi - 1))) vhi--;
+      if (vhi - vlo === 3 && text.startsWith('EOF', vlo)) sawEof = true;
+    }
     lineNo++;
-    start = valueEnd < 0 ? text.length : valueEnd + 1;
+    start = valueEnd < 0 ? len : valueEnd + 1;
     if (sawEof) break;
   }
   if (!sawEof)
@@ -132,6 +150,34 @@ function checkGroupCodes(text: string): void {
       'TRUNCATED',
       'The DXF file ends before its EOF marker: it looks cut short. Export it again.',
     );
+}
+
+/** What String.prototype.trim removes: white space and line terminators (ECMAScript). */
+function isTrimmed(c: number): boolean {
+  if (c <= 32) return c === 32 || (c >= 9 && c <= 13);
+  if (c < 160) return false;
+  return (
+    c === 160 ||
+    c === 0x1680 ||
+    (c >= 0x2000 && c <= 0x200a) ||
+    c === 0x2028 ||
+    c === 0x2029 ||
+    c === 0x202f ||
+    c === 0x205f ||
+    c === 0x3000 ||
+    c === 0xfeff
+  );
+}
+
+/** text[lo, hi) is an optional minus and one to four digits. */
+function isGroupCode(text: string, lo: number, hi: number): boolean {
+  if (lo < hi && text.charCodeAt(lo) === 45 /* - */) lo++;
+  if (hi - lo < 1 || hi - lo > 4) return false;
+  for (let i = lo; i < hi; i++) {
+    const c = text.charCodeAt(i);
+    if (c < 48 || c > 57) return false;
+  }
+  return true;
 }
 
 function parse(text: string): IDxf {

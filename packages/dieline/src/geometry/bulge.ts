@@ -1,4 +1,4 @@
-import type { Pt } from './vec';
+import { hypot, type Pt } from './vec';
 
 export interface ArcParams {
   center: Pt;
@@ -16,7 +16,7 @@ export interface ArcParams {
 export function bulgeArc(p1: Pt, p2: Pt, bulge: number): ArcParams {
   const dx = p2.x - p1.x;
   const dy = p2.y - p1.y;
-  const c = Math.hypot(dx, dy);
+  const c = hypot(dx, dy);
   const sweep = 4 * Math.atan(bulge);
   const r = c / (2 * Math.abs(Math.sin(sweep / 2)));
   const offset = ((c / 2) * (1 - bulge * bulge)) / (2 * bulge);

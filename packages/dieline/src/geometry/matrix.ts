@@ -1,4 +1,4 @@
-import type { Pt } from './vec';
+import { hypot, type Pt } from './vec';
 
 /**
  * 2D affine transform [a c e; b d f; 0 0 1], the same layout as SVG's matrix(a b c d e f)
@@ -51,8 +51,8 @@ export const determinant = (m: Matrix): number => m.a * m.d - m.b * m.c;
  * maybe a mirror), else null.
  */
 export function similarityScale(m: Matrix): number | null {
-  const sx = Math.hypot(m.a, m.b);
-  const sy = Math.hypot(m.c, m.d);
+  const sx = hypot(m.a, m.b);
+  const sy = hypot(m.c, m.d);
   const orthogonal = Math.abs(m.a * m.c + m.b * m.d) <= 1e-9 * sx * sy;
   return orthogonal && Math.abs(sx - sy) <= 1e-9 * Math.max(sx, sy) ? sx : null;
 }

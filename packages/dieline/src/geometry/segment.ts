@@ -2,7 +2,7 @@ import { flattenCurve, type PointAt } from './flatten';
 import { apply, type Matrix, similarityScale, determinant } from './matrix';
 import { dist, distToSegment, type Pt } from './vec';
 
-/** Every segment may carry its box once computed (see bbox). */
+/** Every segment may carry its box once computed (see bbox); made with it unset, so one shape. */
 interface Boxed {
   box?: Box;
 }
@@ -48,7 +48,7 @@ export interface Box {
 export const TAU = 2 * Math.PI;
 
 export function line(a: Pt, b: Pt): LineSeg {
-  return { kind: 'line', a, b };
+  return { kind: 'line', a, b, box: undefined };
 }
 
 const onCircle = (c: Pt, r: number, angle: number): Pt => ({
@@ -62,7 +62,7 @@ export function arc(center: Pt, r: number, start: number, sweep: number): ArcSeg
   const a = onCircle(center, r, start);
   // A full circle ends where it starts, exactly, so its two ends meet.
   const b = Math.abs(s) === TAU ? a : onCircle(center, r, start + s);
-  return { kind: 'arc', a, b, center, r, start, sweep: s };
+  return { kind: 'arc', a, b, center, r, start, sweep: s, box: undefined };
 }
 
 export function curve(p: PointAt, t0: number, t1: number): CurveSeg {
@@ -78,6 +78,7 @@ export function curve(p: PointAt, t0: number, t1: number): CurveSeg {
     minRadius: f.minRadius,
     startDir: f.startDir,
     endDir: f.endDir,
+    box: undefined,
   };
 }
 
@@ -86,9 +87,13 @@ export function transformedArc(m: Matrix, center: Pt, r: number, start: number, 
   const k = similarityScale(m);
   if (k !== null) {
     const c = apply(m, center);
-    const p = apply(m, onCircle(center, r, start));
+    // The start point on the circle, placed (as apply(m, onCircle(...)), in plain numbers).
+    const x = center.x + r * Math.cos(start);
+    const y = center.y + r * Math.sin(start);
+    const px = m.a * x + m.c * y + m.e;
+    const py = m.b * x + m.d * y + m.f;
     const mirrored = determinant(m) < 0;
-    return arc(c, r * k, Math.atan2(p.y - c.y, p.x - c.x), mirrored ? -sweep : sweep);
+    return arc(c, r * k, Math.atan2(py - c.y, px - c.x), mirrored ? -sweep : sweep);
   }
   return curve((t) => apply(m, onCircle(center, r, t)), start, start + sweep);
 }
@@ -106,18 +111,31 @@ export function length(s: Segment): number {
 
 /** Unit direction of travel at the start (end = 'a') or at the end (end = 'b'). */
 export function direction(s: Segment, end: 'a' | 'b'): Pt {
+  return directionInto(s, end, { x: 0, y: 0 });
+}
+
+/** direction(), written into `out` (for loops over every vertex that need no new object). */
+export function directionInto(s: Segment, end: 'a' | 'b', out: Pt): Pt {
   switch (s.kind) {
     case 'line': {
       const l = dist(s.a, s.b);
-      return l === 0 ? { x: 0, y: 0 } : { x: (s.b.x - s.a.x) / l, y: (s.b.y - s.a.y) / l };
+      out.x = l === 0 ? 0 : (s.b.x - s.a.x) / l;
+      out.y = l === 0 ? 0 : (s.b.y - s.a.y) / l;
+      return out;
     }
     case 'arc': {
       const angle = end === 'a' ? s.start : s.start + s.sweep;
       const sign = Math.sign(s.sweep);
-      return { x: -Math.sin(angle) * sign, y: Math.cos(angle) * sign };
+      out.x = -Math.sin(angle) * sign;
+      out.y = Math.cos(angle) * sign;
+      return out;
     }
-    case 'curve':
-      return end === 'a' ? s.startDir : s.endDir;
+    case 'curve': {
+      const d = end === 'a' ? s.startDir : s.endDir;
+      out.x = d.x;
+      out.y = d.y;
+      return out;
+    }
   }
 }
 
@@ -134,24 +152,34 @@ export function bbox(s: Segment): Box {
   return (s.box ??= computeBox(s));
 }
 
+const AXIS_X = [1, 0, -1, 0];
+const AXIS_Y = [0, 1, 0, -1];
+
 function computeBox(s: Segment): Box {
-  const pts: Pt[] = s.kind === 'curve' ? s.points : [s.a, s.b];
-  let minX = Infinity;
-  let minY = Infinity;
-  let maxX = -Infinity;
-  let maxY = -Infinity;
-  for (const p of pts) {
-    if (p.x < minX) minX = p.x;
-    if (p.y < minY) minY = p.y;
-    if (p.x > maxX) maxX = p.x;
-    if (p.y > maxY) maxY = p.y;
+  if (s.kind === 'curve') {
+    let minX = Infinity;
+    let minY = Infinity;
+    let maxX = -Infinity;
+    let maxY = -Infinity;
+    for (const p of s.points) {
+      if (p.x < minX) minX = p.x;
+      if (p.y < minY) minY = p.y;
+      if (p.x > maxX) maxX = p.x;
+      if (p.y > maxY) maxY = p.y;
+    }
+    return { minX, minY, maxX, maxY };
   }
+  const { a, b } = s;
+  let minX = b.x < a.x ? b.x : a.x;
+  let minY = b.y < a.y ? b.y : a.y;
+  let maxX = b.x > a.x ? b.x : a.x;
+  let maxY = b.y > a.y ? b.y : a.y;
   if (s.kind === 'arc') {
     // The extremes of a circle are at 0, 90, 180 and 270 degrees; add those the arc passes.
     for (let k = 0; k < 4; k++) {
       if (!arcContains(s, (k * Math.PI) / 2)) continue;
-      const x = s.center.x + s.r * [1, 0, -1, 0][k]!;
-      const y = s.center.y + s.r * [0, 1, 0, -1][k]!;
+      const x = s.center.x + s.r * AXIS_X[k]!;
+      const y = s.center.y + s.r * AXIS_Y[k]!;
       minX = Math.min(minX, x);
       minY = Math.min(minY, y);
       maxX = Math.max(maxX, x);

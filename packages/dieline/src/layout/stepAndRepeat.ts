@@ -158,7 +158,7 @@ function chooseTurn(
 function moveSegment(s: Segment, m: Matrix): Segment {
   switch (s.kind) {
     case 'line':
-      return { kind: 'line', a: apply(m, s.a), b: apply(m, s.b) };
+      return { kind: 'line', a: apply(m, s.a), b: apply(m, s.b), box: undefined };
     case 'arc': {
       const turn = Math.atan2(m.b, m.a);
       return arc(apply(m, s.center), s.r, s.start + turn, s.sweep);

@@ -16,21 +16,26 @@ export interface Press {
 export const DEFAULT_MARGIN_IN = 1;
 
 export function boundsOf(paths: RulePath[]): Box | null {
-  let box: Box | null = null;
+  let minX = Infinity;
+  let minY = Infinity;
+  let maxX = -Infinity;
+  let maxY = -Infinity;
+  let any = false;
   for (const p of paths) {
     for (const s of p.segments) {
       const b = bbox(s);
-      box = box
-        ? {
-            minX: Math.min(box.minX, b.minX),
-            minY: Math.min(box.minY, b.minY),
-            maxX: Math.max(box.maxX, b.maxX),
-            maxY: Math.max(box.maxY, b.maxY),
-          }
-        : b;
+      if (any) {
+        minX = Math.min(minX, b.minX);
+        minY = Math.min(minY, b.minY);
+        maxX = Math.max(maxX, b.maxX);
+        maxY = Math.max(maxY, b.maxY);
+      } else {
+        ({ minX, minY, maxX, maxY } = b);
+        any = true;
+      }
     }
   }
-  return box;
+  return any ? { minX, minY, maxX, maxY } : null;
 }
 
 export const sizeOf = (box: Box | null): Size =>

@@ -1,14 +1,23 @@
-import Flatbush from 'flatbush';
+import type Flatbush from 'flatbush';
 import type { RulePath } from '../drawing';
 import { JOIN_TOLERANCE_IN } from '../limits';
+import type { RuleType } from '../ruleType';
 import { bbox, distanceTo, length, line, midpoint, type Segment } from '../geometry/segment';
 import { dist, dot, type Pt, sub } from '../geometry/vec';
+import { segmentIndex } from './segmentIndex';
 
 export interface DuplicateResult {
   paths: RulePath[];
   /** Segments dropped or shortened because another rule of the same type already covers them. */
   removed: number;
   firstAt: Pt | null;
+  /**
+   * The index of the segments as they came in (see segmentIndex; null without segments), kept
+   * for the joints: a shortened segment lies inside its old box, so it is still found.
+   */
+  index: Flatbush | null;
+  /** For each segment of `paths`, in order, its id in `index`. */
+  origin: Int32Array;
 }
 
 /**
@@ -20,83 +29,102 @@ export interface DuplicateResult {
  */
 export function removeDuplicates(paths: RulePath[], tol = JOIN_TOLERANCE_IN): DuplicateResult {
   const segs: Segment[] = [];
-  const owner: number[] = [];
-  paths.forEach((p, pi) => p.segments.forEach((s) => (segs.push(s), owner.push(pi))));
-  if (segs.length === 0) return { paths, removed: 0, firstAt: null };
-
-  const index = new Flatbush(segs.length);
-  for (const s of segs) {
-    const b = bbox(s);
-    index.add(b.minX - tol, b.minY - tol, b.maxX + tol, b.maxY + tol);
+  const types: RuleType[] = [];
+  for (const p of paths) {
+    for (const s of p.segments) {
+      segs.push(s);
+      types.push(p.ruleType);
+    }
   }
-  index.finish();
+  const n = segs.length;
+  // Segment k is the first of its path, or the last: the path does not run on across it.
+  const pathStart = new Uint8Array(n + 1);
+  for (let p = 0, k = 0; p < paths.length; k += paths[p]!.segments.length, p++) pathStart[k] = 1;
+  pathStart[n] = 1;
+  if (n === 0) return { paths, removed: 0, firstAt: null, index: null, origin: new Int32Array(0) };
 
-  const alive = segs.map(() => true);
+  const index = segmentIndex(segs, tol);
+  const alive = new Uint8Array(n).fill(1);
   // A shortened segment no longer meets its neighbour in the path: the path breaks there.
-  const breakBefore = segs.map(() => false);
-  const breakAfter = segs.map(() => false);
+  const breakBefore = new Uint8Array(n);
+  const breakAfter = new Uint8Array(n);
   let removed = 0;
   let firstAt: Pt | null = null;
-  const note = (p: Pt) => {
-    removed++;
-    firstAt ??= p;
-  };
 
-  for (let i = 0; i < segs.length; i++) {
-    const type = paths[owner[i]!]!.ruleType;
+  // Only earlier live segments of the same type; what one candidate does changes no other's
+  // standing, so they are filtered while searching, in the index's order.
+  let i = 0;
+  const isCandidate = (j: number) => j < i && alive[j] === 1 && types[j] === types[i];
+  for (; i < n; i++) {
     const b = bbox(segs[i]!);
-    const candidates = index.search(b.minX - tol, b.minY - tol, b.maxX + tol, b.maxY + tol);
+    const candidates = index.search(b.minX - tol, b.minY - tol, b.maxX + tol, b.maxY + tol, isCandidate);
     for (const j of candidates) {
-      if (j >= i || !alive[j] || paths[owner[j]!]!.ruleType !== type) continue;
       const si = segs[i]!;
       const sj = segs[j]!;
       // Short segments (a finely divided curve) compare at a tenth of their length, so
       // neighbouring pieces are not taken for copies of each other.
       const t = Math.min(tol, 0.1 * Math.min(length(si), length(sj)));
       if (liesOn(si, sj, t)) {
-        alive[i] = false;
-        note(si.a);
+        alive[i] = 0;
+        removed++;
+        firstAt ??= si.a;
         break;
       }
       if (si.kind !== 'line' || sj.kind !== 'line') continue;
       const overlap = lineOverlap(si.a, si.b, sj.a, sj.b, t);
       if (overlap === 'inside') {
-        alive[i] = false;
-        note(si.a);
+        alive[i] = 0;
+        removed++;
+        firstAt ??= si.a;
         break;
       }
       if (overlap === 'covers') {
-        alive[j] = false; // the later, longer line covers the earlier one
-        note(sj.a);
-        if (j > 0 && owner[j - 1] === owner[j]) breakAfter[j - 1] = true;
-        if (owner[j + 1] === owner[j]) breakBefore[j + 1] = true;
+        alive[j] = 0; // the later, longer line covers the earlier one
+        removed++;
+        firstAt ??= sj.a;
+        if (!pathStart[j]) breakAfter[j - 1] = 1;
+        if (!pathStart[j + 1]) breakBefore[j + 1] = 1;
       } else if (overlap) {
         segs[i] = line(overlap.a, overlap.b);
-        if (overlap.movedA) breakBefore[i] = true;
-        else breakAfter[i] = true;
-        note(overlap.movedA ? overlap.a : overlap.b);
+        if (overlap.movedA) breakBefore[i] = 1;
+        else breakAfter[i] = 1;
+        removed++;
+        firstAt ??= overlap.movedA ? overlap.a : overlap.b;
       }
     }
   }
-  if (removed === 0) return { paths, removed, firstAt };
+  if (removed === 0) return { paths, removed, firstAt, index, origin: identity(n) };
 
   const out: RulePath[] = [];
+  const origin = new Int32Array(n);
+  let kept = 0;
   let k = 0;
-  paths.forEach((p) => {
-    const intact = p.segments.every((_, n) => alive[k + n] && !breakBefore[k + n] && !breakAfter[k + n]);
+  for (const p of paths) {
+    const end = k + p.segments.length;
+    let intact = true;
+    for (let m = k; m < end; m++) if (!alive[m] || breakBefore[m] || breakAfter[m]) intact = false;
     let run: Segment[] = [];
     const flush = () => {
       if (run.length > 0) out.push({ ...p, segments: run, closed: intact && p.closed });
       run = [];
     };
-    for (let n = 0; n < p.segments.length; n++, k++) {
+    for (; k < end; k++) {
       if (!alive[k] || breakBefore[k]) flush();
-      if (alive[k]) run.push(segs[k]!);
+      if (alive[k]) {
+        run.push(segs[k]!);
+        origin[kept++] = k;
+      }
       if (breakAfter[k]) flush();
     }
     flush();
-  });
-  return { paths: out, removed, firstAt };
+  }
+  return { paths: out, removed, firstAt, index, origin: origin.subarray(0, kept) };
+}
+
+function identity(n: number): Int32Array {
+  const ids = new Int32Array(n);
+  for (let k = 0; k < n; k++) ids[k] = k;
+  return ids;
 }
 
 /** s lies on t: its ends and midpoint are on t, and the lengths agree. */

@@ -2,7 +2,7 @@ import KDBush from 'kdbush';
 import type { RulePath } from '../drawing';
 import { JOIN_TOLERANCE_IN } from '../limits';
 import type { PricedRuleType } from '../ruleType';
-import { direction, type Segment } from '../geometry/segment';
+import { directionInto, type Segment } from '../geometry/segment';
 import { angleBetween, dist, type Pt } from '../geometry/vec';
 
 /**
@@ -26,99 +26,125 @@ export interface Network {
 
 export const segOfEnd = (end: number) => end >> 1;
 
-/** Direction of travel arriving at the node through this end. */
-function arriving(segments: Segment[], end: number): Pt {
-  const s = segments[segOfEnd(end)]!;
-  if (end & 1) return direction(s, 'b');
-  const d = direction(s, 'a');
-  return { x: -d.x, y: -d.y };
-}
+// Directions of travel at the two ends being compared, reused: turnAngle runs at every vertex.
+const arriving = { x: 0, y: 0 };
+const leaving = { x: 0, y: 0 };
 
 /** Change of direction, in radians, passing from one rule end into the other at their node. */
 export function turnAngle(net: Pick<Network, 'segments'>, from: number, to: number): number {
-  const a = arriving(net.segments, from);
-  const b = arriving(net.segments, to);
-  // Leaving through `to` is arriving through it reversed.
-  return angleBetween(a, { x: -b.x, y: -b.y });
+  // Arriving through an end is travelling the segment towards it; leaving through `to` is
+  // travelling its segment away from it.
+  directionInto(net.segments[segOfEnd(from)]!, from & 1 ? 'b' : 'a', arriving);
+  if (!(from & 1)) {
+    arriving.x = -arriving.x;
+    arriving.y = -arriving.y;
+  }
+  directionInto(net.segments[segOfEnd(to)]!, to & 1 ? 'b' : 'a', leaving);
+  if (to & 1) {
+    leaving.x = -leaving.x;
+    leaving.y = -leaving.y;
+  }
+  return angleBetween(arriving, leaving);
 }
 
 export function buildNetwork(paths: RulePath[], tol = JOIN_TOLERANCE_IN): Network {
+  // Sizes first, so every per-segment and per-node table is one typed array.
+  let segCount = 0;
+  let nodeCount = 0;
+  for (const p of paths) {
+    const n = p.segments.length;
+    segCount += n;
+    if (n > 0) nodeCount += p.closed ? n : n + 1;
+  }
   const segments: Segment[] = [];
   const types: PricedRuleType[] = [];
-  const nodeOfEnd: number[] = [];
+  const nodeOfEnd = new Int32Array(2 * segCount);
   const nodePos: Pt[] = [];
-  const free: boolean[] = [];
-  const pathOfNode: number[] = [];
+  const free = new Uint8Array(nodeCount);
+  const pathOfNode = new Int32Array(nodeCount);
 
-  paths.forEach((p, pi) => {
-    const first = nodePos.length;
+  let node = 0;
+  for (let pi = 0; pi < paths.length; pi++) {
+    const p = paths[pi]!;
     const n = p.segments.length;
-    p.segments.forEach((s, i) => {
+    if (n === 0) continue;
+    const first = node;
+    nodePos.push(p.segments[0]!.a);
+    free[node] = p.closed ? 0 : 1;
+    pathOfNode[node++] = pi;
+    for (let i = 0; i < n; i++) {
+      const s = p.segments[i]!;
+      const e = 2 * segments.length;
       segments.push(s);
       types.push(p.ruleType as PricedRuleType);
-      if (i === 0) {
-        nodePos.push(s.a);
-        free.push(!p.closed);
-        pathOfNode.push(pi);
-      }
-      const last = i === n - 1;
-      if (!(last && p.closed)) {
+      nodeOfEnd[e] = first + i;
+      if (i === n - 1 && p.closed) {
+        nodeOfEnd[e + 1] = first;
+      } else {
+        nodeOfEnd[e + 1] = node;
         nodePos.push(s.b);
-        free.push(last);
-        pathOfNode.push(pi);
+        free[node] = i === n - 1 ? 1 : 0;
+        pathOfNode[node++] = pi;
       }
-      nodeOfEnd.push(first + i, last && p.closed ? first : first + i + 1);
-    });
-  });
+    }
+  }
 
   // Join free ends: to the nearest fixed node (another path's inner vertex) within the
   // tolerance if there is one, else together. Each free end joins once, so a run of near
   // points does not collapse into one node.
-  const rep = nodePos.map((_, i) => i);
-  if (nodePos.length > 0) {
-    const index = new KDBush(nodePos.length);
+  const rep = new Int32Array(nodeCount);
+  for (let i = 0; i < nodeCount; i++) rep[i] = i;
+  if (nodeCount > 0) {
+    const index = new KDBush(nodeCount);
     for (const p of nodePos) index.add(p.x, p.y);
     index.finish();
-    const joined = free.map(() => false);
-    for (let f = 0; f < nodePos.length; f++) {
+    const joined = new Uint8Array(nodeCount);
+    for (let f = 0; f < nodeCount; f++) {
       if (!free[f] || joined[f]) continue;
       // Only other paths' nodes: a path's own fine vertices must not swallow its end (a path
       // closing on itself was found when it was read).
-      const near = index.within(nodePos[f]!.x, nodePos[f]!.y, tol).filter((g) => pathOfNode[g] !== pathOfNode[f]);
+      const own = pathOfNode[f];
+      const at = nodePos[f]!;
+      const near = index.within(at.x, at.y, tol);
       let target = f;
       let best = Infinity;
       for (const g of near) {
-        const d = dist(nodePos[g]!, nodePos[f]!);
-        if (!free[g] && d < best) {
+        if (pathOfNode[g] === own || free[g]) continue;
+        const d = dist(nodePos[g]!, at);
+        if (d < best) {
           best = d;
           target = g;
         }
       }
-      for (const g of [f, ...near]) {
-        if (free[g] && !joined[g]) {
-          joined[g] = true;
+      joined[f] = 1;
+      rep[f] = target;
+      for (const g of near) {
+        if (pathOfNode[g] !== own && free[g] && !joined[g]) {
+          joined[g] = 1;
           rep[g] = target;
         }
       }
     }
   }
   // Renumber the nodes that remain.
-  const id = new Int32Array(nodePos.length).fill(-1);
+  const id = new Int32Array(nodeCount).fill(-1);
   const pos: Pt[] = [];
-  rep.forEach((r) => {
+  for (let i = 0; i < nodeCount; i++) {
+    const r = rep[i]!;
     if (id[r] === -1) {
       id[r] = pos.length;
       pos.push(nodePos[r]!);
     }
-  });
-  const ends = Int32Array.from(nodeOfEnd, (n) => id[rep[n]!]!);
+  }
+  const ends = new Int32Array(nodeOfEnd.length);
+  for (let e = 0; e < ends.length; e++) ends[e] = id[rep[nodeOfEnd[e]!]!]!;
 
   const endStart = new Int32Array(pos.length + 1);
-  for (const n of ends) endStart[n + 1]!++;
+  for (let e = 0; e < ends.length; e++) endStart[ends[e]! + 1]!++;
   for (let n = 0; n < pos.length; n++) endStart[n + 1]! += endStart[n]!;
   const fill = endStart.slice(0, pos.length);
   const endsAt = new Int32Array(ends.length);
-  ends.forEach((n, e) => (endsAt[fill[n]!++] = e));
+  for (let e = 0; e < ends.length; e++) endsAt[fill[ends[e]!]!++] = e;
 
   const net: Network = {
     segments,
