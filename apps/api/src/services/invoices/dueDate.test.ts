@@ -16,6 +16,8 @@ describe('due dates', () => {
     expect(() => dueDateFor(printer('Net 30 EOM', null), '2026-12-05')).toThrow(
       /Lakeside Print has not set how many days it takes to pay \(its terms read "Net 30 EOM"\)/,
     );
-    expect(() => dueDateFor(printer(null, null), '2026-12-05')).toThrow(/set their payment days/);
+    expect(() => dueDateFor(printer(null, null), '2026-12-05')).toThrow(
+      /state their payment terms in days \(such as "Net 30"\)/,
+    );
   });
 });

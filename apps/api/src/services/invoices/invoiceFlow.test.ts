@@ -151,6 +151,24 @@ describe('an invoice from raising to payment', () => {
     });
   });
 
+  it('lets differences within the printer’s tolerance through unflagged', async () => {
+    const { w, requestId, shop, purchasing, today } = await shippedJob();
+    await Organisation.query().findById(w.printer.id).patch({ invoiceToleranceCents: 2_500 });
+    await receive(w, requestId);
+    const lines = (shippingCents: number) => [
+      { orderLine: 0, label: 'Die', amountCents: 80_000 },
+      { orderLine: 1, label: 'Shipping', amountCents: shippingCents },
+    ];
+    // 25.00 over on shipping is within a 25.00 tolerance; 25.01 is not.
+    const invoice = await raiseInvoice(deps, shop, requestId, { invoiceDate: today, lines: lines(6_000) });
+    expect((await matchOfRequest(knex, purchasing, requestId)).match).toMatchObject({ matched: true, flags: [] });
+    await disputeInvoice(deps, purchasing, invoice.id, 'Resend with the freight receipt.');
+    await reviseInvoice(deps, shop, invoice.id, { invoiceDate: today, lines: lines(6_001) });
+    expect((await matchOfRequest(knex, purchasing, requestId)).match.flags).toEqual([
+      'Shipping: Ground invoiced $25.01 over the PO',
+    ]);
+  });
+
   it('asks the printer to set its payment days when its terms name none', async () => {
     const { requestId, shop, today } = await shippedJob('Net 30 EOM');
     await expect(raiseInvoice(deps, shop, requestId, { invoiceDate: today })).rejects.toMatchObject({
