@@ -77,6 +77,7 @@ export const PaymentInput = z.object({
   reference: z.string({ error: 'Enter the payment reference' }).trim().min(1, 'Enter the payment reference').max(200),
   amountCents: z.number({ error: 'Enter the amount paid' }).int('Whole minor units').min(1).max(MAX_CENTS),
 });
+export type PaymentInput = z.infer<typeof PaymentInput>;
 
 export interface InvoicePaymentDto {
   paidOn: string;

@@ -1,4 +1,4 @@
-import type { CreditNoteInput, InvoiceInput } from '@kerfmark/contracts';
+import type { CreditNoteInput, InvoiceInput, PaymentInput } from '@kerfmark/contracts';
 import type { AuthUser } from '../auth/passport';
 import type { ServiceDeps } from './deps';
 import { creditInvoice } from './invoices/creditNote';
@@ -6,7 +6,7 @@ import { toInvoiceDto } from './invoices/invoiceDto';
 import { printerPaymentRecord, shopPaymentRecords } from './invoices/paymentRecords';
 import { raiseInvoice, reviseInvoice } from './invoices/raiseInvoice';
 import { invoiceById, invoicesOfRequest, matchOfRequest } from './invoices/readInvoices';
-import { recordPayment, type PaymentInput } from './invoices/recordPayment';
+import { recordPayment } from './invoices/recordPayment';
 import { approveInvoice, disputeInvoice } from './invoices/settleInvoice';
 
 /** The shop's invoice against a purchase order, the three-way match, approval and payment. */

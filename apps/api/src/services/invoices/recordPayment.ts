@@ -1,3 +1,4 @@
+import type { PaymentInput } from '@kerfmark/contracts';
 import { formatMoney } from '@kerfmark/pricing';
 import type { AuthUser } from '../../auth/passport';
 import { badRequest } from '../../lib/httpError';
@@ -7,12 +8,6 @@ import { auditInvoice } from './auditInvoice';
 import type { ServiceDeps } from '../deps';
 import { settleStep } from './settleInvoice';
 import { tellInvoice } from './tellInvoice';
-
-export interface PaymentInput {
-  paidOn: string;
-  reference: string;
-  amountCents: number;
-}
 
 /**
  * Purchasing records the payment of an approved invoice: the amount due is the invoice's total

@@ -28,7 +28,7 @@ export async function tellInvoice(
       kind,
       title,
       body: (reader) => text(formatMoney({ cents, currency: invoice.currency }, reader.locale), what).body,
-      link: `/requests/${invoice.requestId}/invoices`,
+      link: `/requests/${invoice.requestId}`,
     },
     toPrinter ? ['purchasing', 'admin'] : undefined,
   );
