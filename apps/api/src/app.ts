@@ -18,6 +18,7 @@ import { meRoutes } from './routes/meRoutes';
 import { awardRoutes } from './routes/awardRoutes';
 import { bidRoutes } from './routes/bidRoutes';
 import { fulfilmentRoutes } from './routes/fulfilmentRoutes';
+import { invoiceRoutes } from './routes/invoiceRoutes';
 import { fileRoutes } from './routes/fileRoutes';
 import { notificationRoutes } from './routes/notificationRoutes';
 import { libraryRoutes } from './routes/libraryRoutes';
@@ -82,6 +83,7 @@ export function createApp(deps: AppDeps): Express {
   api.use(rateCardRoutes(services, requireAuth));
   api.use(awardRoutes(services, requireAuth));
   api.use(fulfilmentRoutes(services, requireAuth));
+  api.use(invoiceRoutes(services, requireAuth));
   api.use(libraryRoutes(services, requireAuth));
   api.use(openRequestRoutes(services, requireAuth));
   api.use(notFoundHandler);

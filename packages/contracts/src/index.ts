@@ -25,3 +25,4 @@ export * from './holidays';
 export * from './dieFit';
 export * from './shopChoices';
 export * from './wallClock';
+export * from './invoices';

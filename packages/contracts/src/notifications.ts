@@ -18,6 +18,10 @@ export const notificationKindLabels = {
   need_by_7d: 'A die is needed in 7 days',
   need_by_2d: 'A die is needed in 2 days',
   late_shipment: 'A die is late',
+  invoice_raised: 'A die shop sent an invoice or credit note',
+  invoice_disputed: 'A printer disputed your invoice',
+  invoice_approved: 'A printer approved your invoice for payment',
+  invoice_paid: 'A printer paid your invoice',
 } as const;
 export type NotificationKind = keyof typeof notificationKindLabels;
 export const notificationKinds = Object.keys(notificationKindLabels) as NotificationKind[];

@@ -40,6 +40,17 @@ export const statusActions = [
   'receive',
 ] as const;
 export type StatusAction = (typeof statusActions)[number];
+/** What one may do with the invoices of a request's purchase order. */
+export const invoiceActions = [
+  'see-invoice',
+  'raise-invoice',
+  'credit-note',
+  'dispute-invoice',
+  'approve-invoice',
+  'record-payment',
+] as const;
+export type InvoiceAction = (typeof invoiceActions)[number];
+
 /** Everything one may do with a request; the API's answer lists those open to the reader now. */
 export const requestActions = [
   ...statusActions,
@@ -53,6 +64,7 @@ export const requestActions = [
   'withdraw',
   'ask',
   'decline',
+  ...invoiceActions,
 ] as const;
 export type RequestAction = (typeof requestActions)[number];
 

@@ -29,8 +29,14 @@ describe('request status transitions', () => {
           expect(transitionRefusal(purchasing, to(status), action).refusal?.message).toMatch(/cannot be moved/);
       }
     }
-    expect(openActions(purchasing, to('received'), NOW)).toEqual(['answer']);
-    expect(openActions(purchasing, to('cancelled'), NOW)).toEqual(['answer']);
+    expect(openActions(purchasing, to('received'), NOW)).toEqual([
+      'answer',
+      'see-invoice',
+      'dispute-invoice',
+      'approve-invoice',
+      'record-payment',
+    ]);
+    expect(openActions(purchasing, to('cancelled'), NOW)).toEqual(['answer', 'see-invoice']);
   });
 
   it('never leads back to bidding once the bids are opened', () => {
@@ -66,7 +72,7 @@ describe('the actions open now', () => {
       'move-deadline-earlier',
       'move-deadline-later',
     ]);
-    expect(openActions(winner, to('awarded'), NOW)).toEqual(['start-production']);
+    expect(openActions(winner, to('awarded'), NOW)).toEqual(['start-production', 'see-invoice']);
     expect(openActions(loser, to('awarded'), NOW)).toEqual([]);
   });
 

@@ -9,6 +9,7 @@ import {
 import type { Refusal } from './deadline';
 import { isAwardedShop, isBidder, isOwner, isPurchasing, type Actor, type RequestFacts } from './facts';
 import { biddingOpen } from './sealed';
+import { invoiceActionRefusal } from './invoiceRules';
 import { maySee } from './visibility';
 
 export type { RequestAction, StatusAction };
@@ -104,6 +105,13 @@ export function actionRefusal(actor: Actor, f: RequestFacts, action: RequestActi
       if (f.awardedShopId !== null) return { status: 409, message: 'This request has already been awarded.' };
       return transitionRefusal(actor, f, 'award').refusal ?? null;
     }
+    case 'see-invoice':
+    case 'raise-invoice':
+    case 'credit-note':
+    case 'dispute-invoice':
+    case 'approve-invoice':
+    case 'record-payment':
+      return invoiceActionRefusal(actor, f, action);
     default: {
       return transitionRefusal(actor, f, action).refusal ?? null;
     }

@@ -11,3 +11,4 @@ export { refuse, assertMay } from './refuse';
 export { presentToOwner } from './presentToOwner';
 export { presentToShop } from './presentToShop';
 export { questionDto } from './presentRequest';
+export { invoiceActionRefusal, invoiceStepRefusal, type InvoiceStep } from './invoiceRules';

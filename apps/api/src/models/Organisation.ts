@@ -28,6 +28,10 @@ export class Organisation extends Model {
   contactEmail!: string | null;
   // A printer's.
   paymentTerms!: string | null;
+  /** The printer's own net days for invoices; null reads them from `paymentTerms` (migration 20261205000100). */
+  paymentNetDays!: number | null;
+  /** The largest difference the three-way match lets through unflagged, in minor units. */
+  invoiceToleranceCents!: number;
   deliveryPoints!: DeliveryPoint[];
   // A die shop's capabilities; null where not stated.
   dieKinds!: DieKind[];

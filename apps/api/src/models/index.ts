@@ -12,3 +12,5 @@ export { Bid } from './Bid';
 export { BidRevision } from './BidRevision';
 export { Notification } from './Notification';
 export { ShopHoliday } from './ShopHoliday';
+export { Invoice } from './Invoice';
+export { InvoicePayment } from './InvoicePayment';

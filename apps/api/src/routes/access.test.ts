@@ -19,6 +19,7 @@ import {
 import { addDieline, callAs, createReadyDraft, createRequestAt, type StagedRequest } from '../test/requestStages';
 import { routeList } from '../test/routeList';
 import { aRateCard } from '../test/aRateCard';
+import { createInvoiceAt, invoiceToday, netThirty, type StagedInvoice } from '../test/invoiceStages';
 
 type Actor = 'anonymous' | 'buyer' | 'purchasing' | 'printerAdmin' | 'estimator' | 'shopAdmin';
 type ForEach<T> = Record<Actor, T>;
@@ -111,6 +112,14 @@ interface Fixtures {
   toStart: ForEach<number>;
   toShip: ForEach<number>;
   toReceive: ForEach<number>;
+  /** A shipped die's invoice awaiting approval, for the reads. */
+  invoiced: StagedInvoice;
+  toInvoice: ForEach<number>;
+  toRevise: ForEach<StagedInvoice>;
+  toCredit: ForEach<StagedInvoice>;
+  toDispute: ForEach<StagedInvoice>;
+  toApprove: ForEach<StagedInvoice>;
+  toPay: ForEach<StagedInvoice>;
 }
 const fixtures = new WeakMap<World, Fixtures>();
 const fx = (w: World): Fixtures => {
@@ -548,6 +557,77 @@ const cases: RouteCase[] = [
     expect: printers(200),
   },
 
+  // Invoices: the awarded shop raises them; the printer's purchasing and admins settle them; a
+  // print buyer sees their status only.
+  {
+    name: 'GET /api/requests/:id/invoices',
+    send: (w) => request(app).get(`/api/requests/${fx(w).invoiced.requestId}/invoices`),
+    expect: everyone(200),
+  },
+  {
+    name: 'POST /api/requests/:id/invoices',
+    send: (w, actor) =>
+      request(app)
+        .post(`/api/requests/${fx(w).toInvoice[actor]}/invoices`)
+        .send({ invoiceDate: invoiceToday(w) }),
+    expect: shops(201),
+  },
+  {
+    name: 'GET /api/requests/:id/invoice-match',
+    send: (w) => request(app).get(`/api/requests/${fx(w).invoiced.requestId}/invoice-match`),
+    expect: { ...everyone(200), buyer: 403 },
+  },
+  {
+    name: 'GET /api/invoices/:id',
+    send: (w) => request(app).get(`/api/invoices/${fx(w).invoiced.invoiceId}`),
+    expect: everyone(200),
+  },
+  {
+    name: 'POST /api/invoices/:id/revisions',
+    send: (w, actor) =>
+      request(app)
+        .post(`/api/invoices/${fx(w).toRevise[actor].invoiceId}/revisions`)
+        .send({ invoiceDate: invoiceToday(w) }),
+    expect: shops(201),
+  },
+  {
+    name: 'POST /api/invoices/:id/credit-notes',
+    send: (w, actor) =>
+      request(app)
+        .post(`/api/invoices/${fx(w).toCredit[actor].invoiceId}/credit-notes`)
+        .send({ invoiceDate: invoiceToday(w), lines: [{ orderLine: 1, label: 'Shipping', amountCents: -500 }] }),
+    expect: shops(201),
+  },
+  {
+    name: 'POST /api/invoices/:id/dispute',
+    send: (w, actor) =>
+      request(app)
+        .post(`/api/invoices/${fx(w).toDispute[actor].invoiceId}/dispute`)
+        .send({ reason: 'Our PO number is missing' }),
+    expect: printers(200, { buyer: 403 }),
+  },
+  {
+    name: 'POST /api/invoices/:id/approve',
+    send: (w, actor) =>
+      request(app)
+        .post(`/api/invoices/${fx(w).toApprove[actor].invoiceId}/approve`)
+        .send({ reason: 'Die checked at the dock' }),
+    expect: printers(200, { buyer: 403 }),
+  },
+  {
+    name: 'POST /api/invoices/:id/payments',
+    send: (w, actor) =>
+      request(app)
+        .post(`/api/invoices/${fx(w).toPay[actor].invoiceId}/payments`)
+        .send({ paidOn: invoiceToday(w), reference: 'ACH 5521', amountCents: 83_500 }),
+    expect: printers(201, { buyer: 403 }),
+  },
+  {
+    name: 'GET /api/invoice-record',
+    send: () => request(app).get('/api/invoice-record'),
+    expect: { ...everyone(200), buyer: 403 },
+  },
+
   // The printer's price history: every printer role reads it; purchasing and admins import.
   { name: 'GET /api/price-history', send: () => request(app).get('/api/price-history'), expect: printers(200) },
   {
@@ -695,6 +775,21 @@ async function setUp(w: World): Promise<Fixtures> {
     toStart: await oneEach(shopSide, async () => (await createRequestAt(w, 'awarded')).id),
     toShip: await oneEach(shopSide, async () => (await createRequestAt(w, 'in_production')).id),
     toReceive: await oneEach(printerSide, async () => (await createRequestAt(w, 'shipped')).id),
+    ...(await invoiceFixtures(w)),
+  };
+}
+
+/** The invoices the matrix acts on; the world's printer pays on Net 30. */
+async function invoiceFixtures(w: World) {
+  await netThirty(w);
+  return {
+    invoiced: await createInvoiceAt(w, 'submitted'),
+    toInvoice: await oneEach(shopSide, async () => (await createRequestAt(w, 'shipped')).id),
+    toRevise: await oneEach(shopSide, () => createInvoiceAt(w, 'disputed')),
+    toCredit: await oneEach(shopSide, () => createInvoiceAt(w, 'disputed')),
+    toDispute: await oneEach(printerSide, () => createInvoiceAt(w, 'submitted')),
+    toApprove: await oneEach(printerSide, () => createInvoiceAt(w, 'submitted')),
+    toPay: await oneEach(printerSide, () => createInvoiceAt(w, 'approved')),
   };
 }
 
@@ -703,7 +798,7 @@ let world: World;
 beforeAll(async () => {
   world = await createWorld();
   fixtures.set(world, await setUp(world));
-});
+}, 180_000);
 
 /**
  * The request routes whose answer the access module gives: the action asked, the request it is
@@ -759,6 +854,42 @@ const byModule: Record<string, ModuleCase> = {
   },
   'POST /api/requests/:id/ship': { action: 'ship', target: (f, a) => f.toShip[a], kind: shopKind, ok: 200 },
   'POST /api/requests/:id/receive': { action: 'receive', target: (f, a) => f.toReceive[a], kind: printerKind, ok: 200 },
+  'POST /api/requests/:id/invoices': {
+    action: 'raise-invoice',
+    target: (f, a) => f.toInvoice[a],
+    kind: shopKind,
+    ok: 201,
+  },
+  'POST /api/invoices/:id/revisions': {
+    action: 'raise-invoice',
+    target: (f, a) => f.toRevise[a].requestId,
+    kind: shopKind,
+    ok: 201,
+  },
+  'POST /api/invoices/:id/credit-notes': {
+    action: 'credit-note',
+    target: (f, a) => f.toCredit[a].requestId,
+    kind: shopKind,
+    ok: 201,
+  },
+  'POST /api/invoices/:id/dispute': {
+    action: 'dispute-invoice',
+    target: (f, a) => f.toDispute[a].requestId,
+    kind: printerKind,
+    ok: 200,
+  },
+  'POST /api/invoices/:id/approve': {
+    action: 'approve-invoice',
+    target: (f, a) => f.toApprove[a].requestId,
+    kind: printerKind,
+    ok: 200,
+  },
+  'POST /api/invoices/:id/payments': {
+    action: 'record-payment',
+    target: (f, a) => f.toPay[a].requestId,
+    kind: printerKind,
+    ok: 201,
+  },
 };
 
 /** What the access module answers for a signed-in actor, before the route is called. */

@@ -18,6 +18,7 @@ import { createPriceHistoryService } from './priceHistoryService';
 import { createLibraryService } from './libraryService';
 import { createRateCardService } from './rateCardService';
 import { createHolidayService } from './holidayService';
+import { createInvoiceService } from './invoiceService';
 
 export function createServices(deps: ServiceDeps, limiter: LoginLimiter) {
   const requests = createRequestService(deps);
@@ -32,6 +33,7 @@ export function createServices(deps: ServiceDeps, limiter: LoginLimiter) {
     awards: createAwardService(deps, requests, purchaseDocuments),
     purchaseDocuments,
     fulfilment: createFulfilmentService(deps, { requests, library, priceHistory }),
+    invoices: createInvoiceService(deps),
     dashboard: createDashboardService(deps, priceHistory),
     priceHistory,
     auth: createAuthService(deps, limiter),

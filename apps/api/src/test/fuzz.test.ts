@@ -3,7 +3,12 @@ import request from 'supertest';
 import { beforeAll, describe, expect, it } from 'vitest';
 import {
   AnswerCreate,
+  ApproveInput,
   AwardInput,
+  CreditNoteInput,
+  DisputeInput,
+  InvoiceInput,
+  PaymentInput,
   BidInput,
   DeclineInput,
   DieRequestCreate,
@@ -53,6 +58,8 @@ import {
 } from './harness';
 import { routeList, routesReadingQuery } from './routeList';
 import { aRateCard } from './aRateCard';
+import { createInvoiceAt, invoiceToday, netThirty } from './invoiceStages';
+import { createRequestAt } from './requestStages';
 
 // Property-based bad input (fast-check) at every route that takes input: JSON bodies, query-string
 // filters and path parameters. Whatever arrives, no route answers 500, and every refusal says why.
@@ -276,6 +283,59 @@ const cases: Record<string, Case> = {
     body: { example: () => ({ trackingNote: 'Parcel, tracking 1Z999' }), schema: ShipInput },
   },
   'GET /api/purchase-orders/:id/pdf': { as: 'purchasing', params: id('purchaseOrder') },
+  'GET /api/requests/:id/invoices': { as: 'purchasing', params: id('invoicedRequest') },
+  'GET /api/requests/:id/invoice-match': { as: 'purchasing', params: id('invoicedRequest') },
+  'GET /api/invoices/:id': { as: 'estimator', params: id('invoice') },
+  'POST /api/requests/:id/invoices': {
+    as: 'estimator',
+    params: id('toInvoice'),
+    body: {
+      example: () => ({
+        invoiceDate: invoiceToday(w),
+        taxRateBp: 825,
+        dies: 1,
+        lines: [
+          { orderLine: 0, label: 'Die', amountCents: 80_000 },
+          { orderLine: null, label: 'Rush', amountCents: 2_500, reason: 'Approved change' },
+        ],
+      }),
+      schema: InvoiceInput,
+    },
+  },
+  'POST /api/invoices/:id/revisions': {
+    as: 'estimator',
+    params: id('disputedInvoice'),
+    body: { example: () => ({ invoiceDate: invoiceToday(w), taxRateBp: 0 }), schema: InvoiceInput },
+  },
+  'POST /api/invoices/:id/credit-notes': {
+    as: 'estimator',
+    params: id('creditableInvoice'),
+    body: {
+      example: () => ({
+        invoiceDate: invoiceToday(w),
+        lines: [{ orderLine: 1, label: 'Shipping', amountCents: -100, reason: 'Overbilled' }],
+      }),
+      schema: CreditNoteInput,
+    },
+  },
+  'POST /api/invoices/:id/dispute': {
+    as: 'purchasing',
+    params: id('invoice'),
+    body: { example: () => ({ reason: 'Wrong PO number' }), schema: DisputeInput },
+  },
+  'POST /api/invoices/:id/approve': {
+    as: 'purchasing',
+    params: id('approvableInvoice'),
+    body: { example: () => ({ reason: 'Checked' }), schema: ApproveInput },
+  },
+  'POST /api/invoices/:id/payments': {
+    as: 'purchasing',
+    params: id('payableInvoice'),
+    body: {
+      example: () => ({ paidOn: invoiceToday(w), reference: 'ACH 9', amountCents: 83_500 }),
+      schema: PaymentInput,
+    },
+  },
   'GET /api/library/:id': { as: 'buyer', params: id('libraryDie') },
   'PATCH /api/library/:id': {
     as: 'buyer',
@@ -399,6 +459,15 @@ beforeAll(async () => {
     title: 'Bids ready',
     body: 'Two bids',
   });
+  await netThirty(w);
+  const invoiced = await createInvoiceAt(w, 'submitted');
+  f.invoicedRequest = invoiced.requestId;
+  f.invoice = invoiced.invoiceId;
+  f.toInvoice = (await createRequestAt(w, 'shipped')).id;
+  f.disputedInvoice = (await createInvoiceAt(w, 'disputed')).invoiceId;
+  f.creditableInvoice = (await createInvoiceAt(w, 'disputed')).invoiceId;
+  f.approvableInvoice = (await createInvoiceAt(w, 'submitted')).invoiceId;
+  f.payableInvoice = (await createInvoiceAt(w, 'approved')).invoiceId;
   f.libraryDie = await inserted('libraryDies', {
     organisationId: w.printer.id,
     name: 'Sleeve die',
@@ -406,7 +475,7 @@ beforeAll(async () => {
     ruleTypes: ['cut'],
     impressionLimit: 100_000,
   });
-}, 60_000);
+}, 180_000);
 
 const shapeKeys = (schema?: { shape: object }) => Object.keys(schema?.shape ?? {});
 
