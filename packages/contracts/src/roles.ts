@@ -1,11 +1,14 @@
 // The kinds of organisation and the roles, with their names; their schemas are in roleSchemas.ts, so that
 // the web app's first load, which shows these names, carries no zod.
-import type { OrgKind, Role } from './roleSchemas';
 
 /** The two kinds of organisation on Kerfmark. */
 export const orgKinds = ['printer', 'die_shop'] as const;
 
 export const roles = ['buyer', 'purchasing', 'estimator', 'admin'] as const;
+
+// The same unions as the schemas' types in roleSchemas.ts, which imports the lists from here.
+type OrgKind = (typeof orgKinds)[number];
+type Role = (typeof roles)[number];
 
 /** Which roles an organisation of each kind may give its users. */
 export const rolesByOrgKind: Record<OrgKind, readonly Role[]> = {
