@@ -58,7 +58,9 @@ export class ProcessHarness {
 
   /** Starts an app process with the test stack's environment and the overrides given. */
   start(entry: string, env: Record<string, string | undefined>): Run {
-    const child = spawn(process.execPath, [TSX, entry], {
+    // Node runs the entry itself with tsx's loader: through tsx's command there would be a second
+    // process, which a kill of the first leaves running after the tests.
+    const child = spawn(process.execPath, ['--import', 'tsx', entry], {
       cwd: repoRoot,
       env: { ...process.env, ...env },
       stdio: ['ignore', 'pipe', 'pipe'],
