@@ -62,6 +62,6 @@ describe('fieldsNotFor', () => {
   it('keeps printers to printer fields and die shops to capabilities', () => {
     expect(fieldsNotFor('printer')).toContain('dieKinds');
     expect(fieldsNotFor('printer')).not.toContain('paymentTerms');
-    expect(fieldsNotFor('die_shop')).toEqual(['paymentTerms', 'deliveryPoints']);
+    expect(fieldsNotFor('die_shop')).toEqual(['paymentTerms', 'paymentNetDays', 'deliveryPoints']);
   });
 });

@@ -77,6 +77,13 @@ const ProfileFields = z.object({
     .nullable(),
   // Printers.
   paymentTerms: optionalText('the payment terms', 120),
+  /** Days from an invoice's date to its due date; when not set, the days the payment terms name ("Net 30"). */
+  paymentNetDays: z
+    .number({ error: 'Enter the days to pay as a whole number' })
+    .int('Enter whole days')
+    .min(0, 'At least 0 days (due on receipt)')
+    .max(365, 'At most 365 days')
+    .nullable(),
   deliveryPoints: z
     .array(DeliveryPoint, { error: 'Enter the delivery points' })
     .max(30, 'At most 30 delivery points')
@@ -93,7 +100,7 @@ const ProfileFields = z.object({
   laserCutBoards: yesNo('cuts its die boards by laser'),
 });
 
-export const printerProfileFields = ['paymentTerms', 'deliveryPoints'] as const;
+export const printerProfileFields = ['paymentTerms', 'paymentNetDays', 'deliveryPoints'] as const;
 export const dieShopProfileFields = [
   'dieKinds',
   'maxBoardWidthIn',
@@ -131,6 +138,7 @@ interface ProfileCommon {
 export interface PrinterProfileDto extends ProfileCommon {
   kind: 'printer';
   paymentTerms: string | null;
+  paymentNetDays: number | null;
   deliveryPoints: DeliveryPoint[];
 }
 

@@ -13,7 +13,13 @@ export function toOrganisationProfile(org: Organisation, editable: boolean): Org
     editable,
   };
   if (org.kind === 'printer') {
-    return { ...common, kind: 'printer', paymentTerms: org.paymentTerms, deliveryPoints: org.deliveryPoints };
+    return {
+      ...common,
+      kind: 'printer',
+      paymentTerms: org.paymentTerms,
+      paymentNetDays: org.paymentNetDays,
+      deliveryPoints: org.deliveryPoints,
+    };
   }
   return {
     ...common,

@@ -31,6 +31,7 @@ describe('the organisation profile', () => {
       officeAddress: 'ul. Wymyślona 12\nŁódź',
       contactEmail: 'Biuro@Lodz.example',
       paymentTerms: 'Net 30',
+      paymentNetDays: 45,
       deliveryPoints: [
         { name: 'Dock 1', address: '1 Mill Road', postcode: '60614' },
         { name: 'Finishing hall', address: '3 Mill Road\nGate B' },

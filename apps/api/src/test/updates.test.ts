@@ -149,6 +149,7 @@ const cases: Record<string, UpdateCase> = {
           officeAddress: '1 Mill Road',
           contactEmail: 'first@test.example',
           paymentTerms: 'Net 30',
+          paymentNetDays: 30,
           deliveryPoints: JSON.stringify([{ name: 'Dock 1', address: '1 Mill Road', postcode: '60614' }]),
         });
       return w.printer.id;
@@ -159,6 +160,7 @@ const cases: Record<string, UpdateCase> = {
       postcode: '60615',
       contactEmail: 'second@test.example',
       paymentTerms: 'Net 45',
+      paymentNetDays: 21,
       deliveryPoints: [{ name: 'Dock 2', address: '2 Mill Road', postcode: '60615' }],
     }),
     read: async (id) => withoutClock(await knex('organisations').where({ id }).first()),

@@ -12,6 +12,7 @@ const printer: PrinterProfileDto = {
   contactEmail: null,
   editable: true,
   paymentTerms: 'Net 30',
+  paymentNetDays: null,
   deliveryPoints: [{ name: 'Dock 2', address: '2150 Thistlecombe Row', postcode: null }],
 };
 const shop: DieShopProfileDto = {

@@ -15,6 +15,8 @@ export interface ProfileForm {
   postcode: string;
   contactEmail: string;
   paymentTerms: string;
+  /** Undefined while the box is empty. */
+  paymentNetDays: number | undefined;
   deliveryPoints: Array<{ name: string; address: string; postcode: string }>;
   dieKinds: DieKind[];
   /** Undefined while the box is empty, as ant-design-vue's number input has it. */
@@ -34,6 +36,7 @@ const emptyForm = (): ProfileForm => ({
   postcode: '',
   contactEmail: '',
   paymentTerms: '',
+  paymentNetDays: undefined,
   deliveryPoints: [],
   dieKinds: [],
   maxBoardWidthIn: undefined,
@@ -57,6 +60,7 @@ export function profileToForm(profile: OrganisationProfileDto): ProfileForm {
     return {
       ...base,
       paymentTerms: text(profile.paymentTerms),
+      paymentNetDays: profile.paymentNetDays ?? undefined,
       deliveryPoints: profile.deliveryPoints.map((p) => ({ ...p, postcode: text(p.postcode) })),
     };
   }

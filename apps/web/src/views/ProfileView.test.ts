@@ -22,6 +22,7 @@ const printer: PrinterProfileDto = {
   contactEmail: 'biuro@lodz.example',
   editable: true,
   paymentTerms: 'Net 30',
+  paymentNetDays: null,
   deliveryPoints: [{ name: 'Dock 2', address: '2150 Thistlecombe Row', postcode: '60614' }],
 };
 const shop: DieShopProfileDto = {

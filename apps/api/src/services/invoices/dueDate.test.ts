@@ -17,7 +17,7 @@ describe('due dates', () => {
       /Lakeside Print has not set how many days it takes to pay \(its terms read "Net 30 EOM"\)/,
     );
     expect(() => dueDateFor(printer(null, null), '2026-12-05')).toThrow(
-      /state their payment terms in days \(such as "Net 30"\)/,
+      /set their days to pay, or terms in days such as "Net 30"/,
     );
   });
 });

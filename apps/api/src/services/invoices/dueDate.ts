@@ -14,7 +14,7 @@ export function dueDateFor(printer: Organisation, invoiceDate: string): string {
       'payment_days_missing',
       `${printer.name} has not set how many days it takes to pay` +
         (printer.paymentTerms ? ` (its terms read "${printer.paymentTerms}")` : '') +
-        ': ask them to state their payment terms in days (such as "Net 30") in their organisation’s profile, then send the invoice.',
+        ': ask them to set their days to pay, or terms in days such as "Net 30", in their organisation’s profile, then send the invoice.',
     );
   return dueDateOf(invoiceDate, netDays);
 }
