@@ -35,6 +35,12 @@ export async function listOwnRequests(
   return { items: result.results.map(toSummary), total: result.total, page: q.page, pageSize: q.pageSize };
 }
 
+/** Miles from a shop's centre to a postcode, or null when either is not placed by the dataset. */
+function milesTo(from: LatLon | null, postcode: string | null): number | null {
+  const centre = from && postcodeCentre(postcode);
+  return centre ? distanceMiles(from!, centre) : null;
+}
+
 /** The distances from a shop to each delivery postcode of the open requests that the dataset places. */
 async function deliveryMiles(knex: Knex, from: LatLon | null): Promise<Array<{ postcode: string; miles: number }>> {
   if (!from) return [];
@@ -43,8 +49,8 @@ async function deliveryMiles(knex: Knex, from: LatLon | null): Promise<Array<{ p
     .whereNotNull('deliveryPostcode')
     .distinct('deliveryPostcode');
   return postcodes.flatMap(({ deliveryPostcode: postcode }) => {
-    const centre = postcodeCentre(postcode);
-    return centre ? [{ postcode, miles: distanceMiles(from, centre) }] : [];
+    const miles = milesTo(from, postcode);
+    return miles === null ? [] : [{ postcode, miles }];
   });
 }
 
@@ -61,10 +67,6 @@ export async function openRequestsFor(
   const from = postcodeCentre(actor.orgPostcode);
   const miles = q.sort.replace('-', '') === 'distance' ? await deliveryMiles(knex, from) : null;
   const { rows, version } = await openRequestsPage(knex, actor, q, miles);
-  const milesTo = (postcode: string | null) => {
-    const centre = from && postcodeCentre(postcode);
-    return centre ? distanceMiles(from, centre) : null;
-  };
   const roundMiles = (miles: number | null) => (miles === null ? null : Math.round(miles));
   // Each row written out field by field: the answer carries exactly what the board shows.
   const items = rows.map((row): OpenRequestRow => ({
@@ -81,7 +83,9 @@ export async function openRequestsFor(
     length: row.length,
     complexity: row.complexity,
     analysisStatus: row.analysisStatus,
-    distanceMiles: roundMiles(row.distanceMiles === undefined ? milesTo(row.deliveryPostcode) : row.distanceMiles),
+    distanceMiles: roundMiles(
+      row.distanceMiles === undefined ? milesTo(from, row.deliveryPostcode) : row.distanceMiles,
+    ),
     declined: row.declined,
     hasBid: row.hasBid,
   }));
